@@ -1,0 +1,8 @@
+package lamella.api;
+
+/**
+ * A geometry bound to its parameters and a stack: the complex response per unit absorbed power (or per unit power
+ * per unit length) at a heating frequency. Thread-safe.
+ */
+public interface GeometryModel extends FrequencyResponse {
+}

@@ -1,0 +1,35 @@
+package lamella.api;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * A measurement method offered as a service: turns the frequency response of a geometry into what the instrument
+ * reports over its x-axis (modulation frequency, pump–probe delay, drive frequency). A case file selects it by
+ * {@link #type()} in {@code measurement.type}.
+ */
+public interface Technique {
+
+    /** The case-file name, such as {@code fdtr}. */
+    String type();
+
+    String summary();
+
+    /** The keys of its case-file block (besides {@code type}). */
+    List<ParameterSpec> parameters();
+
+    /** The response unit it needs from the geometry. */
+    ResponseUnit requiredUnit();
+
+    /** The name of the x column ({@code frequency_hz}, {@code delay_s}); empty for a single steady value. */
+    Optional<String> xColumn();
+
+    /** The names of the signal columns, in output order. */
+    List<String> signalColumns();
+
+    /**
+     * Binds validated parameters. Throws with a JSON path when values do not go together (for example a modulation
+     * frequency above half the repetition rate).
+     */
+    TechniqueModel bind(Parameters parameters) throws InputException;
+}

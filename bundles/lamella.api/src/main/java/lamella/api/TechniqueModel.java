@@ -1,0 +1,15 @@
+package lamella.api;
+
+/** A technique with its settings: evaluates the observables at x values. Thread-safe. */
+public interface TechniqueModel {
+
+    /** The x values the case file asks for (one value, 0, for a steady technique). */
+    double[] xValues();
+
+    /**
+     * The signals at the given x values.
+     *
+     * @return one array per signal column, each as long as {@code x}
+     */
+    double[][] evaluate(double[] x, FrequencyResponse response);
+}
