@@ -31,7 +31,7 @@ public interface StackKernel {
 
     /**
      * Characteristic in-plane wavenumbers (rad/m) of the response at this frequency: inverse layer thicknesses and
-     * inverse thermal penetration depths, sorted ascending and finite. Quadratures place break points at them.
+     * inverse thermal penetration depths, sorted ascending, finite and at least a factor of two apart. Quadratures place break points at them.
      */
     double[] featureWavenumbers(double omega);
 }

@@ -1,0 +1,7 @@
+/**
+ * The layered-stack point response and the spectral quadrature that geometries integrate it with. Plain Java: no
+ * OSGi at run time, so batch jobs and tests use it directly.
+ */
+@org.osgi.annotation.bundle.Export
+@org.osgi.annotation.versioning.Version("0.1.0")
+package lamella.engine;

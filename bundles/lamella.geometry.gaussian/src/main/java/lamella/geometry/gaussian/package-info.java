@@ -1,0 +1,2 @@
+/** Gaussian pump and probe beams, co-axial or offset. Implementation only: nothing exported. */
+package lamella.geometry.gaussian;

@@ -1,0 +1,2 @@
+/** A long strip heater of finite width. Implementation only: nothing exported. */
+package lamella.geometry.line;

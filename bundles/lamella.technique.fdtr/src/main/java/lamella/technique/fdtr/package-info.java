@@ -1,0 +1,2 @@
+/** Frequency-domain thermoreflectance. Implementation only: nothing exported. */
+package lamella.technique.fdtr;

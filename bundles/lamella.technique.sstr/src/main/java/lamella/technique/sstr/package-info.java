@@ -1,0 +1,2 @@
+/** Steady-state thermoreflectance. Implementation only: nothing exported. */
+package lamella.technique.sstr;

@@ -1,0 +1,2 @@
+/** Time-domain thermoreflectance. Implementation only: nothing exported. */
+package lamella.technique.tdtr;
