@@ -1,0 +1,67 @@
+package lamella.cli;
+
+import java.time.Duration;
+import java.util.Map;
+import java.util.function.IntConsumer;
+
+import org.osgi.framework.BundleContext;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+
+/**
+ * Runs the command line of the launcher's launch service against the live {@link Command} services and hands the
+ * exit status back to the launcher. Immediate, so that it starts as soon as the launcher asks; the command runs on
+ * its own thread so that activation never waits for it.
+ */
+@Component(immediate = true)
+public final class CommandDispatcher {
+
+    static final Duration PATIENCE = Duration.ofSeconds(5);
+    static final Duration QUIET = Duration.ofMillis(500);
+
+    private final CommandShelf shelf = new CommandShelf();
+    private IntConsumer launcher;
+    private LaunchRequest request;
+
+    @Reference(target = LaunchRequest.ROLE_FILTER)
+    void bindLauncher(IntConsumer launcher, Map<String, Object> properties) {
+        this.launcher = launcher;
+        this.request = LaunchRequest.from(properties);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeCommand")
+    void addCommand(Command command) {
+        shelf.add(command);
+    }
+
+    void removeCommand(Command command) {
+        shelf.remove(command);
+    }
+
+    @Activate
+    void activate(BundleContext context) {
+        boolean debug = Boolean.parseBoolean(context.getProperty("lamella.debug"));
+        Dispatch dispatch = new Dispatch(shelf, PATIENCE, QUIET, debug);
+        CommandIO io = new CommandIO(System.out, System.err, request.workingDirectory());
+        new Thread(() -> runAndReport(dispatch, io), "lamella-command").start();
+    }
+
+    /** The launcher waits for a status, so one is sent whatever happens. */
+    private void runAndReport(Dispatch dispatch, CommandIO io) {
+        int status = Command.FAILED;
+        try {
+            status = dispatch.run(request.args(), io);
+        } catch (RuntimeException | Error e) {
+            System.err.println("lamella: internal error in the command dispatcher: " + e);
+        } finally {
+            launcher.accept(status);
+        }
+    }
+}

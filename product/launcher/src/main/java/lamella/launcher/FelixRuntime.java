@@ -1,0 +1,102 @@
+package lamella.launcher;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.apache.felix.framework.Felix;
+import org.apache.felix.framework.util.FelixConstants;
+import org.osgi.framework.BundleException;
+import org.osgi.framework.launch.Framework;
+
+/**
+ * A running Lamella runtime: an embedded Felix on a runtime folder ({@code lib/}, {@code bundle/}, {@code plugins/},
+ * {@code conf/}) with every shipped bundle started and FileInstall watching the plugins folder. Tests start it the
+ * same way the launcher does.
+ */
+public final class FelixRuntime implements AutoCloseable {
+
+    private static final long STOP_TIMEOUT_MS = 10_000;
+
+    private final Felix framework;
+    private final StorageArea storage;
+    private final Path pluginsDir;
+    private final List<Path> pluginsAtLaunch;
+    private final List<String> startProblems;
+    private boolean closed;
+
+    private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
+            List<String> startProblems) {
+        this.framework = framework;
+        this.storage = storage;
+        this.pluginsDir = pluginsDir;
+        this.pluginsAtLaunch = pluginsAtLaunch;
+        this.startProblems = startProblems;
+    }
+
+    /**
+     * Starts the runtime in {@code home}.
+     *
+     * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
+     */
+    public static FelixRuntime start(Path home, Map<String, String> overrides) throws IOException, BundleException {
+        StorageArea storage = StorageArea.create();
+        try {
+            Map<String, String> properties = RuntimeProperties.of(home, System.getProperties(), overrides,
+                    storage.folder());
+            Path pluginsDir = Path.of(properties.get(RuntimeProperties.PLUGINS_DIR));
+            List<Path> pluginsAtLaunch = ShippedBundles.jarsIn(pluginsDir);
+            List<Path> shipped = ShippedBundles.jarsIn(home.resolve("bundle"));
+
+            Map<String, Object> config = new HashMap<>(properties);
+            config.put(FelixConstants.LOG_LOGGER_PROP, new StandardErrorLog());
+            Felix framework = new Felix(config);
+            framework.init();
+            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped);
+            framework.start();
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems));
+        } catch (IOException | BundleException | RuntimeException e) {
+            storage.delete();
+            throw e;
+        }
+    }
+
+    public Framework framework() {
+        return framework;
+    }
+
+    public Path pluginsDir() {
+        return pluginsDir;
+    }
+
+    /** The jars that were in the plugins folder before FileInstall first looked at it. */
+    public List<Path> pluginsAtLaunch() {
+        return pluginsAtLaunch;
+    }
+
+    /** One line per shipped bundle that could not be installed or started; empty for a sound runtime. */
+    public List<String> startProblems() {
+        return startProblems;
+    }
+
+    /** Stops the framework and deletes its storage; safe to call again, also from a shutdown hook. */
+    @Override
+    public synchronized void close() {
+        if (closed) {
+            return;
+        }
+        closed = true;
+        try {
+            framework.stop();
+            framework.waitForStop(STOP_TIMEOUT_MS);
+        } catch (BundleException e) {
+            System.err.println("lamella: the framework did not stop cleanly: " + e.getMessage());
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } finally {
+            storage.delete();
+        }
+    }
+}

@@ -1,0 +1,95 @@
+package lamella.launcher;
+
+import java.net.URISyntaxException;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Hashtable;
+import java.util.Map;
+import java.util.concurrent.TimeUnit;
+import java.util.function.IntConsumer;
+
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceRegistration;
+
+/**
+ * {@code java -jar lib/lamella.launcher.jar [COMMAND ARGS…]}: starts the runtime around this jar, hands the command
+ * line to the command dispatcher of bundle lamella.cli and exits with the command's status.
+ */
+public final class Main {
+
+    private static final Duration PLUGIN_PATIENCE = Duration.ofSeconds(10);
+    private static final long DISPATCHER_PATIENCE_MS = 10_000;
+    private static final long POLL_MS = 20;
+    private static final int FAILED = 1;
+
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    private static int run(String[] args) {
+        String[] commandLine = args.length == 0 ? new String[] {"help"} : args;
+        FelixRuntime runtime;
+        try {
+            runtime = FelixRuntime.start(home(), Map.of());
+        } catch (Exception e) {
+            System.err.println("lamella: could not start the runtime: " + e.getMessage());
+            return FAILED;
+        }
+        Runtime.getRuntime().addShutdownHook(new Thread(runtime::close, "lamella-shutdown"));
+        try {
+            runtime.startProblems().forEach(p -> System.err.println("lamella: " + p));
+            BundleContext context = runtime.framework().getBundleContext();
+            PluginSettler.settle(context, runtime.pluginsAtLaunch(), PLUGIN_PATIENCE)
+                    .forEach(p -> System.err.println("lamella: " + p));
+            return dispatch(context, commandLine);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return FAILED;
+        } finally {
+            runtime.close();
+        }
+    }
+
+    private static int dispatch(BundleContext context, String[] commandLine) throws InterruptedException {
+        LaunchHandle handle = new LaunchHandle();
+        Hashtable<String, Object> properties = new Hashtable<>();
+        properties.put(LaunchHandle.ROLE, LaunchHandle.ROLE_LAUNCH);
+        properties.put(LaunchHandle.ARGS, commandLine);
+        properties.put(LaunchHandle.CWD, workingDirectory().toString());
+        ServiceRegistration<IntConsumer> registration =
+                context.registerService(IntConsumer.class, handle, properties);
+
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(DISPATCHER_PATIENCE_MS);
+        while (!handle.await(POLL_MS, TimeUnit.MILLISECONDS)) {
+            boolean taken = registration.getReference().getUsingBundles() != null;
+            if (!taken && System.nanoTime() > deadline) {
+                System.err.println("lamella: no command dispatcher came up; is bundle lamella.cli in "
+                        + home().resolve("bundle") + " and resolved?");
+                return FAILED;
+            }
+        }
+        return handle.status();
+    }
+
+    /** The script passes the user's directory, since it may change directory before starting Java. */
+    private static Path workingDirectory() {
+        return Path.of(System.getProperty(LaunchHandle.CWD, System.getProperty("user.dir"))).toAbsolutePath();
+    }
+
+    /** The runtime folder is the parent of the lib/ folder holding this jar, unless -Dlamella.home says otherwise. */
+    private static Path home() {
+        String given = System.getProperty(RuntimeProperties.HOME);
+        if (given != null) {
+            return Path.of(given).toAbsolutePath();
+        }
+        try {
+            Path jar = Path.of(Main.class.getProtectionDomain().getCodeSource().getLocation().toURI());
+            return jar.getParent().getParent();
+        } catch (URISyntaxException e) {
+            throw new IllegalStateException("cannot locate the launcher jar", e);
+        }
+    }
+}
