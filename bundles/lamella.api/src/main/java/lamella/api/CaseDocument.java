@@ -1,6 +1,7 @@
 package lamella.api;
 
 import java.nio.file.Path;
+import java.util.Map;
 
 /**
  * A case file as read and checked by a {@link CaseFormat}: the stack fully validated, the geometry and measurement
@@ -11,6 +12,29 @@ import java.nio.file.Path;
  * @param geometry    the {@code geometry} block, with its {@code type}
  * @param measurement the {@code measurement} block, with its {@code type}
  * @param root        the whole document, for blocks other bundles define (such as {@code fit})
+ * @param lines       the 1-based line of every JSON path's value, for error messages
  */
-public record CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root) {
+public record CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root,
+                           Map<String, Integer> lines) {
+
+    public CaseDocument {
+        lines = Map.copyOf(lines);
+    }
+
+    /** The problem located in this file, at the line of its JSON path (or of the nearest enclosing path). */
+    public InputException locate(InputException e) {
+        if (e.file() != null) {
+            return e;
+        }
+        String p = e.path();
+        while (p != null && !p.isEmpty()) {
+            Integer line = lines.get(p);
+            if (line != null) {
+                return new InputException(file, e.path(), line, e.problem());
+            }
+            int cut = Math.max(p.lastIndexOf('.'), p.lastIndexOf('['));
+            p = cut > 0 ? p.substring(0, cut) : "";
+        }
+        return e.inFile(file);
+    }
 }

@@ -60,7 +60,7 @@ public final class ModelCatalog {
         try {
             return simulation(doc.stack(), doc.geometry(), doc.measurement());
         } catch (InputException e) {
-            throw e.file() == null ? e.inFile(doc.file()) : e;
+            throw doc.locate(e);
         }
     }
 

@@ -1,0 +1,165 @@
+package lamella.casefile;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
+import lamella.api.Block;
+import lamella.api.BottomBoundary;
+import lamella.api.CaseDocument;
+import lamella.api.CaseFormat;
+import lamella.api.InputException;
+import lamella.api.Layer;
+import lamella.api.Names;
+import lamella.api.Stack;
+import org.osgi.service.component.annotations.Component;
+
+/**
+ * Case files, version 1: {@code stack} (layers from the surface down and the bottom condition), {@code geometry}
+ * and {@code measurement}, each naming its service by {@code type}. Unknown keys are errors so that a typo never
+ * goes unnoticed; the stack is checked here, the other blocks by the services they name.
+ */
+@Component(service = CaseFormat.class)
+public final class CaseFileReader implements CaseFormat {
+
+    static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement");
+    static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
+    static final String NAME = "name";
+    static final String THICKNESS = "thickness_m";
+    static final String K_THROUGH = "k_through_w_mk";
+    static final String K_IN_PLANE = "k_in_plane_w_mk";
+    static final String HEAT_CAPACITY = "heat_capacity_j_m3k";
+    static final String CONDUCTANCE = "conductance_below_w_m2k";
+    static final Set<String> LAYER_KEYS = Set.of(NAME, THICKNESS, K_THROUGH, K_IN_PLANE, HEAT_CAPACITY, CONDUCTANCE);
+
+    @Override
+    public CaseDocument read(Path file) throws InputException {
+        JsonTree tree = new JsonTree();
+        Block root = tree.read(file);
+        Map<String, Integer> lines = tree.lines();
+        try {
+            onlyKnownKeys(root, TOP_KEYS, "a case file");
+            if (root.has("description")) {
+                root.requireString("description");
+            }
+            Stack stack = stack(object(root, "stack"));
+            Block geometry = object(root, "geometry");
+            Block measurement = object(root, "measurement");
+            return new CaseDocument(file, stack, geometry, measurement, root, lines);
+        } catch (InputException e) {
+            throw new CaseDocument(file, null, null, null, root, lines).locate(e);
+        }
+    }
+
+    static Stack stack(Block s) throws InputException {
+        onlyKnownKeys(s, STACK_KEYS, "the stack");
+        BottomBoundary bottom = BottomBoundary.SEMI_INFINITE;
+        if (s.has("bottom")) {
+            String b = s.requireString("bottom");
+            List<String> names = new ArrayList<>();
+            for (BottomBoundary v : BottomBoundary.values()) {
+                names.add(v.caseName());
+            }
+            bottom = BottomBoundary.fromCaseName(b).orElseThrow(() -> InputException.at(s.pathOf("bottom"),
+                    "unknown bottom '" + b + "'; expected one of: " + String.join(", ", names)));
+        }
+        Object raw = s.get("layers");
+        if (raw == null) {
+            throw InputException.at(s.pathOf("layers"), "missing; expected a list of layers from the surface down");
+        }
+        if (!(raw instanceof List<?> list) || list.isEmpty()) {
+            throw InputException.at(s.pathOf("layers"), "expected a non-empty list of layers, got "
+                    + Block.describe(raw));
+        }
+        List<Layer> layers = new ArrayList<>();
+        Map<String, Integer> seen = new HashMap<>();
+        for (int i = 0; i < list.size(); i++) {
+            String at = s.pathOf("layers") + "[" + i + "]";
+            if (!(list.get(i) instanceof Block l)) {
+                throw InputException.at(at, "expected a layer object, got " + Block.describe(list.get(i)));
+            }
+            boolean last = i == list.size() - 1;
+            Layer layer = layer(l, last, bottom);
+            Integer before = seen.put(layer.name(), i);
+            if (before != null) {
+                throw InputException.at(l.pathOf(NAME), "the name '" + layer.name() + "' is already used by "
+                        + s.pathOf("layers") + "[" + before + "]");
+            }
+            layers.add(layer);
+        }
+        return new Stack(layers, bottom);
+    }
+
+    private static Layer layer(Block l, boolean last, BottomBoundary bottom) throws InputException {
+        onlyKnownKeys(l, LAYER_KEYS, "a layer");
+        String name = l.requireString(NAME);
+        if (name.isBlank()) {
+            throw InputException.at(l.pathOf(NAME), "a layer's name must not be blank");
+        }
+        boolean semiInfinite = last && bottom == BottomBoundary.SEMI_INFINITE;
+        double thickness;
+        if (semiInfinite) {
+            if (l.has(THICKNESS)) {
+                throw InputException.at(l.pathOf(THICKNESS), "the last layer of a stack with a semi-infinite bottom"
+                        + " extends without end; leave out " + THICKNESS + ", or set stack.bottom to 'adiabatic' or"
+                        + " 'isothermal'");
+            }
+            thickness = Double.POSITIVE_INFINITY;
+        } else {
+            thickness = positive(l, THICKNESS, "the layer's thickness in m"
+                    + (last ? " (the bottom is " + bottom.caseName() + ")" : ""));
+        }
+        double kz = positive(l, K_THROUGH, "the through-plane thermal conductivity in W/(m K)");
+        double kr = l.has(K_IN_PLANE) ? positive(l, K_IN_PLANE, "the in-plane thermal conductivity") : kz;
+        double c = positive(l, HEAT_CAPACITY, "the volumetric heat capacity in J/(m³ K)");
+        double g = Double.POSITIVE_INFINITY;
+        if (l.has(CONDUCTANCE)) {
+            if (last) {
+                throw InputException.at(l.pathOf(CONDUCTANCE), "the last layer has no layer below it; a boundary"
+                        + " conductance belongs to the upper of two neighbouring layers");
+            }
+            g = positive(l, CONDUCTANCE, "the thermal boundary conductance to the next layer in W/(m² K)");
+        }
+        return new Layer(name, thickness, kz, kr, kr, c, g);
+    }
+
+    private static double positive(Block b, String key, String what) throws InputException {
+        Object v = b.get(key);
+        if (v == null) {
+            throw InputException.at(b.pathOf(key), "missing; expected " + what);
+        }
+        if (!(v instanceof Double d)) {
+            throw InputException.at(b.pathOf(key), "expected " + what + " as a number, got " + Block.describe(v));
+        }
+        if (!(d > 0)) {
+            throw InputException.at(b.pathOf(key), "expected a positive number (" + what + "), got " + d);
+        }
+        return d;
+    }
+
+    private static Block object(Block parent, String key) throws InputException {
+        Object v = parent.get(key);
+        if (v == null) {
+            throw InputException.at(parent.pathOf(key), "missing; expected an object");
+        }
+        if (!(v instanceof Block b)) {
+            throw InputException.at(parent.pathOf(key), "expected an object, got " + Block.describe(v));
+        }
+        return b;
+    }
+
+    static void onlyKnownKeys(Block b, Set<String> known, String what) throws InputException {
+        for (String key : b.values().keySet()) {
+            if (!known.contains(key)) {
+                Optional<String> hint = Names.closest(key, known);
+                throw InputException.at(b.pathOf(key), "unknown key in " + what
+                        + hint.map(h -> " (did you mean '" + h + "'?)").orElse("") + "; expected one of: "
+                        + String.join(", ", new TreeSet<>(known)));
+            }
+        }
+    }
+}

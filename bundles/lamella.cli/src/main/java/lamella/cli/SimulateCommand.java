@@ -1,0 +1,129 @@
+package lamella.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import lamella.api.CaseDocument;
+import lamella.api.CaseFormat;
+import lamella.api.HeatingGeometry;
+import lamella.api.InputException;
+import lamella.api.ModelEvaluationException;
+import lamella.api.SignalTable;
+import lamella.api.StackKernels;
+import lamella.api.Technique;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+/** {@code lamella simulate CASE.json [--out FILE.csv]}: the model signal a case describes, as CSV. */
+@Component(service = Command.class)
+public final class SimulateCommand implements Command {
+
+    private final LiveModels models = new LiveModels();
+
+    @Reference
+    private CaseFormat caseFormat;
+
+    @Reference
+    private StackKernels kernels;
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeGeometry")
+    void addGeometry(HeatingGeometry g) {
+        models.add(g);
+    }
+
+    void removeGeometry(HeatingGeometry g) {
+        models.remove(g);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeTechnique")
+    void addTechnique(Technique t) {
+        models.add(t);
+    }
+
+    void removeTechnique(Technique t) {
+        models.remove(t);
+    }
+
+    @Override
+    public String name() {
+        return "simulate";
+    }
+
+    @Override
+    public String summary() {
+        return "Computes the model signal of a case file and writes it as CSV.";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                usage: lamella simulate CASE.json [--out FILE.csv]
+
+                Reads the case (stack, geometry, measurement), evaluates the model at the measurement's x values
+                and writes one CSV row per x value: the x column (frequency_hz, delay_s; none for sstr) and the
+                technique's signal columns, 13 significant digits, SI units. Without --out the CSV goes to
+                standard output. Bad input is reported with the file, line and JSON path; exit status 2.
+                """;
+    }
+
+    @Override
+    public int run(List<String> args, CommandIO io) {
+        String caseArg = null;
+        String outArg = null;
+        for (int i = 0; i < args.size(); i++) {
+            String a = args.get(i);
+            if (a.equals("--out")) {
+                if (i + 1 >= args.size()) {
+                    io.err().println("lamella simulate: --out needs a file name");
+                    return BAD_INPUT;
+                }
+                outArg = args.get(++i);
+            } else if (a.startsWith("-")) {
+                io.err().println("lamella simulate: unknown option " + a + "\n" + usage());
+                return BAD_INPUT;
+            } else if (caseArg == null) {
+                caseArg = a;
+            } else {
+                io.err().println("lamella simulate: one case file at a time; got also " + a);
+                return BAD_INPUT;
+            }
+        }
+        if (caseArg == null) {
+            io.err().println("lamella simulate: which case file?\n" + usage());
+            return BAD_INPUT;
+        }
+        Path casePath = io.resolve(caseArg);
+        SignalTable table;
+        try {
+            CaseDocument doc = caseFormat.read(casePath);
+            table = models.catalog(kernels).simulation(doc).run();
+        } catch (InputException e) {
+            io.err().println("lamella simulate: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (ModelEvaluationException e) {
+            io.err().println("lamella simulate: " + casePath + ": cannot evaluate the model: " + e.getMessage());
+            return BAD_INPUT;
+        }
+        String csv = SignalCsv.format(table);
+        if (outArg == null) {
+            io.out().print(csv);
+            io.out().flush();
+            return OK;
+        }
+        Path out = io.resolve(outArg);
+        try {
+            SignalCsv.writeAtomically(out, csv);
+        } catch (IOException e) {
+            io.err().println("lamella simulate: cannot write " + out + ": " + e.getMessage());
+            return FAILED;
+        }
+        io.err().println("wrote " + table.rows() + " rows to " + out);
+        return OK;
+    }
+}
