@@ -43,6 +43,7 @@ public final class FelixRuntime implements AutoCloseable {
      */
     public static FelixRuntime start(Path home, Map<String, String> overrides) throws IOException, BundleException {
         StorageArea storage = StorageArea.create();
+        Felix framework = null;
         try {
             Map<String, String> properties = RuntimeProperties.of(home, System.getProperties(), overrides,
                     storage.folder());
@@ -52,13 +53,13 @@ public final class FelixRuntime implements AutoCloseable {
 
             Map<String, Object> config = new HashMap<>(properties);
             config.put(FelixConstants.LOG_LOGGER_PROP, new StandardErrorLog());
-            Felix framework = new Felix(config);
+            framework = new Felix(config);
             framework.init();
             List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped);
             framework.start();
             return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems));
         } catch (IOException | BundleException | RuntimeException e) {
-            storage.delete();
+            new FelixRuntime(framework, storage, null, List.of(), List.of()).close();
             throw e;
         }
     }
@@ -89,8 +90,10 @@ public final class FelixRuntime implements AutoCloseable {
         }
         closed = true;
         try {
-            framework.stop();
-            framework.waitForStop(STOP_TIMEOUT_MS);
+            if (framework != null) {
+                framework.stop();
+                framework.waitForStop(STOP_TIMEOUT_MS);
+            }
         } catch (BundleException e) {
             System.err.println("lamella: the framework did not stop cleanly: " + e.getMessage());
         } catch (InterruptedException e) {

@@ -26,7 +26,10 @@ public final class Main {
     }
 
     public static void main(String[] args) {
-        System.exit(run(args));
+        int status = run(args);
+        System.out.flush();
+        System.err.flush();
+        System.exit(status);
     }
 
     private static int run(String[] args) {
