@@ -78,7 +78,7 @@ class LineHeaterTest {
             double[] ref = new double[2];
             for (int part = 0; part < 2; part++) {
                 final int p = part;
-                IterativeLegendreGaussIntegrator gl = new IterativeLegendreGaussIntegrator(32, 1e-13, 1e-300, 3, 64);
+                IterativeLegendreGaussIntegrator gl = new IterativeLegendreGaussIntegrator(32, 1e-12, 1e-17, 2, 64);
                 double sum = 0;
                 double halfPeriod = Math.PI / b;
                 for (int i = 0; i < 6366; i++) {
