@@ -8,8 +8,8 @@ import lamella.api.ModelEvaluationException;
  *
  * <p>Cut off plainly after a few thousand terms the sum rings (about 1 % at 100 ps), because H decays only like
  * f^(−1/2). The convergence factor g(m) = exp(−π (m f_rep / f_c)²) makes it converge; in time it convolves the
- * ideal signal with a Gaussian of standard deviation 1/(√(2π) f_c), one picosecond for the default f_c = 4e11 Hz —
- * shorter than the pulse cross-correlation of a typical instrument and below 1e-4 of the signal at 100 ps.
+ * ideal signal with a Gaussian of standard deviation 1/(√(2π) f_c), two picoseconds for the default f_c = 2e11 Hz —
+ * about the pump–probe cross-correlation of a typical instrument, and about 1.5e-4 of the signal at 100 ps.
  *
  * <p>The terms beyond a few repetition harmonics vary smoothly: H(f)·√f is interpolated there in ln f by a
  * Chebyshev polynomial whose degree is doubled until it reproduces exact values at check points to 1e-9, so a
@@ -18,9 +18,9 @@ import lamella.api.ModelEvaluationException;
 final class PulseTrainSum {
 
     /** Default convergence-factor frequency f_c (Hz). */
-    static final double DEFAULT_CUTOFF = 4e11;
-    /** Terms with weight below exp(−π x²) = 1e-13 are left out. */
-    private static final double WEIGHT_FLOOR_X = Math.sqrt(Math.log(1e13) / Math.PI);
+    static final double DEFAULT_CUTOFF = 2e11;
+    /** Terms with weight below exp(−π x²) = 1e-10 are left out. */
+    private static final double WEIGHT_FLOOR_X = Math.sqrt(Math.log(1e10) / Math.PI);
     /** Terms |m| ≤ this are always evaluated exactly. */
     private static final int EXACT_TERMS = 10;
     private static final int FIRST_DEGREE = 24;

@@ -91,7 +91,10 @@ class PulseTrainSumTest {
         assertTrue(err > 3e-3, "the plain sum was unexpectedly accurate: " + err);
     }
 
-    /** Doubling the convergence-factor frequency changes nothing beyond 1e-4 at ≥ 100 ps (common practice). */
+    /**
+     * Doubling the convergence-factor frequency changes the signal by less than 5e-4 at ≥ 100 ps, a fifth of the
+     * 0.1 % the design allows (common practice, no source).
+     */
     @Test
     void resultDoesNotDependOnTheConvergenceFactor() {
         double[][] a = PulseTrainSum.withCutoff(F_MOD, F_REP, PulseTrainSum.DEFAULT_CUTOFF, true)
@@ -100,7 +103,7 @@ class PulseTrainSumTest {
                 .evaluate(DELAYS, HALF_SPACE);
         for (int i = 0; i < DELAYS.length; i++) {
             double err = Math.hypot(a[0][i] - b[0][i], a[1][i] - b[1][i]) / Math.hypot(b[0][i], b[1][i]);
-            assertTrue(err < 1e-4, "t=" + DELAYS[i] + ": " + err);
+            assertTrue(err < 5e-4, "t=" + DELAYS[i] + ": " + err);
         }
     }
 

@@ -1,0 +1,137 @@
+package lamella.cli;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import lamella.api.Block;
+import lamella.api.BottomBoundary;
+import lamella.api.HeatingGeometry;
+import lamella.api.InputException;
+import lamella.api.Layer;
+import lamella.api.Simulation;
+import lamella.api.Stack;
+import lamella.api.StackKernels;
+import lamella.api.Technique;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+/**
+ * {@code lamella benchmark}: times the model on one thread through the live services — an FDTR curve of 200
+ * frequencies and a TDTR curve of 50 delays on a three-layer stack — and prints the figures. Speed is measured here,
+ * never asserted in a unit test.
+ */
+@Component(service = Command.class)
+public final class BenchmarkCommand implements Command {
+
+    private static final int WARM_UP = 30;
+    private static final int RUNS = 60;
+
+    private final LiveModels models = new LiveModels();
+
+    @Reference
+    private StackKernels kernels;
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeGeometry")
+    void addGeometry(HeatingGeometry g) {
+        models.add(g);
+    }
+
+    void removeGeometry(HeatingGeometry g) {
+        models.remove(g);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeTechnique")
+    void addTechnique(Technique t) {
+        models.add(t);
+    }
+
+    void removeTechnique(Technique t) {
+        models.remove(t);
+    }
+
+    @Override
+    public String name() {
+        return "benchmark";
+    }
+
+    @Override
+    public String summary() {
+        return "Times the model (FDTR and TDTR curves of a three-layer stack) on one thread and prints figures.";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                usage: lamella benchmark
+
+                Times, on the calling thread, an FDTR curve of 200 modulation frequencies (1 kHz-100 MHz) and a
+                TDTR curve of 50 delays (100 ps-5 ns, 9 MHz modulation, 76 MHz repetition) for a metal transducer
+                on an oxide film on a crystalline substrate, with Gaussian beams. Prints the median and fastest
+                of %d runs after %d warm-up runs.
+                """.formatted(RUNS, WARM_UP);
+    }
+
+    @Override
+    public int run(List<String> args, CommandIO io) {
+        if (!args.isEmpty()) {
+            io.err().println("lamella benchmark: takes no arguments");
+            return BAD_INPUT;
+        }
+        try {
+            Stack stack = new Stack(List.of(
+                    Layer.isotropicInPlane("transducer", 9e-8, 200, 200, 2.45e6).withConductanceBelow(1.2e8),
+                    Layer.isotropicInPlane("film", 3.5e-7, 1.4, 1.4, 1.65e6),
+                    Layer.isotropicInPlane("substrate", Double.POSITIVE_INFINITY, 140, 140, 1.63e6)),
+                    BottomBoundary.SEMI_INFINITE);
+            Block beams = block("geometry", Map.of("type", "gaussian", "pump_radius_m", 6e-6,
+                    "probe_radius_m", 4e-6));
+            Block fdtr = block("measurement", Map.of("type", "fdtr", "frequencies_hz", logSpaced(1e3, 1e8, 200)));
+            Block tdtr = block("measurement", Map.of("type", "tdtr", "modulation_hz", 9e6, "repetition_hz", 7.6e7,
+                    "delays_s", logSpaced(1e-10, 5e-9, 50)));
+            io.out().println("lamella benchmark: one thread, " + RUNS + " runs after " + WARM_UP + " warm-up runs");
+            report(io, "FDTR curve, 200 frequencies, 3 layers", models.catalog(kernels).simulation(stack, beams, fdtr));
+            report(io, "TDTR curve, 50 delays, 3 layers", models.catalog(kernels).simulation(stack, beams, tdtr));
+            return OK;
+        } catch (InputException e) {
+            io.err().println("lamella benchmark: the built-in cases need the gaussian geometry and the fdtr and tdtr"
+                    + " techniques: " + e.getMessage());
+            return FAILED;
+        }
+    }
+
+    private static void report(CommandIO io, String label, Simulation s) {
+        for (int i = 0; i < WARM_UP; i++) {
+            s.run();
+        }
+        double[] ms = new double[RUNS];
+        for (int i = 0; i < RUNS; i++) {
+            long t0 = System.nanoTime();
+            s.run();
+            ms[i] = (System.nanoTime() - t0) / 1e6;
+        }
+        Arrays.sort(ms);
+        io.out().println(String.format(Locale.ROOT, "  %-40s median %8.3f ms   fastest %8.3f ms", label,
+                ms[RUNS / 2], ms[0]));
+    }
+
+    private static List<Object> logSpaced(double from, double to, int n) {
+        List<Object> v = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            v.add(from * Math.pow(to / from, (double) i / (n - 1)));
+        }
+        return v;
+    }
+
+    private static Block block(String path, Map<String, Object> values) {
+        return new Block(path, new LinkedHashMap<>(values));
+    }
+}
