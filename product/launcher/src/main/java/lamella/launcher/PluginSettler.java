@@ -1,5 +1,6 @@
 package lamella.launcher;
 
+import java.io.IOException;
 import java.net.URI;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -8,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.jar.JarFile;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
@@ -29,17 +31,34 @@ final class PluginSettler {
     /** @return one line per plugin that is not live, naming its jar */
     static List<String> settle(BundleContext context, List<Path> jars, Duration patience)
             throws InterruptedException {
-        Map<Path, Bundle> installed = awaitInstalled(context, jars, patience);
         List<String> problems = new ArrayList<>();
+        List<Path> bundles = new ArrayList<>();
         for (Path jar : jars) {
+            unreadable(jar).ifPresentOrElse(why -> problems.add("plugin " + jar.getFileName() + " " + why),
+                    () -> bundles.add(jar));
+        }
+        Map<Path, Bundle> installed = awaitInstalled(context, bundles, patience);
+        for (Path jar : bundles) {
             Bundle bundle = installed.get(jar);
             if (bundle == null) {
-                problems.add("plugin " + jar.getFileName() + " was not installed: it is not a readable OSGi bundle");
+                problems.add("plugin " + jar.getFileName() + " was not installed within " + patience.toSeconds()
+                        + " s");
             } else {
                 goLive(context, jar, bundle).ifPresent(problems::add);
             }
         }
         return problems;
+    }
+
+    /** FileInstall gives up on such a jar without a trace the launcher could wait for, so it is checked here. */
+    static Optional<String> unreadable(Path jar) {
+        try (JarFile file = new JarFile(jar.toFile())) {
+            return file.getManifest() == null
+                    ? Optional.of("is not a bundle: it has no META-INF/MANIFEST.MF")
+                    : Optional.empty();
+        } catch (IOException e) {
+            return Optional.of("is not a readable jar: " + e.getMessage());
+        }
     }
 
     private static Map<Path, Bundle> awaitInstalled(BundleContext context, List<Path> jars, Duration patience)
