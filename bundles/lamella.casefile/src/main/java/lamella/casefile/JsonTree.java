@@ -18,8 +18,9 @@ import lamella.api.Block;
 import lamella.api.InputException;
 
 /**
- * Reads a JSON document into {@link Block}s, remembering the line of every value so that later checks can name
- * it. Duplicate keys, nulls, trailing content and non-finite numbers are errors, never silently resolved.
+ * Reads a JSON document into {@link Block}s, remembering the line of every value — for an object member the line of
+ * its key, where the value may start later — so that later checks can name it. Duplicate keys, nulls, trailing
+ * content and non-finite numbers are errors, never silently resolved.
  */
 final class JsonTree {
 
@@ -54,6 +55,7 @@ final class JsonTree {
             if (t != JsonToken.START_OBJECT) {
                 throw new InputException(file, "", line(p), "expected a JSON object at the top level");
             }
+            lines.put("", line(p));
             Block root = object(p, "", file);
             if (p.nextToken() != null) {
                 throw new InputException(file, null, line(p), "unexpected content after the end of the JSON object");
@@ -72,13 +74,13 @@ final class JsonTree {
 
     private Block object(JsonParser p, String path, Path file) throws IOException, InputException {
         Map<String, Object> values = new LinkedHashMap<>();
-        lines.put(path, line(p));
         JsonToken t;
         while ((t = p.nextToken()) == JsonToken.FIELD_NAME) {
             String key = p.currentName();
             String at = path.isEmpty() ? key : path + "." + key;
+            int keyLine = line(p);
             p.nextToken();
-            values.put(key, value(p, at, file));
+            values.put(key, value(p, at, keyLine, file));
         }
         if (t != JsonToken.END_OBJECT) {
             throw new InputException(file, path, line(p), "the object is not closed");
@@ -86,8 +88,8 @@ final class JsonTree {
         return new Block(path, values);
     }
 
-    private Object value(JsonParser p, String at, Path file) throws IOException, InputException {
-        lines.put(at, line(p));
+    private Object value(JsonParser p, String at, int line, Path file) throws IOException, InputException {
+        lines.put(at, line);
         JsonToken t = p.currentToken();
         switch (t) {
             case START_OBJECT:
@@ -96,7 +98,7 @@ final class JsonTree {
                 List<Object> list = new ArrayList<>();
                 int i = 0;
                 while (p.nextToken() != JsonToken.END_ARRAY) {
-                    list.add(value(p, at + "[" + i++ + "]", file));
+                    list.add(value(p, at + "[" + i++ + "]", line(p), file));
                 }
                 return list;
             }
@@ -104,7 +106,7 @@ final class JsonTree {
             case VALUE_NUMBER_FLOAT: {
                 double d = p.getDoubleValue();
                 if (!Double.isFinite(d)) {
-                    throw new InputException(file, at, line(p), "the number " + p.getText()
+                    throw new InputException(file, at, line, "the number " + p.getText()
                             + " is outside the range of double precision");
                 }
                 return d;
@@ -116,9 +118,9 @@ final class JsonTree {
             case VALUE_FALSE:
                 return Boolean.FALSE;
             case VALUE_NULL:
-                throw new InputException(file, at, line(p), "null is not a value; leave the key out instead");
+                throw new InputException(file, at, line, "null is not a value; leave the key out instead");
             default:
-                throw new InputException(file, at, line(p), "unexpected JSON token " + t);
+                throw new InputException(file, at, line, "unexpected JSON token " + t);
         }
     }
 
