@@ -12,7 +12,7 @@ import java.util.Map;
  * @param geometry    the {@code geometry} block, with its {@code type}
  * @param measurement the {@code measurement} block, with its {@code type}
  * @param root        the whole document, for blocks other bundles define (such as {@code fit})
- * @param lines       the 1-based line of every JSON path's value, for error messages
+ * @param lines       the 1-based line of every JSON path's key (or list element), for error messages
  */
 public record CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root,
                            Map<String, Integer> lines) {
