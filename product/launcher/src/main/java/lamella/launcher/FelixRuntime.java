@@ -54,12 +54,15 @@ public final class FelixRuntime implements AutoCloseable {
             Map<String, Object> config = new HashMap<>(properties);
             config.put(FelixConstants.LOG_LOGGER_PROP, new StandardErrorLog());
             framework = new Felix(config);
-            framework.init();
-            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped);
             framework.start();
+            // Started once the framework runs, so that a bundle that cannot start says why here.
+            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped);
             return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems));
         } catch (IOException | BundleException | RuntimeException e) {
-            new FelixRuntime(framework, storage, null, List.of(), List.of()).close();
+            if (framework != null) {
+                stop(framework);
+            }
+            storage.delete();
             throw e;
         }
     }
@@ -90,16 +93,20 @@ public final class FelixRuntime implements AutoCloseable {
         }
         closed = true;
         try {
-            if (framework != null) {
-                framework.stop();
-                framework.waitForStop(STOP_TIMEOUT_MS);
-            }
+            stop(framework);
+        } finally {
+            storage.delete();
+        }
+    }
+
+    private static void stop(Felix framework) {
+        try {
+            framework.stop();
+            framework.waitForStop(STOP_TIMEOUT_MS);
         } catch (BundleException e) {
             System.err.println("lamella: the framework did not stop cleanly: " + e.getMessage());
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        } finally {
-            storage.delete();
         }
     }
 }

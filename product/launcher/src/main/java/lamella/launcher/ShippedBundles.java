@@ -11,6 +11,7 @@ import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.BundleException;
 import org.osgi.framework.Constants;
+import org.osgi.framework.wiring.FrameworkWiring;
 
 /** Installs the jars of the runtime's {@code bundle/} folder in place and starts every one that is not a fragment. */
 final class ShippedBundles {
@@ -45,6 +46,8 @@ final class ShippedBundles {
                 problems.add("bundle " + jar.getFileName() + " could not be installed: " + e.getMessage());
             }
         }
+        // One resolver pass for all of them is cheaper than one per start.
+        context.getBundle(0).adapt(FrameworkWiring.class).resolveBundles(installed);
         for (Bundle bundle : installed) {
             if (isFragment(bundle)) {
                 continue;
