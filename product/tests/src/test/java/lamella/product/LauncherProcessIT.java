@@ -96,6 +96,38 @@ class LauncherProcessIT {
         assertTrue(run.out().contains("\nplugins folder: " + elsewhere + "\n"), run.out());
     }
 
+    /** The main job end to end: a demo case through the real runtime, CSV to a file relative to the user's folder. */
+    @Test
+    void simulateWritesTheDemoCaseAsCsv() throws Exception {
+        Path demo = Path.of("../../demo-data/cases/oxide-film-tdtr.json").toAbsolutePath().normalize();
+        Run run = launch("simulate", demo.toString(), "--out", "result/tdtr.csv");
+
+        assertEquals(0, run.status(), run.err());
+        List<String> lines = Files.readAllLines(userDir.resolve("result/tdtr.csv"));
+        assertEquals("delay_s,in_phase,out_of_phase,ratio,phase_deg", lines.get(0));
+        assertEquals(26, lines.size(), "a header and one row per delay");
+        assertTrue(lines.get(1).matches("1\\.000000000000e-10(,-?\\d\\.\\d{12}e[+-]\\d{2}){4}"), lines.get(1));
+    }
+
+    /** Bad input: exit status 2, the message names file, line and JSON path, and no output file appears. */
+    @Test
+    void simulateRejectsATypoWithoutWritingOutput() throws Exception {
+        Path bad = userDir.resolve("typo.json");
+        Files.writeString(bad, """
+                {
+                  "stack": {"layers": [{"name": "glass", "k_through_w_mk": 1.4, "heat_capacity_j_m3k": 1.6e6}]},
+                  "geometry": {"type": "gaussian", "pump_radus_m": 5e-6, "probe_radius_m": 5e-6},
+                  "measurement": {"type": "sstr"}
+                }
+                """);
+        Run run = launch("simulate", "typo.json", "--out", "typo.csv");
+
+        assertEquals(2, run.status(), run.err());
+        assertTrue(run.err().contains("typo.json:3: geometry.pump_radus_m: unknown key"), run.err());
+        assertTrue(run.err().contains("did you mean 'pump_radius_m'"), run.err());
+        assertTrue(Files.notExists(userDir.resolve("typo.csv")));
+    }
+
     private static Run launch(String... args) throws Exception {
         return launch(List.of(), args);
     }
