@@ -32,9 +32,12 @@ public final class CaseFileReader implements CaseFormat {
     static final String THICKNESS = "thickness_m";
     static final String K_THROUGH = "k_through_w_mk";
     static final String K_IN_PLANE = "k_in_plane_w_mk";
+    static final String K_IN_PLANE_X = "k_in_plane_x_w_mk";
+    static final String K_IN_PLANE_Y = "k_in_plane_y_w_mk";
     static final String HEAT_CAPACITY = "heat_capacity_j_m3k";
     static final String CONDUCTANCE = "conductance_below_w_m2k";
-    static final Set<String> LAYER_KEYS = Set.of(NAME, THICKNESS, K_THROUGH, K_IN_PLANE, HEAT_CAPACITY, CONDUCTANCE);
+    static final Set<String> LAYER_KEYS = Set.of(NAME, THICKNESS, K_THROUGH, K_IN_PLANE, K_IN_PLANE_X, K_IN_PLANE_Y,
+            HEAT_CAPACITY, CONDUCTANCE);
 
     @Override
     public CaseDocument read(Path file) throws InputException {
@@ -115,6 +118,8 @@ public final class CaseFileReader implements CaseFormat {
         }
         double kz = positive(l, K_THROUGH, "the through-plane thermal conductivity in W/(m K)");
         double kr = l.has(K_IN_PLANE) ? positive(l, K_IN_PLANE, "the in-plane thermal conductivity") : kz;
+        double kx = l.has(K_IN_PLANE_X) ? positive(l, K_IN_PLANE_X, "the in-plane thermal conductivity along x") : kr;
+        double ky = l.has(K_IN_PLANE_Y) ? positive(l, K_IN_PLANE_Y, "the in-plane thermal conductivity along y") : kr;
         double c = positive(l, HEAT_CAPACITY, "the volumetric heat capacity in J/(m³ K)");
         double g = Double.POSITIVE_INFINITY;
         if (l.has(CONDUCTANCE)) {
@@ -124,7 +129,7 @@ public final class CaseFileReader implements CaseFormat {
             }
             g = positive(l, CONDUCTANCE, "the thermal boundary conductance to the next layer in W/(m² K)");
         }
-        return new Layer(name, thickness, kz, kr, kr, c, g);
+        return new Layer(name, thickness, kz, kx, ky, c, g);
     }
 
     private static double positive(Block b, String key, String what) throws InputException {

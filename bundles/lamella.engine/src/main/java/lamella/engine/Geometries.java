@@ -11,6 +11,8 @@ public final class Geometries {
 
     /** One workspace per thread: geometries are shared across fitting and Monte Carlo threads. */
     private static final ThreadLocal<SpectralQuadrature> WORKSPACE = ThreadLocal.withInitial(SpectralQuadrature::new);
+    /** A second one for the inner integral of a two-dimensional spectral integral. */
+    private static final ThreadLocal<SpectralQuadrature> INNER = ThreadLocal.withInitial(SpectralQuadrature::new);
 
     private Geometries() {
     }
@@ -18,6 +20,11 @@ public final class Geometries {
     /** This thread's quadrature workspace. */
     public static SpectralQuadrature workspace() {
         return WORKSPACE.get();
+    }
+
+    /** This thread's workspace for an integral nested inside one done with {@link #workspace()}. */
+    public static SpectralQuadrature innerWorkspace() {
+        return INNER.get();
     }
 
     /** Axisymmetric geometries use one radial conductivity per layer, so Λx must equal Λy everywhere. */
