@@ -24,6 +24,15 @@ public interface Technique {
     /** The name of the x column ({@code frequency_hz}, {@code delay_s}); empty for a single steady value. */
     Optional<String> xColumn();
 
+    /**
+     * The key of the measurement block that lists the x values ({@code frequencies_hz}, {@code delays_s}); empty
+     * for a steady technique. The list is optional in a case file — a fit takes x from its data — but a simulation
+     * needs it.
+     */
+    default Optional<String> xParameter() {
+        return Optional.empty();
+    }
+
     /** The names of the signal columns, in output order. */
     List<String> signalColumns();
 

@@ -3,7 +3,7 @@ package lamella.api;
 /** A technique with its settings: evaluates the observables at x values. Thread-safe. */
 public interface TechniqueModel {
 
-    /** The x values the case file asks for (one value, 0, for a steady technique). */
+    /** The x values the case file asks for: empty when it gives none, one value (0) for a steady technique. */
     double[] xValues();
 
     /**

@@ -9,6 +9,7 @@ import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.SignalTable;
+import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.command.Command;
@@ -102,7 +103,13 @@ public final class SimulateCommand implements Command {
         SignalTable table;
         try {
             CaseDocument doc = caseFormat.read(casePath);
-            table = models.catalog(kernels).simulation(doc).run();
+            Simulation simulation = models.catalog(kernels).simulation(doc);
+            if (simulation.measurement().xValues().length == 0) {
+                String key = simulation.technique().xParameter().orElse("x values");
+                throw doc.locate(InputException.at(doc.measurement().pathOf(key), "missing; a simulation needs the"
+                        + " list of " + simulation.technique().xColumn().orElse("x") + " values to compute"));
+            }
+            table = simulation.run();
         } catch (InputException e) {
             io.err().println("lamella simulate: " + e.getMessage());
             return BAD_INPUT;

@@ -27,6 +27,8 @@ import lamella.engine.Engine;
 import lamella.geometry.gaussian.GaussianBeams;
 import lamella.geometry.line.LineHeater;
 import lamella.geometry.point.PointSource;
+import lamella.geometry.ring.RingSource;
+import lamella.geometry.elliptic.EllipticBeams;
 import lamella.technique.fdtr.FrequencyDomain;
 import lamella.technique.sstr.SteadyState;
 import lamella.technique.tdtr.TimeDomain;
@@ -85,6 +87,8 @@ class SimulateCommandTest {
         inject(command, "kernels", new Engine());
         command.addGeometry(new GaussianBeams());
         command.addGeometry(new PointSource());
+        command.addGeometry(new RingSource());
+        command.addGeometry(new EllipticBeams());
         command.addGeometry(line);
         command.addTechnique(new FrequencyDomain());
         command.addTechnique(new TimeDomain());
@@ -307,14 +311,14 @@ class SimulateCommandTest {
         void unknownGeometryType() throws Exception {
             String json = caseOf("{\"type\": \"gausian\", \"pump_radius_m\": 6e-6, \"probe_radius_m\": 4e-6}", FDTR);
             bad(json, "geometry.type", "\"gausian\"", "unknown geometry 'gausian'", "did you mean 'gaussian'",
-                    "live geometry types: gaussian, line, point");
+                    "live geometry types: elliptic, gaussian, line, point, ring");
         }
 
         @Test
         void unknownGeometryTypeListsOnlyLiveTypes() throws Exception {
             command.removeGeometry(line);
             String json = caseOf("{\"type\": \"strip\"}", FDTR);
-            Run r = bad(json, "geometry.type", "\"strip\"", "live geometry types: gaussian, point");
+            Run r = bad(json, "geometry.type", "\"strip\"", "live geometry types: elliptic, gaussian, point, ring");
             assertFalse(r.err().contains("line"), r.err());
             assertFalse(r.err().contains("did you mean"), r.err());
         }
@@ -388,7 +392,7 @@ class SimulateCommandTest {
         @Test
         void missingFrequencies() throws Exception {
             bad(caseOf(GAUSSIAN, "{\"type\": \"fdtr\"}"), "measurement.frequencies_hz", "\"measurement\"",
-                    "missing", "technique 'fdtr' needs");
+                    "missing", "a simulation needs the list of frequency_hz values");
             bad(caseOf("{\"type\": \"line\", \"half_width_m\": 5e-6}", "{\"type\": \"3omega\"}"),
                     "measurement.drive_frequencies_hz", "\"measurement\"", "missing");
         }

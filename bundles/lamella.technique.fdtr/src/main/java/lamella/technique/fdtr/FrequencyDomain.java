@@ -35,7 +35,7 @@ public final class FrequencyDomain implements Technique {
 
     @Override
     public List<ParameterSpec> parameters() {
-        return List.of(ParameterSpec.requiredList(FREQUENCIES, Constraint.POSITIVE,
+        return List.of(ParameterSpec.optionalList(FREQUENCIES, Constraint.POSITIVE,
                 "the modulation frequencies in Hz"));
     }
 
@@ -50,13 +50,18 @@ public final class FrequencyDomain implements Technique {
     }
 
     @Override
+    public Optional<String> xParameter() {
+        return Optional.of(FREQUENCIES);
+    }
+
+    @Override
     public List<String> signalColumns() {
         return ComplexColumns.names(ResponseUnit.KELVIN_PER_WATT);
     }
 
     @Override
     public TechniqueModel bind(Parameters p) throws InputException {
-        double[] f = p.list(FREQUENCIES);
+        double[] f = p.has(FREQUENCIES) ? p.list(FREQUENCIES) : new double[0];
         return new TechniqueModel() {
             @Override
             public double[] xValues() {

@@ -40,7 +40,7 @@ public final class TimeDomain implements Technique {
         return List.of(
                 ParameterSpec.required(MODULATION, Constraint.POSITIVE, "the pump modulation frequency in Hz"),
                 ParameterSpec.required(REPETITION, Constraint.POSITIVE, "the laser's pulse repetition rate in Hz"),
-                ParameterSpec.requiredList(DELAYS, Constraint.FINITE, "the pump-probe delays in s"));
+                ParameterSpec.optionalList(DELAYS, Constraint.FINITE, "the pump-probe delays in s"));
     }
 
     @Override
@@ -51,6 +51,11 @@ public final class TimeDomain implements Technique {
     @Override
     public Optional<String> xColumn() {
         return Optional.of("delay_s");
+    }
+
+    @Override
+    public Optional<String> xParameter() {
+        return Optional.of(DELAYS);
     }
 
     @Override
@@ -66,7 +71,7 @@ public final class TimeDomain implements Technique {
             throw InputException.at(p.pathOf(MODULATION), "the modulation frequency " + fMod + " Hz must be below"
                     + " half the repetition rate (" + fRep / 2 + " Hz)");
         }
-        double[] delays = p.list(DELAYS);
+        double[] delays = p.has(DELAYS) ? p.list(DELAYS) : new double[0];
         for (int i = 0; i < delays.length; i++) {
             if (Math.abs(delays[i]) >= 1 / fRep) {
                 throw InputException.at(p.pathOf(DELAYS) + "[" + i + "]", "the delay " + delays[i] + " s is not"
