@@ -1,0 +1,21 @@
+package lamella.api.fit;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import lamella.api.CaseDocument;
+
+/**
+ * Writes a fit's report into a folder: an HTML page with data and fit, residuals, sensitivities and the uncertainty
+ * budget as PNG and SVG plots, and the numbers as CSV and JSON. Offered as a service by the report bundle.
+ */
+public interface ReportWriter {
+
+    /**
+     * Writes the report; the folder is created, and its files are replaced only once each is complete.
+     *
+     * @return the HTML page
+     */
+    Path write(CaseDocument doc, FitOutcome outcome, List<SensitivityTable> sensitivities, Path folder)
+            throws IOException;
+}
