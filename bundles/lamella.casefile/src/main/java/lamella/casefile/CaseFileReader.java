@@ -8,25 +8,37 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.Supplier;
 import lamella.api.Block;
 import lamella.api.BottomBoundary;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.ExplainedCase;
+import lamella.api.ExplainingCaseFormat;
 import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.Names;
 import lamella.api.Stack;
+import lamella.api.ValueOrigin;
+import lamella.api.material.MaterialCatalog;
+import lamella.api.material.MaterialLibrary;
 import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
 
 /**
  * Case files, version 1: {@code stack} (layers from the surface down and the bottom condition), {@code geometry}
  * and {@code measurement}, each naming its service by {@code type}. Unknown keys are errors so that a typo never
- * goes unnoticed; the stack is checked here, the other blocks by the services they name.
+ * goes unnoticed; the stack is checked here, the other blocks by the services they name. A layer may name a
+ * {@code material} of the live material libraries for the values it does not write itself.
  */
-@Component(service = CaseFormat.class)
-public final class CaseFileReader implements CaseFormat {
+@Component(service = {CaseFormat.class, ExplainingCaseFormat.class})
+public final class CaseFileReader implements ExplainingCaseFormat {
 
-    static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement");
+    static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
+            LayerReading.TEMPERATURE);
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
@@ -37,10 +49,28 @@ public final class CaseFileReader implements CaseFormat {
     static final String HEAT_CAPACITY = "heat_capacity_j_m3k";
     static final String CONDUCTANCE = "conductance_below_w_m2k";
     static final Set<String> LAYER_KEYS = Set.of(NAME, THICKNESS, K_THROUGH, K_IN_PLANE, K_IN_PLANE_X, K_IN_PLANE_Y,
-            HEAT_CAPACITY, CONDUCTANCE);
+            HEAT_CAPACITY, CONDUCTANCE, LayerReading.MATERIAL, LayerReading.TEMPERATURE, LayerReading.C_AXIS);
+
+    /** The live libraries; the reader also works without any, as long as no layer names a material. */
+    private final List<MaterialLibrary> libraries = new CopyOnWriteArrayList<>();
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeLibrary")
+    void addLibrary(MaterialLibrary library) {
+        libraries.add(library);
+    }
+
+    void removeLibrary(MaterialLibrary library) {
+        libraries.remove(library);
+    }
 
     @Override
     public CaseDocument read(Path file) throws InputException {
+        return readExplained(file).document();
+    }
+
+    @Override
+    public ExplainedCase readExplained(Path file) throws InputException {
         JsonTree tree = new JsonTree();
         Block root = tree.read(file);
         Map<String, Integer> lines = tree.lines();
@@ -49,16 +79,23 @@ public final class CaseFileReader implements CaseFormat {
             if (root.has("description")) {
                 root.requireString("description");
             }
-            Stack stack = stack(object(root, "stack"));
+            double temperature = root.has(LayerReading.TEMPERATURE)
+                    ? positive(root, LayerReading.TEMPERATURE, "the sample's temperature in K")
+                    : LayerReading.DEFAULT_TEMPERATURE_K;
+            Supplier<MaterialCatalog> catalog = () -> new MaterialCatalog(libraries);
+            List<ValueOrigin> origins = new ArrayList<>();
+            Stack stack = stack(object(root, "stack"), temperature,
+                    root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins);
             Block geometry = object(root, "geometry");
             Block measurement = object(root, "measurement");
-            return new CaseDocument(file, stack, geometry, measurement, root, lines);
+            return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines), origins);
         } catch (InputException e) {
             throw new CaseDocument(file, null, null, null, root, lines).locate(e);
         }
     }
 
-    static Stack stack(Block s) throws InputException {
+    static Stack stack(Block s, double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
+                       Map<String, Integer> lines, List<ValueOrigin> origins) throws InputException {
         onlyKnownKeys(s, STACK_KEYS, "the stack");
         BottomBoundary bottom = BottomBoundary.SEMI_INFINITE;
         if (s.has("bottom")) {
@@ -86,7 +123,7 @@ public final class CaseFileReader implements CaseFormat {
                 throw InputException.at(at, "expected a layer object, got " + Block.describe(list.get(i)));
             }
             boolean last = i == list.size() - 1;
-            Layer layer = layer(l, last, bottom);
+            Layer layer = LayerReading.read(l, last, bottom, temperature, temperaturePath, catalog, lines, origins);
             Integer before = seen.put(layer.name(), i);
             if (before != null) {
                 throw InputException.at(l.pathOf(NAME), "the name '" + layer.name() + "' is already used by "
@@ -97,42 +134,7 @@ public final class CaseFileReader implements CaseFormat {
         return new Stack(layers, bottom);
     }
 
-    private static Layer layer(Block l, boolean last, BottomBoundary bottom) throws InputException {
-        onlyKnownKeys(l, LAYER_KEYS, "a layer");
-        String name = l.requireString(NAME);
-        if (name.isBlank()) {
-            throw InputException.at(l.pathOf(NAME), "a layer's name must not be blank");
-        }
-        boolean semiInfinite = last && bottom == BottomBoundary.SEMI_INFINITE;
-        double thickness;
-        if (semiInfinite) {
-            if (l.has(THICKNESS)) {
-                throw InputException.at(l.pathOf(THICKNESS), "the last layer of a stack with a semi-infinite bottom"
-                        + " extends without end; leave out " + THICKNESS + ", or set stack.bottom to 'adiabatic' or"
-                        + " 'isothermal'");
-            }
-            thickness = Double.POSITIVE_INFINITY;
-        } else {
-            thickness = positive(l, THICKNESS, "the layer's thickness in m"
-                    + (last ? " (the bottom is " + bottom.caseName() + ")" : ""));
-        }
-        double kz = positive(l, K_THROUGH, "the through-plane thermal conductivity in W/(m K)");
-        double kr = l.has(K_IN_PLANE) ? positive(l, K_IN_PLANE, "the in-plane thermal conductivity") : kz;
-        double kx = l.has(K_IN_PLANE_X) ? positive(l, K_IN_PLANE_X, "the in-plane thermal conductivity along x") : kr;
-        double ky = l.has(K_IN_PLANE_Y) ? positive(l, K_IN_PLANE_Y, "the in-plane thermal conductivity along y") : kr;
-        double c = positive(l, HEAT_CAPACITY, "the volumetric heat capacity in J/(m³ K)");
-        double g = Double.POSITIVE_INFINITY;
-        if (l.has(CONDUCTANCE)) {
-            if (last) {
-                throw InputException.at(l.pathOf(CONDUCTANCE), "the last layer has no layer below it; a boundary"
-                        + " conductance belongs to the upper of two neighbouring layers");
-            }
-            g = positive(l, CONDUCTANCE, "the thermal boundary conductance to the next layer in W/(m² K)");
-        }
-        return new Layer(name, thickness, kz, kx, ky, c, g);
-    }
-
-    private static double positive(Block b, String key, String what) throws InputException {
+    static double positive(Block b, String key, String what) throws InputException {
         Object v = b.get(key);
         if (v == null) {
             throw InputException.at(b.pathOf(key), "missing; expected " + what);

@@ -1,0 +1,10 @@
+package lamella.api;
+
+import java.nio.file.Path;
+
+/** A {@link CaseFormat} that can also say where every value of a case's stack came from. */
+public interface ExplainingCaseFormat extends CaseFormat {
+
+    /** Reads a case as {@link #read} does, keeping the origin of every stack value. */
+    ExplainedCase readExplained(Path file) throws InputException;
+}
