@@ -11,12 +11,14 @@ import lamella.api.BottomBoundary;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.Layer;
+import lamella.api.ModelEvaluationException;
 import lamella.api.Simulation;
 import lamella.api.Stack;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -38,20 +40,21 @@ public final class BenchmarkCommand implements Command {
     @Reference
     private StackKernels kernels;
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
-            unbind = "removeGeometry")
-    void addGeometry(HeatingGeometry g) {
-        models.add(g);
+    /** With the service's reference, so that a failure can name the bundle that registered it. */
+    @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeGeometry")
+    void addGeometry(ServiceReference<HeatingGeometry> reference, HeatingGeometry g) {
+        models.add(g, PluginOrigin.of(reference));
     }
 
     void removeGeometry(HeatingGeometry g) {
         models.remove(g);
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
-            unbind = "removeTechnique")
-    void addTechnique(Technique t) {
-        models.add(t);
+    @Reference(service = Technique.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeTechnique")
+    void addTechnique(ServiceReference<Technique> reference, Technique t) {
+        models.add(t, PluginOrigin.of(reference));
     }
 
     void removeTechnique(Technique t) {
@@ -104,6 +107,9 @@ public final class BenchmarkCommand implements Command {
         } catch (InputException e) {
             io.err().println("lamella benchmark: the built-in cases need the gaussian geometry and the fdtr and tdtr"
                     + " techniques: " + e.getMessage());
+            return FAILED;
+        } catch (ModelEvaluationException e) {
+            io.err().println("lamella benchmark: cannot evaluate the built-in cases: " + e.getMessage());
             return FAILED;
         }
     }

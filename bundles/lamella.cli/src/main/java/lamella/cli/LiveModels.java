@@ -9,30 +9,31 @@ import lamella.api.Technique;
 
 /**
  * The geometries and techniques live at this moment, kept up to date by a command's dynamic references, so a
- * bundle dropped into plugins/ (or removed) changes what the next run can use.
+ * bundle dropped into plugins/ (or removed) changes what the next run can use. Each is held behind a guard that
+ * names its bundle when it fails; removal finds the guard by the plug-in it wraps.
  */
 final class LiveModels {
 
-    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
-    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+    private final List<GuardedGeometry> geometries = new CopyOnWriteArrayList<>();
+    private final List<GuardedTechnique> techniques = new CopyOnWriteArrayList<>();
 
-    void add(HeatingGeometry g) {
-        geometries.add(g);
+    void add(HeatingGeometry g, PluginOrigin origin) {
+        geometries.add(new GuardedGeometry(g, origin));
     }
 
     void remove(HeatingGeometry g) {
-        geometries.remove(g);
+        geometries.removeIf(guard -> guard.guards(g));
     }
 
-    void add(Technique t) {
-        techniques.add(t);
+    void add(Technique t, PluginOrigin origin) {
+        techniques.add(new GuardedTechnique(t, origin));
     }
 
     void remove(Technique t) {
-        techniques.remove(t);
+        techniques.removeIf(guard -> guard.guards(t));
     }
 
     ModelCatalog catalog(StackKernels kernels) {
-        return new ModelCatalog(geometries, techniques, kernels);
+        return new ModelCatalog(List.<HeatingGeometry>copyOf(geometries), List.<Technique>copyOf(techniques), kernels);
     }
 }

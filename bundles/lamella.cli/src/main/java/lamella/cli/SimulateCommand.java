@@ -14,6 +14,7 @@ import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -31,20 +32,21 @@ public final class SimulateCommand implements Command {
     @Reference
     private StackKernels kernels;
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
-            unbind = "removeGeometry")
-    void addGeometry(HeatingGeometry g) {
-        models.add(g);
+    /** With the service's reference, so that a failure can name the bundle that registered it. */
+    @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeGeometry")
+    void addGeometry(ServiceReference<HeatingGeometry> reference, HeatingGeometry g) {
+        models.add(g, PluginOrigin.of(reference));
     }
 
     void removeGeometry(HeatingGeometry g) {
         models.remove(g);
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
-            unbind = "removeTechnique")
-    void addTechnique(Technique t) {
-        models.add(t);
+    @Reference(service = Technique.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeTechnique")
+    void addTechnique(ServiceReference<Technique> reference, Technique t) {
+        models.add(t, PluginOrigin.of(reference));
     }
 
     void removeTechnique(Technique t) {

@@ -85,15 +85,15 @@ class SimulateCommandTest {
         command = new SimulateCommand();
         inject(command, "caseFormat", new CaseFileReader());
         inject(command, "kernels", new Engine());
-        command.addGeometry(new GaussianBeams());
-        command.addGeometry(new PointSource());
-        command.addGeometry(new RingSource());
-        command.addGeometry(new EllipticBeams());
-        command.addGeometry(line);
-        command.addTechnique(new FrequencyDomain());
-        command.addTechnique(new TimeDomain());
-        command.addTechnique(new SteadyState());
-        command.addTechnique(new ThreeOmega());
+        command.addGeometry(Registrations.shipped("lamella.geometry.gaussian"), new GaussianBeams());
+        command.addGeometry(Registrations.shipped("lamella.geometry.point"), new PointSource());
+        command.addGeometry(Registrations.shipped("lamella.geometry.ring"), new RingSource());
+        command.addGeometry(Registrations.shipped("lamella.geometry.elliptic"), new EllipticBeams());
+        command.addGeometry(Registrations.shipped("lamella.geometry.line"), line);
+        command.addTechnique(Registrations.shipped("lamella.technique.fdtr"), new FrequencyDomain());
+        command.addTechnique(Registrations.shipped("lamella.technique.tdtr"), new TimeDomain());
+        command.addTechnique(Registrations.shipped("lamella.technique.sstr"), new SteadyState());
+        command.addTechnique(Registrations.shipped("lamella.technique.threeomega"), new ThreeOmega());
     }
 
     /** What Declarative Services does for the static references. */
