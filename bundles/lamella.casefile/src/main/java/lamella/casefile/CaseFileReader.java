@@ -37,8 +37,9 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 @Component(service = {CaseFormat.class, ExplainingCaseFormat.class})
 public final class CaseFileReader implements ExplainingCaseFormat {
 
+    /** {@code fit} is read by the fitting service; this reader only lets it through. */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
-            LayerReading.TEMPERATURE);
+            LayerReading.TEMPERATURE, "fit");
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
