@@ -78,7 +78,9 @@ class LabGeometryIT {
 
     @AfterEach
     void stop() {
-        context.ungetService(simulateReference);
+        if (simulateReference != null) {
+            context.ungetService(simulateReference);
+        }
         runtime.close();
     }
 
