@@ -22,7 +22,8 @@ public final class PluginsCommand implements Command {
     static final List<ServiceKind> KINDS = List.of(
             new ServiceKind("geometry", "lamella.api.HeatingGeometry", "type"),
             new ServiceKind("technique", "lamella.api.Technique", "type"),
-            new ServiceKind("command", "lamella.api.command.Command", "name"));
+            new ServiceKind("command", "lamella.api.command.Command", "name"),
+            new ServiceKind("material library", "lamella.api.material.MaterialLibrary", "id"));
 
     static final String PLUGINS_DIR_PROPERTY = "lamella.plugins.dir";
 

@@ -66,12 +66,14 @@ public final class SimulateCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella simulate CASE.json [--out FILE.csv]
+                usage: lamella simulate CASE.json [--out FILE.csv] [--explain]
 
                 Reads the case (stack, geometry, measurement), evaluates the model at the measurement's x values
                 and writes one CSV row per x value: the x column (frequency_hz, delay_s; none for sstr) and the
                 technique's signal columns, 13 significant digits, SI units. Without --out the CSV goes to
                 standard output. Bad input is reported with the file, line and JSON path; exit status 2.
+                --explain also writes to standard error every layer value used and where it came from: the case
+                file (with its line), a material library (entry, version, source, temperature) or a default.
                 """;
     }
 
@@ -79,6 +81,7 @@ public final class SimulateCommand implements Command {
     public int run(List<String> args, CommandIO io) {
         String caseArg = null;
         String outArg = null;
+        boolean explain = false;
         for (int i = 0; i < args.size(); i++) {
             String a = args.get(i);
             if (a.equals("--out")) {
@@ -87,6 +90,8 @@ public final class SimulateCommand implements Command {
                     return BAD_INPUT;
                 }
                 outArg = args.get(++i);
+            } else if (a.equals("--explain")) {
+                explain = true;
             } else if (a.startsWith("-")) {
                 io.err().println("lamella simulate: unknown option " + a + "\n" + usage());
                 return BAD_INPUT;
@@ -104,7 +109,8 @@ public final class SimulateCommand implements Command {
         Path casePath = io.resolve(caseArg);
         SignalTable table;
         try {
-            CaseDocument doc = caseFormat.read(casePath);
+            CaseDocument doc = explain ? ValueOrigins.readExplaining(caseFormat, casePath, io.err())
+                    : caseFormat.read(casePath);
             Simulation simulation = models.catalog(kernels).simulation(doc);
             if (simulation.measurement().xValues().length == 0) {
                 String key = simulation.technique().xParameter().orElse("x values");

@@ -1,0 +1,46 @@
+package lamella.cli;
+
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.util.Locale;
+import lamella.api.CaseDocument;
+import lamella.api.CaseFormat;
+import lamella.api.ExplainedCase;
+import lamella.api.ExplainingCaseFormat;
+import lamella.api.InputException;
+import lamella.api.Units;
+import lamella.api.ValueOrigin;
+
+/** {@code simulate --explain}: every stack value a case uses, with where it came from, as a table. */
+final class ValueOrigins {
+
+    private ValueOrigins() {
+    }
+
+    /** Reads the case and writes the table of its values' origins to {@code err}. */
+    static CaseDocument readExplaining(CaseFormat format, Path file, PrintStream err) throws InputException {
+        if (!(format instanceof ExplainingCaseFormat explaining)) {
+            err.println("lamella simulate: the live case format does not record where values came from;"
+                    + " --explain has nothing to show");
+            return format.read(file);
+        }
+        ExplainedCase c = explaining.readExplained(file);
+        err.print(render(c));
+        return c.document();
+    }
+
+    static String render(ExplainedCase c) {
+        TextTable table = new TextTable("layer", "key", "value", "unit", "from");
+        for (ValueOrigin o : c.origins()) {
+            table.add(o.layer(), o.key(), value(o.value()), Units.ofKey(o.key()), o.describe());
+        }
+        return "values used by " + c.document().file() + ":\n" + table.render("  ");
+    }
+
+    private static String value(double v) {
+        if (Double.isInfinite(v)) {
+            return "∞";
+        }
+        return String.format(Locale.ROOT, "%.6g", v);
+    }
+}

@@ -1,0 +1,64 @@
+package lamella.materials;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import lamella.api.material.LibraryTier;
+import lamella.api.material.MaterialLibrary;
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceRegistration;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Deactivate;
+
+/**
+ * The facility and user libraries named by the runtime's configuration, each read once at start and offered as a
+ * {@link MaterialLibrary}. A folder that is named but missing is offered as an empty library with a finding, so the
+ * problem shows wherever libraries are listed instead of disappearing.
+ */
+@Component(immediate = true, service = {})
+public final class ConfiguredLibraries {
+
+    static final String FACILITY = "lamella.materials.facility";
+    static final String USER = "lamella.materials.user";
+    /** The user folder when {@value #USER} is not set, used only if it exists. */
+    static final String DEFAULT_USER_FOLDER = ".lamella/materials";
+    static final String WORKING_DIRECTORY = "lamella.cwd";
+
+    private final List<ServiceRegistration<MaterialLibrary>> registrations = new ArrayList<>();
+
+    @Activate
+    void activate(BundleContext context) {
+        Path base = Path.of(Optional.ofNullable(context.getProperty(WORKING_DIRECTORY))
+                .orElse(System.getProperty("user.dir")));
+        folder(context.getProperty(FACILITY), base).ifPresent(f -> registrations.add(
+                LibraryExtender.register(context, LibraryFolder.read(f, LibraryTier.FACILITY))));
+        userFolder(context.getProperty(USER), base, Path.of(System.getProperty("user.home"))).ifPresent(f ->
+                registrations.add(LibraryExtender.register(context, LibraryFolder.read(f, LibraryTier.USER))));
+    }
+
+    @Deactivate
+    void deactivate() {
+        registrations.forEach(ServiceRegistration::unregister);
+        registrations.clear();
+    }
+
+    /** A configured folder; empty when the setting is absent or blank. Relative paths are the user's. */
+    static Optional<Path> folder(String setting, Path base) {
+        if (setting == null || setting.isBlank()) {
+            return Optional.empty();
+        }
+        return Optional.of(base.resolve(setting.trim()).toAbsolutePath().normalize());
+    }
+
+    /** Unset: the default folder if it exists. Set but blank: no user library. */
+    static Optional<Path> userFolder(String setting, Path base, Path home) {
+        if (setting == null) {
+            Path standard = home.resolve(DEFAULT_USER_FOLDER);
+            return Files.isDirectory(standard) ? Optional.of(standard) : Optional.empty();
+        }
+        return folder(setting, base);
+    }
+}

@@ -1,0 +1,79 @@
+package lamella.materials;
+
+import java.net.URL;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Dictionary;
+import java.util.Enumeration;
+import java.util.Hashtable;
+import java.util.List;
+import lamella.api.material.LibraryTier;
+import lamella.api.material.MaterialLibrary;
+import org.osgi.framework.Bundle;
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.BundleEvent;
+import org.osgi.framework.ServiceRegistration;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Deactivate;
+import org.osgi.util.tracker.BundleTracker;
+
+/**
+ * Finds library bundles: a bundle whose manifest has {@value #HEADER} (the folder holding its library, such as
+ * {@code materials/}) gets a {@link MaterialLibrary} service of the shipped tier while it is active. A library is data
+ * only; no code is needed per library. Immediate, so that libraries are live before the first command runs.
+ */
+@Component(immediate = true, service = {})
+public final class LibraryExtender {
+
+    static final String HEADER = "Lamella-Material-Library";
+    static final String LIBRARY_ID = "lamella.material.library.id";
+    static final String LIBRARY_TIER = "lamella.material.library.tier";
+
+    private BundleTracker<ServiceRegistration<MaterialLibrary>> tracker;
+
+    @Activate
+    void activate(BundleContext context) {
+        tracker = new BundleTracker<>(context, Bundle.STARTING | Bundle.ACTIVE, null) {
+            @Override
+            public ServiceRegistration<MaterialLibrary> addingBundle(Bundle bundle, BundleEvent event) {
+                String folder = bundle.getHeaders("").get(HEADER);
+                if (folder == null) {
+                    return null;
+                }
+                return register(context, read(bundle, folder.trim()));
+            }
+
+            @Override
+            public void removedBundle(Bundle bundle, BundleEvent event, ServiceRegistration<MaterialLibrary> r) {
+                r.unregister();
+            }
+        };
+        tracker.open();
+    }
+
+    @Deactivate
+    void deactivate() {
+        tracker.close();
+    }
+
+    static ServiceRegistration<MaterialLibrary> register(BundleContext context, ReadLibrary library) {
+        Dictionary<String, Object> properties = new Hashtable<>();
+        properties.put(LIBRARY_ID, library.info().id());
+        properties.put(LIBRARY_TIER, library.info().tier().label());
+        return context.registerService(MaterialLibrary.class, library, properties);
+    }
+
+    static ReadLibrary read(Bundle bundle, String folder) {
+        String dir = folder.endsWith("/") ? folder : folder + "/";
+        String origin = bundle.getSymbolicName() + " " + bundle.getVersion();
+        List<SourceFile> files = new ArrayList<>();
+        Enumeration<URL> found = bundle.findEntries(dir, "*.json", false);
+        for (URL url : found == null ? Collections.<URL>emptyList() : Collections.list(found)) {
+            String path = url.getPath();
+            String name = path.substring(path.lastIndexOf('/') + 1);
+            files.add(new SourceFile(bundle.getSymbolicName() + "!/" + dir + name, name, url::openStream));
+        }
+        return LibraryReader.read(LibraryTier.SHIPPED, "bundle " + origin + ", " + dir, files);
+    }
+}
