@@ -1,0 +1,123 @@
+package lamella.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import lamella.api.CaseDocument;
+import lamella.api.CaseFormat;
+import lamella.api.InputException;
+import lamella.api.ModelEvaluationException;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import lamella.api.fit.FitService;
+import lamella.api.fit.SensitivityTable;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+
+/** {@code lamella sensitivity CASE.json [--dataset N] [--signal NAME] [--out FILE.csv]}. */
+@Component(service = Command.class)
+public final class SensitivityCommand implements Command {
+
+    @Reference
+    private CaseFormat caseFormat;
+
+    @Reference
+    private FitService fitter;
+
+    @Override
+    public String name() {
+        return "sensitivity";
+    }
+
+    @Override
+    public String summary() {
+        return "Shows how strongly the signal responds to every input, over the measurement's x values.";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                usage: lamella sensitivity CASE.json [--dataset N] [--signal NAME] [--out FILE.csv]
+
+                For every numeric input p of the case (layer thicknesses, conductivities, heat capacities, boundary
+                conductances, beam radii) computes S = d ln(signal) / d ln(p) over x — for a phase, d(phase) / d ln(p)
+                in degrees — so that a measurement can be designed before it is made: inputs with large |S| are
+                resolved, inputs with small |S| are not, and inputs whose curves have the same shape cannot be told
+                apart. Without --dataset the case's measurement is used; with it, that fit dataset at its data's x
+                values. The signal defaults to the one usually fitted (tdtr: ratio, fdtr: phase_deg). Writes CSV (x
+                column, then one column per input, named by its path such as film.k_through_w_mk) to --out or
+                standard output, and a ranking by the largest |S| to standard error.
+                """;
+    }
+
+    @Override
+    public int run(List<String> args, CommandIO io) {
+        Options o;
+        try {
+            o = Options.parse(args, "sensitivity", List.of("--dataset", "--signal", "--out"));
+        } catch (IllegalArgumentException e) {
+            io.err().println(e.getMessage() + "\n" + usage());
+            return BAD_INPUT;
+        }
+        Path casePath = io.resolve(o.positional());
+        try {
+            int dataset = o.has("--dataset") ? o.count("--dataset", 0) : -1;
+            CaseDocument doc = caseFormat.read(casePath);
+            SensitivityTable t = fitter.sensitivity(doc, dataset, o.value("--signal"));
+            String csv = csv(t);
+            io.err().print(ranking(t));
+            if (o.has("--out")) {
+                Path out = io.resolve(o.value("--out"));
+                SignalCsv.writeAtomically(out, csv);
+                io.err().println("wrote " + out);
+            } else {
+                io.out().print(csv);
+                io.out().flush();
+            }
+            return OK;
+        } catch (IllegalArgumentException | InputException e) {
+            io.err().println("lamella sensitivity: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (ModelEvaluationException e) {
+            io.err().println("lamella sensitivity: " + casePath + ": the model cannot be evaluated: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (IOException e) {
+            io.err().println("lamella sensitivity: cannot write: " + e.getMessage());
+            return FAILED;
+        }
+    }
+
+    static String csv(SensitivityTable t) {
+        StringBuilder sb = new StringBuilder(t.xColumn());
+        t.parameters().forEach(p -> sb.append(',').append(p));
+        sb.append('\n');
+        for (int i = 0; i < t.x().length; i++) {
+            sb.append(SignalCsv.number(t.x()[i]));
+            for (double[] column : t.values()) {
+                sb.append(',').append(SignalCsv.number(column[i]));
+            }
+            sb.append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static String ranking(SensitivityTable t) {
+        List<Integer> order = new ArrayList<>();
+        double[] peak = new double[t.parameters().size()];
+        for (int j = 0; j < peak.length; j++) {
+            order.add(j);
+            for (double v : t.values()[j]) {
+                peak[j] = Math.max(peak[j], Math.abs(v));
+            }
+        }
+        order.sort(Comparator.comparingDouble(j -> -peak[j]));
+        TextTable table = new TextTable("input", t.phaseLike() ? "largest |dφ/d ln p| (°)" : "largest |S|");
+        for (int j : order) {
+            table.add(t.parameters().get(j).toString(), String.format(Locale.ROOT, "%.3g", peak[j]));
+        }
+        return "Sensitivity of " + t.signal() + " over " + t.xColumn() + "\n" + table.render("  ");
+    }
+}

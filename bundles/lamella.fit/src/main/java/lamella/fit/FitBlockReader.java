@@ -1,0 +1,261 @@
+package lamella.fit;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import java.util.TreeSet;
+import lamella.api.Block;
+import lamella.api.CaseDocument;
+import lamella.api.CaseModel;
+import lamella.api.InputException;
+import lamella.api.Names;
+import lamella.api.ParameterRef;
+
+/**
+ * Reads the {@code fit} block of a case: what to fit to, what is free, what is uncertain. Every mistake is an
+ * InputException at its JSON path; unknown keys are errors.
+ */
+final class FitBlockReader {
+
+    static final Set<String> FIT_KEYS = Set.of("datasets", "free", "uncertain", "weights", "multistart",
+            "monte_carlo", "seed");
+    static final Set<String> DATASET_KEYS = Set.of("data", "signal", "measurement", "geometry");
+    static final Set<String> REF_KEYS = Set.of("layer", "property", "geometry", "measurement", "dataset");
+    static final Set<String> FREE_KEYS = union(REF_KEYS, Set.of("initial", "min", "max"));
+    static final Set<String> UNCERTAIN_KEYS = union(REF_KEYS, Set.of("sigma", "sigma_relative"));
+
+    private FitBlockReader() {
+    }
+
+    static FitSpec read(CaseDocument doc) throws InputException {
+        Object raw = doc.root().get("fit");
+        if (raw == null) {
+            throw InputException.at("fit", "the case has no fit block; add \"fit\": {\"datasets\": […], \"free\": […]}");
+        }
+        if (!(raw instanceof Block fit)) {
+            throw InputException.at("fit", "expected an object, got " + Block.describe(raw));
+        }
+        only(fit, FIT_KEYS, "the fit block");
+        CaseModel base = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+        List<DatasetSpec> datasets = datasets(fit, doc.file());
+        List<FreeInput> free = new ArrayList<>();
+        Set<ParameterRef> seen = new HashSet<>();
+        for (Block e : objects(fit, "free", true)) {
+            only(e, FREE_KEYS, "a free input");
+            ParameterRef ref = ref(e, datasets);
+            if (!seen.add(ref)) {
+                throw InputException.at(e.path(), ref + " is listed twice");
+            }
+            free.add(freeInput(e, ref, value(base, datasets, ref, e.path())));
+        }
+        List<UncertainInput> uncertain = new ArrayList<>();
+        for (Block e : objects(fit, "uncertain", false)) {
+            only(e, UNCERTAIN_KEYS, "an uncertain input");
+            ParameterRef ref = ref(e, datasets);
+            if (!seen.add(ref)) {
+                throw InputException.at(e.path(), ref + " is already free or uncertain; an input is one or the other");
+            }
+            double v = value(base, datasets, ref, e.path());
+            uncertain.add(new UncertainInput(ref, v, sigma(e, v), e.path()));
+        }
+        FitSpec.Weighting weighting = FitSpec.Weighting.AUTO;
+        if (fit.has("weights")) {
+            String w = fit.requireString("weights");
+            weighting = switch (w) {
+                case "auto" -> FitSpec.Weighting.AUTO;
+                case "data" -> FitSpec.Weighting.DATA;
+                case "residuals" -> FitSpec.Weighting.RESIDUALS;
+                default -> throw InputException.at(fit.pathOf("weights"), "unknown weighting '" + w
+                        + "'; expected auto, data or residuals");
+            };
+        }
+        return new FitSpec(datasets, free, uncertain, weighting, count(fit, "multistart"), count(fit, "monte_carlo"),
+                fit.has("seed") ? (long) count(fit, "seed") : 1L);
+    }
+
+    private static List<DatasetSpec> datasets(Block fit, Path caseFile) throws InputException {
+        List<DatasetSpec> out = new ArrayList<>();
+        Path folder = caseFile.toAbsolutePath().getParent();
+        for (Block d : objects(fit, "datasets", true)) {
+            only(d, DATASET_KEYS, "a dataset");
+            String data = d.requireString("data");
+            String signal = d.has("signal") ? d.requireString("signal") : null;
+            out.add(new DatasetSpec(out.size(), data, folder.resolve(data).normalize(), signal,
+                    optionalObject(d, "geometry"), optionalObject(d, "measurement"), d.path()));
+        }
+        return out;
+    }
+
+    private static ParameterRef ref(Block e, List<DatasetSpec> datasets) throws InputException {
+        int kinds = (e.has("layer") ? 1 : 0) + (e.has("geometry") ? 1 : 0) + (e.has("measurement") ? 1 : 0);
+        if (kinds != 1) {
+            throw InputException.at(e.path(), "name exactly one of \"layer\" (with \"property\"), \"geometry\" or"
+                    + " \"measurement\"");
+        }
+        if (e.has("layer")) {
+            if (e.has("dataset")) {
+                throw InputException.at(e.pathOf("dataset"), "layers belong to the stack every dataset shares");
+            }
+            String property = e.requireString("property");
+            if (!CaseModel.LAYER_KEYS.contains(property)) {
+                String hint = Names.closest(property, CaseModel.LAYER_KEYS).map(k -> " (did you mean '" + k + "'?)")
+                        .orElse("");
+                throw InputException.at(e.pathOf("property"), "unknown layer property '" + property + "'" + hint
+                        + "; expected one of: " + String.join(", ", CaseModel.LAYER_KEYS));
+            }
+            return ParameterRef.layer(e.requireString("layer"), property);
+        }
+        if (e.has("property")) {
+            throw InputException.at(e.pathOf("property"), "\"property\" goes with \"layer\"; for a geometry or"
+                    + " measurement input the key itself is the value, e.g. {\"geometry\": \"pump_radius_m\"}");
+        }
+        boolean geometry = e.has("geometry");
+        String key = e.requireString(geometry ? "geometry" : "measurement");
+        ParameterRef ref = geometry ? ParameterRef.geometry(key) : ParameterRef.measurement(key);
+        if (e.has("dataset")) {
+            int i = count(e, "dataset");
+            if (i >= datasets.size()) {
+                throw InputException.at(e.pathOf("dataset"), "there are only " + datasets.size() + " datasets");
+            }
+            DatasetSpec d = datasets.get(i);
+            if ((geometry ? d.geometry() : d.measurement()) == null) {
+                throw InputException.at(e.pathOf("dataset"), "dataset " + i + " has no " + (geometry ? "geometry"
+                        : "measurement") + " block of its own; leave out \"dataset\" to address the case's");
+            }
+            ref = ref.inDataset(i);
+        }
+        return ref;
+    }
+
+    /** The input's value in the case, checking that some dataset actually uses it. */
+    private static double value(CaseModel base, List<DatasetSpec> datasets, ParameterRef ref, String at)
+            throws InputException {
+        if (ref.scope() == ParameterRef.Scope.LAYER) {
+            return base.value(ref, at);
+        }
+        boolean geometry = ref.scope() == ParameterRef.Scope.GEOMETRY;
+        if (ref.dataset() >= 0) {
+            DatasetSpec d = datasets.get(ref.dataset());
+            Block b = geometry ? d.geometry() : d.measurement();
+            return new CaseModel(base.stack(), geometry ? b : base.geometry(), geometry ? base.measurement() : b)
+                    .value(new ParameterRef(ref.scope(), null, ref.key(), -1), at);
+        }
+        boolean used = datasets.stream().anyMatch(d -> (geometry ? d.geometry() : d.measurement()) == null);
+        if (!used) {
+            throw InputException.at(at, "every dataset has its own " + (geometry ? "geometry" : "measurement")
+                    + " block, so the case's " + ref.key() + " is not used; add \"dataset\": N");
+        }
+        return base.value(ref, at);
+    }
+
+    private static FreeInput freeInput(Block e, ParameterRef ref, double current) throws InputException {
+        double initial = e.has("initial") ? finite(e, "initial") : current;
+        double min = e.has("min") ? finite(e, "min") : Double.NEGATIVE_INFINITY;
+        double max = e.has("max") ? finite(e, "max") : Double.POSITIVE_INFINITY;
+        if (min >= max) {
+            throw InputException.at(e.pathOf("max"), "the upper bound " + max + " must exceed the lower bound " + min);
+        }
+        if (initial < min || initial > max) {
+            throw InputException.at(e.has("initial") ? e.pathOf("initial") : e.path(), "the initial value " + initial
+                    + " lies outside [" + min + ", " + max + "]");
+        }
+        boolean positive = ref.scope() == ParameterRef.Scope.LAYER || (initial > 0 && min >= 0);
+        if (ref.scope() == ParameterRef.Scope.LAYER && !(initial > 0)) {
+            throw InputException.at(e.has("initial") ? e.pathOf("initial") : e.path(), "a layer property is"
+                    + " positive; the initial value " + initial + " is not");
+        }
+        if (positive && min == 0) {
+            min = Double.NEGATIVE_INFINITY;
+        }
+        double scale = Math.max(Math.abs(initial), Math.max(finiteOr(Math.abs(min)), finiteOr(Math.abs(max))));
+        return new FreeInput(ref, initial, min, max, positive, scale > 0 ? scale : 1.0, e.path());
+    }
+
+    private static double sigma(Block e, double value) throws InputException {
+        if (e.has("sigma") == e.has("sigma_relative")) {
+            throw InputException.at(e.path(), "give either \"sigma\" (absolute, in the input's unit) or"
+                    + " \"sigma_relative\" (a fraction of its value)");
+        }
+        double s = e.has("sigma") ? finite(e, "sigma") : finite(e, "sigma_relative") * Math.abs(value);
+        if (!(s > 0)) {
+            throw InputException.at(e.pathOf(e.has("sigma") ? "sigma" : "sigma_relative"),
+                    "an uncertainty must be positive");
+        }
+        return s;
+    }
+
+    private static List<Block> objects(Block parent, String key, boolean required) throws InputException {
+        Object v = parent.get(key);
+        if (v == null) {
+            if (required) {
+                throw InputException.at(parent.pathOf(key), "missing; expected a non-empty list");
+            }
+            return List.of();
+        }
+        if (!(v instanceof List<?> list) || (required && list.isEmpty())) {
+            throw InputException.at(parent.pathOf(key), "expected a" + (required ? " non-empty" : "")
+                    + " list of objects, got " + Block.describe(v));
+        }
+        List<Block> out = new ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            if (!(list.get(i) instanceof Block b)) {
+                throw InputException.at(parent.pathOf(key) + "[" + i + "]", "expected an object, got "
+                        + Block.describe(list.get(i)));
+            }
+            out.add(b);
+        }
+        return out;
+    }
+
+    private static Block optionalObject(Block parent, String key) throws InputException {
+        Object v = parent.get(key);
+        if (v == null) {
+            return null;
+        }
+        if (!(v instanceof Block b)) {
+            throw InputException.at(parent.pathOf(key), "expected an object, got " + Block.describe(v));
+        }
+        return b;
+    }
+
+    private static double finite(Block b, String key) throws InputException {
+        Object v = b.get(key);
+        if (!(v instanceof Double d)) {
+            throw InputException.at(b.pathOf(key), "expected a number, got " + Block.describe(v));
+        }
+        return d;
+    }
+
+    private static int count(Block b, String key) throws InputException {
+        if (!b.has(key)) {
+            return 0;
+        }
+        double d = finite(b, key);
+        if (d < 0 || d != Math.rint(d) || d > Integer.MAX_VALUE) {
+            throw InputException.at(b.pathOf(key), "expected a whole number ≥ 0, got " + d);
+        }
+        return (int) d;
+    }
+
+    private static double finiteOr(double v) {
+        return Double.isFinite(v) ? v : 0.0;
+    }
+
+    private static void only(Block b, Set<String> known, String what) throws InputException {
+        for (String key : b.values().keySet()) {
+            if (!known.contains(key)) {
+                String hint = Names.closest(key, known).map(k -> " (did you mean '" + k + "'?)").orElse("");
+                throw InputException.at(b.pathOf(key), "unknown key in " + what + hint + "; expected one of: "
+                        + String.join(", ", new TreeSet<>(known)));
+            }
+        }
+    }
+
+    private static Set<String> union(Set<String> a, Set<String> b) {
+        Set<String> s = new HashSet<>(a);
+        s.addAll(b);
+        return Set.copyOf(s);
+    }
+}

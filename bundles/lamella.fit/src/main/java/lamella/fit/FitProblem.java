@@ -1,0 +1,179 @@
+package lamella.fit;
+
+import java.util.ArrayList;
+import java.util.List;
+import lamella.api.Block;
+import lamella.api.CaseDocument;
+import lamella.api.CaseModel;
+import lamella.api.InputException;
+import lamella.api.ModelCatalog;
+import lamella.api.ModelEvaluationException;
+import lamella.api.ParameterRef;
+import lamella.api.Simulation;
+import lamella.api.Technique;
+
+/**
+ * The datasets, free and uncertain inputs of one fit, and the model of all datasets at once: the concatenation of
+ * every dataset's modelled signal divided by its σ, as a function of the free inputs (in their fitting variables u)
+ * and the uncertain inputs (in their natural units).
+ */
+final class FitProblem {
+
+    final List<PreparedDataset> datasets;
+    final List<FreeInput> free;
+    final List<UncertainInput> uncertain;
+    final FitSpec spec;
+    private final ModelCatalog catalog;
+    private final List<ParameterRef> refs = new ArrayList<>();
+    private final int points;
+
+    private FitProblem(List<PreparedDataset> datasets, FitSpec spec, ModelCatalog catalog) {
+        this.datasets = List.copyOf(datasets);
+        this.free = spec.free();
+        this.uncertain = spec.uncertain();
+        this.spec = spec;
+        this.catalog = catalog;
+        free.forEach(f -> refs.add(f.ref()));
+        uncertain.forEach(u -> refs.add(u.ref()));
+        this.points = datasets.stream().mapToInt(PreparedDataset::size).sum();
+    }
+
+    static FitProblem of(CaseDocument doc, FitSpec spec, ModelCatalog catalog) throws InputException {
+        List<PreparedDataset> prepared = new ArrayList<>();
+        for (DatasetSpec d : spec.datasets()) {
+            prepared.add(prepare(doc, d, catalog, spec.weighting()));
+        }
+        FitProblem p = new FitProblem(prepared, spec, catalog);
+        for (FreeInput f : spec.free()) {
+            if (prepared.stream().noneMatch(d -> d.uses(f.ref()))) {
+                throw InputException.at(f.path(), f.ref() + " reaches no dataset");
+            }
+        }
+        if (p.points <= spec.free().size()) {
+            throw InputException.at("fit.free", spec.free().size() + " free inputs but only " + p.points
+                    + " data points; a fit needs more points than unknowns");
+        }
+        p.checkEvaluates();
+        return p;
+    }
+
+    private static PreparedDataset prepare(CaseDocument doc, DatasetSpec d, ModelCatalog catalog,
+                                           FitSpec.Weighting weighting) throws InputException {
+        Block geometry = d.geometry() != null ? d.geometry() : doc.geometry();
+        Block measurement = d.measurement() != null ? d.measurement() : doc.measurement();
+        CaseModel model = new CaseModel(doc.stack(), geometry, measurement);
+        Simulation sim = model.simulation(catalog);
+        Technique t = sim.technique();
+        String signal = d.signal() != null ? d.signal() : Signals.usual(t.type()).orElseThrow(() ->
+                InputException.at(d.path() + ".signal", "name the signal to fit; technique '" + t.type()
+                        + "' gives " + String.join(", ", t.signalColumns())));
+        if (!t.signalColumns().contains(signal)) {
+            throw InputException.at(d.path() + ".signal", "technique '" + t.type() + "' has no signal '" + signal
+                    + "'; it gives " + String.join(", ", t.signalColumns()));
+        }
+        DataTable table = DataTable.read(d.file());
+        String xColumn = t.xColumn().orElseThrow(() -> InputException.at(d.path(), "technique '" + t.type()
+                + "' has no x axis; its data cannot be fitted as a curve"));
+        for (String need : List.of(xColumn, signal)) {
+            if (!table.has(need)) {
+                throw new InputException(d.file(), null, 1, "no column '" + need + "' for " + d.path()
+                        + "; the file has " + String.join(", ", table.names()));
+            }
+        }
+        double[] sigma = null;
+        String sigmaColumn = "sigma_" + signal;
+        if (weighting != FitSpec.Weighting.RESIDUALS && table.has(sigmaColumn)) {
+            sigma = table.column(sigmaColumn);
+            for (int i = 0; i < sigma.length; i++) {
+                if (!(sigma[i] > 0)) {
+                    throw new InputException(d.file(), null, -1, "column '" + sigmaColumn + "', row " + (i + 1)
+                            + ": a standard deviation must be positive, got " + sigma[i]);
+                }
+            }
+        } else if (weighting == FitSpec.Weighting.DATA) {
+            throw new InputException(d.file(), null, 1, "the fit asks for weights from the data, but the file has"
+                    + " no column '" + sigmaColumn + "'");
+        }
+        return new PreparedDataset(d, model, t.type(), xColumn, signal, table.column(xColumn), table.column(signal),
+                sigma);
+    }
+
+    /** Fails early, with the case's words, when the model cannot be evaluated at the starting point. */
+    private void checkEvaluates() throws InputException {
+        double[] v = startValues();
+        for (PreparedDataset d : datasets) {
+            try {
+                d.evaluate(catalog, refs, v);
+            } catch (ModelEvaluationException e) {
+                throw InputException.at(d.spec.path(), "the model cannot be evaluated at the starting values: "
+                        + e.getMessage());
+            }
+        }
+    }
+
+    int points() {
+        return points;
+    }
+
+    List<ParameterRef> refs() {
+        return refs;
+    }
+
+    /** Free inputs at their initial values followed by uncertain inputs at theirs. */
+    double[] startValues() {
+        double[] v = new double[refs.size()];
+        for (int i = 0; i < free.size(); i++) {
+            v[i] = free.get(i).initial();
+        }
+        for (int k = 0; k < uncertain.size(); k++) {
+            v[free.size() + k] = uncertain.get(k).value();
+        }
+        return v;
+    }
+
+    /** The natural values of all inputs for fitting variables u and uncertain values. */
+    double[] values(double[] u, double[] uncertainValues) {
+        double[] v = new double[refs.size()];
+        for (int i = 0; i < free.size(); i++) {
+            v[i] = free.get(i).toP(u[i]);
+        }
+        System.arraycopy(uncertainValues, 0, v, free.size(), uncertainValues.length);
+        return v;
+    }
+
+    double[] nominalUncertain() {
+        double[] v = new double[uncertain.size()];
+        for (int k = 0; k < v.length; k++) {
+            v[k] = uncertain.get(k).value();
+        }
+        return v;
+    }
+
+    /** The modelled signal of every dataset, concatenated (not weighted). */
+    double[] model(double[] values) {
+        double[] out = new double[points];
+        int at = 0;
+        for (PreparedDataset d : datasets) {
+            double[] m;
+            try {
+                m = d.evaluate(catalog, refs, values);
+            } catch (InputException e) {
+                throw new ModelEvaluationException("the fit reached inputs the model rejects: " + e.getMessage(), e);
+            }
+            System.arraycopy(m, 0, out, at, m.length);
+            at += m.length;
+        }
+        return out;
+    }
+
+    /** The measured signal of every dataset, concatenated. */
+    double[] data() {
+        double[] out = new double[points];
+        int at = 0;
+        for (PreparedDataset d : datasets) {
+            System.arraycopy(d.y, 0, out, at, d.size());
+            at += d.size();
+        }
+        return out;
+    }
+}

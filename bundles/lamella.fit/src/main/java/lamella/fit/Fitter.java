@@ -1,0 +1,129 @@
+package lamella.fit;
+
+import java.util.List;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import lamella.api.CaseDocument;
+import lamella.api.CaseModel;
+import lamella.api.HeatingGeometry;
+import lamella.api.InputException;
+import lamella.api.ModelCatalog;
+import lamella.api.Simulation;
+import lamella.api.StackKernels;
+import lamella.api.Technique;
+import lamella.api.fit.FitOutcome;
+import lamella.api.fit.FitService;
+import lamella.api.fit.FitSettings;
+import lamella.api.fit.Progress;
+import lamella.api.fit.SensitivityTable;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+/** The fitting service: reads a case's fit block, fits, propagates uncertainty; computes sensitivities. */
+@Component(service = FitService.class)
+public final class Fitter implements FitService {
+
+    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
+    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+
+    @Reference
+    private StackKernels kernels;
+
+    public Fitter() {
+    }
+
+    /** For programs and tests that assemble the services themselves. */
+    public Fitter(StackKernels kernels, List<HeatingGeometry> geometries, List<Technique> techniques) {
+        this.kernels = kernels;
+        this.geometries.addAll(geometries);
+        this.techniques.addAll(techniques);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeGeometry")
+    void addGeometry(HeatingGeometry g) {
+        geometries.add(g);
+    }
+
+    void removeGeometry(HeatingGeometry g) {
+        geometries.remove(g);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeTechnique")
+    void addTechnique(Technique t) {
+        techniques.add(t);
+    }
+
+    void removeTechnique(Technique t) {
+        techniques.remove(t);
+    }
+
+    private ModelCatalog catalog() {
+        return new ModelCatalog(geometries, techniques, kernels);
+    }
+
+    @Override
+    public FitOutcome fit(CaseDocument doc, FitSettings settings, Progress progress) throws InputException {
+        FitSpec spec;
+        FitProblem problem;
+        try {
+            spec = FitBlockReader.read(doc);
+            problem = FitProblem.of(doc, spec, catalog());
+        } catch (InputException e) {
+            throw doc.locate(e);
+        }
+        int samples = settings.monteCarloSamples() > 0 ? settings.monteCarloSamples() : spec.monteCarlo();
+        long seed = settings.seed() != 0 ? settings.seed() : spec.seed();
+        ExecutorService pool = Executors.newFixedThreadPool(settings.threads(), r -> {
+            Thread t = new Thread(r, "lamella-fit");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            return new FitRunner(problem, pool, progress).run(samples, seed);
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Override
+    public SensitivityTable sensitivity(CaseDocument doc, int dataset, String signal) throws InputException {
+        try {
+            ModelCatalog catalog = catalog();
+            if (dataset < 0) {
+                CaseModel model = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+                Simulation sim = model.simulation(catalog);
+                double[] x = sim.measurement().xValues();
+                String xColumn = sim.technique().xColumn().orElse("x");
+                if (x.length == 0) {
+                    throw InputException.at(doc.measurement().pathOf(sim.technique().xParameter().orElse("x")),
+                            "missing; sensitivities are computed at the measurement's x values");
+                }
+                return Sensitivities.of(model, catalog, xColumn, x, chosen(sim.technique(), signal));
+            }
+            FitSpec spec = FitBlockReader.read(doc);
+            if (dataset >= spec.datasets().size()) {
+                throw InputException.at("fit.datasets", "there is no dataset " + dataset + "; the case has "
+                        + spec.datasets().size());
+            }
+            FitProblem problem = FitProblem.of(doc, spec, catalog);
+            PreparedDataset d = problem.datasets.get(dataset);
+            return Sensitivities.of(d.model, catalog, d.xColumn, d.x, signal != null ? signal : d.signal);
+        } catch (InputException e) {
+            throw doc.locate(e);
+        }
+    }
+
+    private static String chosen(Technique t, String signal) throws InputException {
+        String s = signal != null ? signal : Signals.usual(t.type()).orElse(t.signalColumns().get(0));
+        if (!t.signalColumns().contains(s)) {
+            throw InputException.at("signal", "technique '" + t.type() + "' has no signal '" + s + "'; it gives "
+                    + String.join(", ", t.signalColumns()));
+        }
+        return s;
+    }
+}

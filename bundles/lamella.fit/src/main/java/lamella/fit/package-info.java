@@ -1,0 +1,2 @@
+/** Least-squares fitting, sensitivity and uncertainty propagation. Implementation only: used through FitService. */
+package lamella.fit;
