@@ -23,6 +23,7 @@ public final class PluginsCommand implements Command {
             new ServiceKind("geometry", "lamella.api.HeatingGeometry", "type"),
             new ServiceKind("technique", "lamella.api.Technique", "type"),
             new ServiceKind("command", "lamella.api.command.Command", "name"),
+            new ServiceKind("importer", "lamella.api.data.DataImporter", "id"),
             new ServiceKind("material library", "lamella.api.material.MaterialLibrary", "id"));
 
     static final String PLUGINS_DIR_PROPERTY = "lamella.plugins.dir";

@@ -1,0 +1,155 @@
+package lamella.cli.data;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import lamella.api.InputException;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import lamella.api.data.DataImporter;
+import lamella.api.data.Dataset;
+import lamella.api.data.SignalNames;
+import lamella.conditioning.ConditionedTable;
+import lamella.conditioning.Conditioner;
+import lamella.conditioning.ConditioningOptions;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+/**
+ * {@code lamella import FILE …}: reads an instrument file with the best live importer (or the one named),
+ * conditions it and writes the normalised dataset as CSV, with a short report of what was done.
+ */
+@Component(service = Command.class)
+public final class ImportCommand implements Command {
+
+    private final LiveImporters importers = new LiveImporters();
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeImporter")
+    void addImporter(DataImporter i) {
+        importers.add(i);
+    }
+
+    void removeImporter(DataImporter i) {
+        importers.remove(i);
+    }
+
+    @Override
+    public String name() {
+        return "import";
+    }
+
+    @Override
+    public String summary() {
+        return "Reads an instrument data file, conditions it and writes the normalised dataset as CSV.";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                usage: lamella import FILE [--format ID] [--out DATA.csv] [--exclude FROM:TO]...
+                                      [--reference FILE] [--detection-phase DEG | --phase-as-recorded
+                                      | --step-window S] [--outlier-limit N]
+
+                Reads FILE with the live importer most sure it can (lamella formats lists them; --format ID
+                chooses one), averages its scans, marks outliers and writes one row per x: the x column
+                (delay_s or frequency_hz), the signals (in_phase, out_of_phase, ratio, amplitude, phase_deg),
+                sigma_<signal> standard deviations and the marks outlier and excluded (1 or 0; marked rows are
+                kept, a fit leaves them out). 13 significant digits, SI units, phase in degrees. Without --out the
+                CSV goes to standard output; a report of the conditioning goes to standard error.
+
+                  --exclude FROM:TO       mark rows with FROM <= x <= TO as excluded (x in s or Hz); repeatable
+                  --reference FILE        FDTR: subtract the phase of this reference measurement, taken at the
+                                          same frequencies (a known sample, or the pump at the detector)
+                  --detection-phase DEG   TDTR: rotate in-phase/out-of-phase by this phase instead of finding it
+                  --phase-as-recorded     TDTR: keep the signals as recorded
+                  --step-window S         TDTR: half-width of the windows either side of zero delay whose mean
+                                          change in out_of_phase the found phase removes (default 2e-11 s)
+                  --outlier-limit N       mark rows further than N robust standard deviations from the running
+                                          median of their neighbours (default 5; 0 marks none)
+
+                Bad input (an unreadable, binary, truncated or inconsistent file, a bad option) is reported with
+                the file and line; exit status 2, and no output is written.
+                """;
+    }
+
+    @Override
+    public int run(List<String> args, CommandIO io) {
+        ImportRequest request;
+        try {
+            request = ImportRequest.parse(args);
+        } catch (InputException e) {
+            io.err().println("lamella import: " + e.getMessage() + "\n" + usage());
+            return BAD_INPUT;
+        }
+        Path file = io.resolve(request.file());
+        ConditionedTable table;
+        DataImporter importer;
+        try {
+            importer = importers.choose(file, request.format());
+            Dataset data = read(importer, file);
+            if (request.phaseRequested() && data.xColumn().equals(SignalNames.FREQUENCY_HZ)) {
+                throw new InputException(file, null, -1, "--detection-phase, --phase-as-recorded and --step-window"
+                        + " are for TDTR delay data; this file is over frequency (use --reference for FDTR)");
+            }
+            Optional<Dataset> reference = Optional.empty();
+            if (request.reference() != null) {
+                Path ref = io.resolve(request.reference());
+                reference = Optional.of(read(importers.choose(ref, null), ref));
+            }
+            table = Conditioner.condition(data, new ConditioningOptions(request.phase(), reference,
+                    request.exclusions(), request.outlierLimit()));
+        } catch (InputException e) {
+            io.err().println("lamella import: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (ImporterDefect e) {
+            io.err().println("lamella import: " + e.getMessage());
+            return FAILED;
+        }
+        String csv = DataCsv.format(table);
+        if (request.out() == null) {
+            io.out().print(csv);
+            io.out().flush();
+        } else {
+            Path out = io.resolve(request.out());
+            try {
+                DataCsv.writeAtomically(out, csv);
+            } catch (IOException e) {
+                io.err().println("lamella import: cannot write " + out + ": " + e.getMessage());
+                return FAILED;
+            }
+            io.err().println("wrote " + table.rows() + " rows to " + out);
+        }
+        io.err().println("read " + file + " as '" + importer.id() + "'");
+        for (String line : table.report().lines()) {
+            io.err().println("  " + line);
+        }
+        return OK;
+    }
+
+    /** Reads with a plug-in, which may be faulty: anything but bad input is its defect, not the user's. */
+    private static Dataset read(DataImporter importer, Path file) throws InputException {
+        Dataset d;
+        try {
+            d = importer.read(file);
+        } catch (RuntimeException e) {
+            throw new ImporterDefect(importer, e.toString());
+        }
+        if (d == null) {
+            throw new ImporterDefect(importer, "returned no dataset");
+        }
+        return d;
+    }
+
+    /** An importer plug-in that failed other than by reporting bad input. */
+    private static final class ImporterDefect extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        ImporterDefect(DataImporter importer, String what) {
+            super("importer '" + importer.id() + "' failed: " + what);
+        }
+    }
+}

@@ -1,0 +1,71 @@
+package lamella.conditioning;
+
+import java.util.Map;
+import lamella.api.data.SignalNames;
+
+/**
+ * The output columns derived from in-phase X and out-of-phase Y: ratio −X/Y (TDTR), amplitude √(X²+Y²) and phase
+ * atan2(Y, X) in degrees, with standard deviations propagated to first order, X and Y independent.
+ */
+final class Derived {
+
+    private Derived() {
+    }
+
+    /**
+     * @param ratio          whether to add the TDTR ratio
+     * @param phaseOnly      whether the data had a phase alone (then only the phase is written)
+     * @param referenceSigma standard deviation of a subtracted reference phase, degrees, or null
+     */
+    static void columns(Channels c, boolean ratio, boolean phaseOnly, double[] referenceSigma,
+                        Map<String, double[]> values, Map<String, double[]> sigmas) {
+        int n = c.rows();
+        double[] x = c.values.get(SignalNames.IN_PHASE);
+        double[] y = c.values.get(SignalNames.OUT_OF_PHASE);
+        double[] sx = c.sigmas.get(SignalNames.IN_PHASE);
+        double[] sy = c.sigmas.get(SignalNames.OUT_OF_PHASE);
+        boolean sigma = sx != null && sy != null;
+        double[] r = new double[n];
+        double[] amplitude = new double[n];
+        double[] phase = new double[n];
+        double[] sr = new double[n];
+        double[] sa = new double[n];
+        double[] sp = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = -x[i] / y[i];
+            amplitude[i] = Math.hypot(x[i], y[i]);
+            phase[i] = Math.toDegrees(Math.atan2(y[i], x[i]));
+            if (sigma) {
+                sr[i] = Math.hypot(sx[i] / y[i], x[i] * sy[i] / (y[i] * y[i]));
+                sa[i] = Math.hypot(x[i] * sx[i], y[i] * sy[i]) / amplitude[i];
+                sp[i] = Math.toDegrees(Math.hypot(y[i] * sx[i], x[i] * sy[i]) / (amplitude[i] * amplitude[i]));
+            }
+            if (referenceSigma != null) {
+                sp[i] = Math.hypot(sp[i], referenceSigma[i]);
+            }
+        }
+        boolean phaseSigma = sigma || referenceSigma != null;
+        if (!phaseOnly) {
+            values.put(SignalNames.IN_PHASE, x);
+            values.put(SignalNames.OUT_OF_PHASE, y);
+            if (sigma) {
+                sigmas.put(SignalNames.IN_PHASE, sx);
+                sigmas.put(SignalNames.OUT_OF_PHASE, sy);
+            }
+            if (ratio) {
+                values.put(SignalNames.RATIO, r);
+                if (sigma) {
+                    sigmas.put(SignalNames.RATIO, sr);
+                }
+            }
+            values.put(SignalNames.AMPLITUDE, amplitude);
+            if (sigma) {
+                sigmas.put(SignalNames.AMPLITUDE, sa);
+            }
+        }
+        values.put(SignalNames.PHASE_DEG, phase);
+        if (phaseSigma) {
+            sigmas.put(SignalNames.PHASE_DEG, sp);
+        }
+    }
+}
