@@ -2,7 +2,8 @@ package lamella.cli;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
-import java.util.Locale;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.ExplainedCase;
@@ -41,6 +42,7 @@ final class ValueOrigins {
         if (Double.isInfinite(v)) {
             return "∞";
         }
-        return String.format(Locale.ROOT, "%.6g", v);
+        BigDecimal d = new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros();
+        return d.scale() <= 0 && d.precision() - d.scale() <= 8 ? d.toPlainString() : d.toString();
     }
 }

@@ -182,7 +182,8 @@ final class EntryReader {
         String notes = p.has("notes") ? text(p, "notes", false) : "";
         for (double v : curve.values()) {
             if (v < q.plausibleLow() || v > q.plausibleHigh()) {
-                warn(at, v + " is outside " + q.plausibleLow() + "–" + q.plausibleHigh() + " for " + q.description()
+                warn(at, Numbers.plain(v) + " is outside " + Numbers.plain(q.plausibleLow()) + "–"
+                        + Numbers.plain(q.plausibleHigh()) + " for " + q.description()
                         + " in " + lamella.api.Units.ofKey(q.key()) + "; is the unit right?");
                 break;
             }

@@ -29,7 +29,8 @@ public record PropertyValue(MaterialQuantity quantity, double value, double temp
 
     /** The sources of every property used, each once. */
     public String sources() {
-        return from.stream().map(p -> from.size() == 1 ? p.source() : p.quantity().key() + ": " + p.source())
+        boolean one = from.stream().map(MaterialProperty::source).distinct().count() == 1;
+        return from.stream().map(p -> one ? p.source() : p.quantity().key() + ": " + p.source())
                 .distinct().collect(Collectors.joining("; "));
     }
 }

@@ -86,11 +86,15 @@ public final class TemperatureCurve {
 
     /** "300 K" or "100–800 K", for messages. */
     public String range() {
-        return lowK() == highK() ? kelvin(lowK()) : kelvin(lowK()) + "–" + kelvin(highK());
+        return lowK() == highK() ? kelvin(lowK()) : number(lowK()) + "–" + kelvin(highK());
     }
 
     static String kelvin(double t) {
-        return (t == Math.rint(t) ? String.format(Locale.ROOT, "%.0f", t) : String.valueOf(t)) + " K";
+        return number(t) + " K";
+    }
+
+    private static String number(double t) {
+        return t == Math.rint(t) ? String.format(Locale.ROOT, "%.0f", t) : String.valueOf(t);
     }
 
     private static void requireFinite(double v) {
