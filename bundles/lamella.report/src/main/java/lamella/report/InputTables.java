@@ -1,0 +1,117 @@
+package lamella.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
+import lamella.api.Block;
+import lamella.api.CaseDocument;
+import lamella.api.Layer;
+import lamella.api.ParameterRef;
+import lamella.api.Units;
+import lamella.api.fit.FitOutcome;
+import lamella.api.fit.FittedParameter;
+
+/** The inputs of the case on the page: the stack layer by layer, then the geometry, measurement and fit blocks. */
+final class InputTables {
+
+    /** Lists up to this long are shown in full; longer ones by count, first and last value (all are in result.json). */
+    private static final int LONGEST_LIST_SHOWN = 12;
+
+    private InputTables() {
+    }
+
+    static void write(Html h, CaseDocument doc, FitOutcome o) {
+        Set<String> free = o.parameters().stream().map(FittedParameter::ref).filter(r -> r.scope() == ParameterRef.Scope.LAYER)
+                .map(ParameterRef::toString).collect(Collectors.toSet());
+        h.element("h3", "Layers, from the heated surface down");
+        h.raw("<table class=\"inputs\"><thead>");
+        h.headRow(List.of("layer", "thickness (m)", "Λ through-plane (W/(m K))", "Λ in-plane x (W/(m K))",
+                "Λ in-plane y (W/(m K))", "C volumetric (J/(m³ K))", "G to the layer below (W/(m² K))"));
+        h.raw("</thead><tbody>\n");
+        List<Layer> layers = doc.stack().layers();
+        for (int i = 0; i < layers.size(); i++) {
+            Layer l = layers.get(i);
+            boolean last = i == layers.size() - 1;
+            h.raw("<tr><th scope=\"row\">").text(l.name()).raw("</th>");
+            cell(h, free, l, l.isSemiInfinite() ? "semi-infinite" : Numbers.plain(l.thickness()), "thickness_m");
+            cell(h, free, l, Numbers.plain(l.kThrough()), "k_through_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneX()), "k_in_plane_x_w_mk", "k_in_plane_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneY()), "k_in_plane_y_w_mk", "k_in_plane_w_mk");
+            cell(h, free, l, Numbers.plain(l.heatCapacity()), "heat_capacity_j_m3k");
+            String g = last ? "—" : l.hasPerfectContactBelow() ? "perfect contact" : Numbers.plain(l.conductanceBelow());
+            cell(h, free, l, g, "conductance_below_w_m2k");
+            h.raw("</tr>\n");
+        }
+        h.raw("</tbody></table>\n");
+        h.raw("<p class=\"note\">").text("Below the last layer: " + doc.stack().bottom().caseName() + ". ")
+                .raw("<span class=\"free-key\">Shaded</span>")
+                .text(" values are fitted; the case file's starting value is shown here, the result above.")
+                .raw("</p>\n");
+        block(h, "Geometry", doc.geometry());
+        block(h, "Measurement", doc.measurement());
+        if (doc.root().get("fit") instanceof Block fit) {
+            block(h, "Fit settings", fit);
+        }
+    }
+
+    private static void cell(Html h, Set<String> free, Layer l, String text, String... keys) {
+        boolean fitted = false;
+        for (String key : keys) {
+            fitted |= free.contains(ParameterRef.layer(l.name(), key).toString());
+        }
+        h.raw(fitted ? "<td class=\"free\">" : "<td>").text(text).raw("</td>");
+    }
+
+    /** A block as key, value and unit rows; nested blocks and lists of blocks by their path. */
+    private static void block(Html h, String heading, Block b) {
+        h.element("h3", heading);
+        h.raw("<table class=\"inputs keys\"><thead>");
+        h.headRow(List.of("key", "value", "unit"));
+        h.raw("</thead><tbody>\n");
+        List<List<String>> rows = new ArrayList<>();
+        flatten(b, rows);
+        rows.forEach(h::row);
+        h.raw("</tbody></table>\n");
+    }
+
+    /** Rows keyed by JSON path, so that they read as the addresses the results and errors use. */
+    private static void flatten(Block b, List<List<String>> rows) {
+        for (Map.Entry<String, Object> e : b.values().entrySet()) {
+            Object v = e.getValue();
+            if (v instanceof Block nested) {
+                flatten(nested, rows);
+            } else if (v instanceof List<?> list && !list.isEmpty() && list.get(0) instanceof Block) {
+                for (int i = 0; i < list.size(); i++) {
+                    if (list.get(i) instanceof Block item) {
+                        flatten(item, rows);
+                    } else {
+                        rows.add(List.of(b.pathOf(e.getKey()) + "[" + i + "]", shown(list.get(i)),
+                                unit(e.getKey())));
+                    }
+                }
+            } else {
+                rows.add(List.of(b.pathOf(e.getKey()), shown(v), unit(e.getKey())));
+            }
+        }
+    }
+
+    private static String unit(String key) {
+        String u = Units.ofKey(key);
+        return u.isEmpty() ? "—" : u;
+    }
+
+    private static String shown(Object v) {
+        if (v instanceof Double d) {
+            return Numbers.plain(d);
+        }
+        if (v instanceof List<?> list) {
+            if (list.size() <= LONGEST_LIST_SHOWN) {
+                return list.stream().map(InputTables::shown).collect(Collectors.joining("; "));
+            }
+            return list.size() + " values: " + shown(list.get(0)) + " … " + shown(list.get(list.size() - 1));
+        }
+        return String.valueOf(v);
+    }
+}
