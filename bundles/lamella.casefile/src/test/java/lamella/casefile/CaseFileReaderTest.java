@@ -441,14 +441,14 @@ class CaseFileReaderTest {
             String json = withLayers(SUBSTRATE).replace("\"geometry\"", "\"geometri\"");
             InputException e = fail(json);
             assertAt(e, "geometri", lineOf(json, "\"geometri\""), "did you mean 'geometry'",
-                    "description, geometry, measurement, stack");
+                    "description, fit, geometry, measurement, stack, temperature_k");
         }
 
         @Test
         void unknownTopLevelKeyWithoutHint() throws Exception {
-            String json = withLayers(SUBSTRATE).replace("{\n  \"stack\"", "{\n  \"fit\": {},\n  \"stack\"");
+            String json = withLayers(SUBSTRATE).replace("{\n  \"stack\"", "{\n  \"results\": {},\n  \"stack\"");
             InputException e = fail(json);
-            assertAt(e, "fit", 2, "unknown key");
+            assertAt(e, "results", 2, "unknown key");
             assertFalse(e.getMessage().contains("did you mean"), e.getMessage());
         }
 

@@ -1,5 +1,6 @@
 package lamella.cli;
 
+import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -8,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import lamella.api.Block;
 import lamella.api.BottomBoundary;
+import lamella.api.CaseFormat;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.Layer;
@@ -18,6 +20,7 @@ import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
+import lamella.api.fit.FitService;
 import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -39,6 +42,12 @@ public final class BenchmarkCommand implements Command {
 
     @Reference
     private StackKernels kernels;
+
+    @Reference
+    private CaseFormat caseFormat;
+
+    @Reference
+    private FitService fitter;
 
     /** With the service's reference, so that a failure can name the bundle that registered it. */
     @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
@@ -68,7 +77,7 @@ public final class BenchmarkCommand implements Command {
 
     @Override
     public String summary() {
-        return "Times the model (FDTR and TDTR curves of a three-layer stack) on one thread and prints figures.";
+        return "Times the model (FDTR and TDTR curves) on one thread and the fits and Monte Carlo on all cores.";
     }
 
     @Override
@@ -79,7 +88,9 @@ public final class BenchmarkCommand implements Command {
                 Times, on the calling thread, an FDTR curve of 200 modulation frequencies (1 kHz-100 MHz) and a
                 TDTR curve of 50 delays (100 ps-5 ns, 9 MHz modulation, 76 MHz repetition) for a metal transducer
                 on an oxide film on a crystalline substrate, with Gaussian beams. Prints the median and fastest
-                of %d runs after %d warm-up runs.
+                of %d runs after %d warm-up runs. Then, on synthetic data the model makes, times a two-parameter
+                FDTR fit of 30 points, a joint three-parameter fit of TDTR at two modulation frequencies, and 1000
+                Monte Carlo refits of the FDTR fit, on all cores.
                 """.formatted(RUNS, WARM_UP);
     }
 
@@ -103,7 +114,12 @@ public final class BenchmarkCommand implements Command {
             io.out().println("lamella benchmark: one thread, " + RUNS + " runs after " + WARM_UP + " warm-up runs");
             report(io, "FDTR curve, 200 frequencies, 3 layers", models.catalog(kernels).simulation(stack, beams, fdtr));
             report(io, "TDTR curve, 50 delays, 3 layers", models.catalog(kernels).simulation(stack, beams, tdtr));
+            FitBenchmark.run(io, caseFormat, fitter, models.catalog(kernels),
+                    Math.max(1, Runtime.getRuntime().availableProcessors()));
             return OK;
+        } catch (IOException e) {
+            io.err().println("lamella benchmark: cannot write its temporary data: " + e.getMessage());
+            return FAILED;
         } catch (InputException e) {
             io.err().println("lamella benchmark: the built-in cases need the gaussian geometry and the fdtr and tdtr"
                     + " techniques: " + e.getMessage());

@@ -62,16 +62,7 @@ public final class FitCommand implements Command {
         }
         Path casePath = io.resolve(o.positional());
         try {
-            FitSettings settings = FitSettings.defaults();
-            if (o.has("--monte-carlo")) {
-                settings = settings.withMonteCarlo(o.count("--monte-carlo", 1));
-            }
-            if (o.has("--seed")) {
-                settings = settings.withSeed(o.count("--seed", 1));
-            }
-            if (o.has("--threads")) {
-                settings = settings.withThreads(o.count("--threads", 1));
-            }
+            FitSettings settings = FitReportRun.settings(o);
             CaseDocument doc = caseFormat.read(casePath);
             FitOutcome outcome = fitter.fit(doc, settings, new ProgressLine(io.err()));
             io.out().print(FitSummary.format(outcome));
