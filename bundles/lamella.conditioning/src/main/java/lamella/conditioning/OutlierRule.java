@@ -5,11 +5,14 @@ import java.util.Arrays;
 /**
  * Marks outliers along x with a variant of the Hampel identifier (F. R. Hampel, J. Am. Stat. Assoc. 69, 383 (1974);
  * the running-median form as in R. K. Pearson, IEEE Trans. Control Syst. Technol. 10, 55 (2002) — citations from
- * memory). A row is marked when its value stands out, by more than the limit times the column's noise, both from
+ * memory). A row is marked when its value stands out, by more than the limit times the scale below, both from
  * the median of the 7 rows centred on it (which follows steps such as the jump at zero delay) and from the median of
  * the midpoints of its symmetric neighbour pairs (i−k, i+k), k = 1…3 (which follows slopes, and which one spike
- * nearby does not move); taking the smaller of the two residuals is common practice, no source. Near the ends the
- * windows narrow, still centred, so the first and last rows are never marked. The noise is estimated from second differences,
+ * nearby does not move). The scale is the larger of the column's noise and the curvature around the row — the
+ * second differences centred two rows before and two rows after it, which do not involve the row itself — so that a
+ * coarsely sampled bend (an FDTR sweep at 1-2-5 steps) is not taken for an outlier. Taking the smaller residual and
+ * the larger scale is Lamella's choice, no source. Near the ends the windows narrow, still centred, so the first and
+ * last rows are never marked. The noise is estimated from second differences,
  * σ = 1.4826 · median|v[i−1] − 2v[i] + v[i+1]| / √6 (a second difference of independent noise has variance 6σ²;
  * 1.4826 makes a median absolute value a Gaussian standard deviation), which a trend does not inflate and a few
  * spikes or steps do not move.
@@ -50,7 +53,9 @@ final class OutlierRule {
             }
             double fromMedian = Math.abs(v[i] - median(window, m));
             double fromSlope = Math.abs(v[i] - median(midpoints, half));
-            if (Math.min(fromMedian, fromSlope) > limit * sigma) {
+            double bend = Math.max(i >= 3 ? Math.abs(v[i - 3] - 2 * v[i - 2] + v[i - 1]) : 0,
+                    i + 3 < n ? Math.abs(v[i + 1] - 2 * v[i + 2] + v[i + 3]) : 0);
+            if (Math.min(fromMedian, fromSlope) > limit * Math.max(sigma, bend)) {
                 marks[i] = true;
             }
         }
