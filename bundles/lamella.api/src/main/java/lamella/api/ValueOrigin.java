@@ -1,6 +1,7 @@
 package lamella.api;
 
-import java.util.Locale;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.Optional;
 import lamella.api.material.PropertyValue;
 
@@ -46,9 +47,10 @@ public record ValueOrigin(String path, String layer, String key, double value, K
                     sb.append(", density × specific heat");
                 }
                 sb.append(", ").append(v.sources());
-                sb.append(", at ").append(String.format(Locale.ROOT, "%g", v.temperatureK()).replaceFirst("\\.?0+$", ""))
+                sb.append(", at ").append(BigDecimal.valueOf(v.temperatureK()).stripTrailingZeros().toPlainString())
                         .append(" K");
-                v.uncertaintyRel().ifPresent(u -> sb.append(String.format(Locale.ROOT, ", ±%.3g %%", 100 * u)));
+                v.uncertaintyRel().ifPresent(u -> sb.append(", ±").append(new BigDecimal(100 * u)
+                        .round(new MathContext(2)).stripTrailingZeros().toPlainString()).append(" %"));
                 return sb.toString();
             }
             default:

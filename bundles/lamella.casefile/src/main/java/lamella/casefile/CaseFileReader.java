@@ -57,11 +57,11 @@ public final class CaseFileReader implements ExplainingCaseFormat {
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeLibrary")
-    void addLibrary(MaterialLibrary library) {
+    public void addLibrary(MaterialLibrary library) {
         libraries.add(library);
     }
 
-    void removeLibrary(MaterialLibrary library) {
+    public void removeLibrary(MaterialLibrary library) {
         libraries.remove(library);
     }
 

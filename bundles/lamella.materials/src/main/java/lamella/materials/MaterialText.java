@@ -2,7 +2,6 @@ package lamella.materials;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import lamella.api.InputException;
 import lamella.api.Units;
 import lamella.api.material.Curation;
@@ -109,7 +108,7 @@ final class MaterialText {
                     .append(", ").append(Units.ofKey(p.quantity().key())).append('\n');
             sb.append("    ").append(curve(p.curve())).append('\n');
             sb.append("    uncertainty ").append(p.uncertaintyRel().isPresent()
-                    ? String.format(Locale.ROOT, "±%.3g %% (1σ, relative)", 100 * p.uncertaintyRel().getAsDouble())
+                    ? "±" + Numbers.computed(100 * p.uncertaintyRel().getAsDouble()) + " % (1σ, relative)"
                     : "not stated").append('\n');
             sb.append("    source ").append(p.source()).append('\n');
             if (!p.notes().isEmpty()) {
