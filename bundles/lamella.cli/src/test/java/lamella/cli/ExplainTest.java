@@ -1,0 +1,99 @@
+package lamella.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.lang.reflect.Field;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import lamella.api.material.Curation;
+import lamella.api.material.LibraryFinding;
+import lamella.api.material.LibraryInfo;
+import lamella.api.material.LibraryTier;
+import lamella.api.material.Material;
+import lamella.api.material.MaterialLibrary;
+import lamella.api.material.MaterialProperty;
+import lamella.api.material.MaterialQuantity;
+import lamella.api.material.TemperatureCurve;
+import lamella.casefile.CaseFileReader;
+import lamella.engine.Engine;
+import lamella.geometry.gaussian.GaussianBeams;
+import lamella.technique.sstr.SteadyState;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code simulate --explain}: the table of values and their origins goes to standard error, the CSV on standard
+ * output is the same as without it. The library is built here with invented values.
+ */
+class ExplainTest {
+
+    @TempDir
+    Path dir;
+
+    record Library(LibraryInfo info, List<Material> materials, List<LibraryFinding> findings)
+            implements MaterialLibrary {
+    }
+
+    record Run(int status, String out, String err) {
+    }
+
+    private Run run(String... args) throws Exception {
+        CaseFileReader reader = new CaseFileReader();
+        LibraryInfo info = new LibraryInfo("lab", "Lab films", LibraryTier.FACILITY, "memory", "");
+        reader.addLibrary(new Library(info, List.of(new Material("oxide", "Oxide film", List.of(), Map.of(
+                MaterialQuantity.K, new MaterialProperty(MaterialQuantity.K, TemperatureCurve.constant(1.2, 300, 300),
+                        OptionalDouble.of(0.08), "invented test value", "")),
+                new Curation(2, Optional.empty(), Optional.empty()), "", info, "memory:1")), List.of()));
+        SimulateCommand command = new SimulateCommand();
+        inject(command, "caseFormat", reader);
+        inject(command, "kernels", new Engine());
+        command.addGeometry(Registrations.shipped("lamella.geometry.gaussian"), new GaussianBeams());
+        command.addTechnique(Registrations.shipped("lamella.technique.sstr"), new SteadyState());
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int status = command.run(List.of(args), new CommandIO(new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8), dir));
+        return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    private static void inject(Object target, String field, Object value) throws ReflectiveOperationException {
+        Field f = target.getClass().getDeclaredField(field);
+        f.setAccessible(true);
+        f.set(target, value);
+    }
+
+    @Test
+    void explainListsEveryValueWithItsOriginAndLeavesTheCsvAlone() throws Exception {
+        Files.writeString(dir.resolve("case.json"), """
+                {
+                  "stack": {"layers": [
+                    {"name": "film", "material": "oxide", "heat_capacity_j_m3k": 1.6e6}
+                  ]},
+                  "geometry": {"type": "gaussian", "pump_radius_m": 5e-6, "probe_radius_m": 5e-6},
+                  "measurement": {"type": "sstr"}
+                }
+                """);
+        Run plain = run("case.json");
+        Run explained = run("case.json", "--explain");
+        assertEquals(Command.OK, explained.status(), explained.err());
+        assertEquals(plain.out(), explained.out(), "stdout is the CSV either way");
+        assertEquals("", plain.err());
+        String err = explained.err();
+        assertTrue(err.startsWith("values used by " + dir.resolve("case.json") + ":\n"), err);
+        assertTrue(err.matches("(?s).*\\n  film +k_through_w_mk +1\\.2 +W/\\(m K\\) +library Lab films \\(facility\\),"
+                + " entry oxide v2, invented test value, at 300 K, ±8 %\\n.*"), err);
+        assertTrue(err.matches("(?s).*\\n  film +heat_capacity_j_m3k +1600000 +J/\\(m³ K\\) +explicit in case file"
+                + " \\(line 3\\)\\n.*"), err);
+        assertTrue(err.matches("(?s).*\\n  film +thickness_m +∞ +m +default: semi-infinite.*"), err);
+    }
+}
