@@ -1,0 +1,105 @@
+package lamella.product;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The assembled runtime finds the shipped library bundle through its manifest header, and a facility folder named by
+ * the runtime's configuration replaces a shipped entry — through the launcher, as a user runs it.
+ */
+class MaterialLibrariesIT {
+
+    private record Run(int status, String out, String err) {
+    }
+
+    @TempDir
+    static Path home;
+    @TempDir
+    static Path userDir;
+
+    @BeforeAll
+    static void copyRuntime() throws Exception {
+        RuntimeCopy.into(home);
+    }
+
+    @Test
+    void theExtenderFindsTheShippedLibraryBundle() throws Exception {
+        Run run = launch(List.of(), "materials", "list");
+        assertEquals(0, run.status(), run.err());
+        List<String> rows = run.out().lines().takeWhile(l -> !l.isEmpty()).skip(1).toList();
+        assertTrue(rows.size() >= 25, "shipped entries: " + rows.size() + "\n" + run.out());
+        assertTrue(rows.stream().allMatch(r -> r.contains(" lamella-shipped ") && r.contains(" shipped ")), run.out());
+        assertTrue(run.out().contains("bundle lamella.materials.shipped"), run.out());
+
+        Run plugins = launch(List.of(), "plugins");
+        assertTrue(plugins.out().matches("(?s).*\\nmaterial library +lamella-shipped +lamella\\.materials .*"),
+                plugins.out());
+    }
+
+    @Test
+    void aConfiguredFacilityFolderReplacesAShippedEntry() throws Exception {
+        Path facility = Path.of("../../demo-data/materials/fenwick-hall").toAbsolutePath().normalize();
+        Run run = launch(List.of("-Dlamella.materials.facility=" + facility), "materials", "show", "al");
+        assertEquals(0, run.status(), run.err());
+        assertTrue(run.out().startsWith("aluminium — Aluminium transducer film"), run.out());
+        assertTrue(run.out().contains("Fenwick Hall thermal lab films (facility)"), run.out());
+        assertTrue(run.out().contains("replaces   library Lamella shipped materials (shipped), entry aluminium v1"),
+                run.out());
+
+        Path demo = Path.of("../../demo-data/cases/libraries/oxide-on-sapphire-tdtr.json").toAbsolutePath().normalize();
+        Run simulate = launch(List.of("-Dlamella.materials.facility=" + facility), "simulate", demo.toString(),
+                "--explain");
+        assertEquals(0, simulate.status(), simulate.err());
+        assertTrue(simulate.out().startsWith("delay_s,in_phase,out_of_phase,ratio,phase_deg\n"), simulate.out());
+        assertTrue(simulate.err().matches("(?s).*transducer +k_through_w_mk +170 .*library Fenwick Hall thermal lab"
+                + " films \\(facility\\), entry aluminium v3.*"), simulate.err());
+    }
+
+    @Test
+    void aConfiguredFolderThatIsMissingIsNamedNotIgnored() throws Exception {
+        Run run = launch(List.of("-Dlamella.materials.facility=" + userDir.resolve("nowhere")), "materials", "list");
+        assertEquals(0, run.status(), run.err());
+        assertTrue(run.out().contains("the facility library folder does not exist"), run.out());
+    }
+
+    private static Run launch(List<String> javaOptions, String... args) throws Exception {
+        List<String> command = new ArrayList<>();
+        command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
+        command.add("-Djava.awt.headless=true");
+        command.add("-Dlamella.cwd=" + userDir);
+        // No user library of whoever runs the tests.
+        command.add("-Dlamella.materials.user=");
+        command.addAll(javaOptions);
+        command.add("-jar");
+        command.add(home.resolve("lib/lamella.launcher.jar").toString());
+        command.addAll(List.of(args));
+        Process process = new ProcessBuilder(command).directory(userDir.toFile()).start();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        Thread drain = new Thread(() -> {
+            try {
+                process.getErrorStream().transferTo(err);
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
+        drain.start();
+        String out = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        if (!process.waitFor(60, TimeUnit.SECONDS)) {
+            process.destroyForcibly();
+            throw new AssertionError("the launcher did not exit within 60 s: " + command);
+        }
+        drain.join();
+        return new Run(process.exitValue(), out, err.toString(StandardCharsets.UTF_8));
+    }
+}
