@@ -92,6 +92,17 @@ final class DelimitedTable {
     }
 
     private void beforeData(String t) throws InputException {
+        if (!preamble.isEmpty()) {
+            Line header = preamble.get(preamble.size() - 1);
+            Optional<Dialect> damaged = Dialect.detect(t, null).isEmpty()
+                    ? Dialect.detectDamaged(t, header.text()) : Optional.empty();
+            if (damaged.isPresent()) {
+                preamble.remove(preamble.size() - 1);
+                start(header, damaged.get());
+                row(t);
+                return;
+            }
+        }
         if (Dialect.detect(t, null).isEmpty()) {
             if (preamble.size() == MAX_PREAMBLE_LINES) {
                 throw in.error("more than " + MAX_PREAMBLE_LINES + " lines and still no data row");
@@ -111,11 +122,15 @@ final class DelimitedTable {
                     + dataCells + " cells like the first data row (line " + in.line() + ") in any of the"
                     + " separators Lamella reads (tab, semicolon, comma, whitespace)");
         }
-        dialect = d.get();
+        start(header, d.get());
+        row(t);
+    }
+
+    private void start(Line header, Dialect d) throws InputException {
+        dialect = d;
         headerLine = header.number();
         headerCells = dialect.splitHeader(header.text());
         columns();
-        row(t);
     }
 
     private void columns() throws InputException {

@@ -89,6 +89,25 @@ record Dialect(Delimiter delimiter, char decimalMark) {
         return Optional.empty();
     }
 
+    /**
+     * The dialect under which a row that starts with a number has as many cells as the header above it, though not all
+     * of them are numbers: a data row with a bad cell, which the reader then names, rather than a line of text.
+     */
+    static Optional<Dialect> detectDamaged(String row, String header) {
+        for (Delimiter d : Delimiter.values()) {
+            for (char mark : d == Delimiter.COMMA ? new char[] {'.'} : new char[] {'.', ','}) {
+                Dialect candidate = new Dialect(d, mark);
+                List<String> cells = candidate.split(row);
+                if (cells.size() >= 2 && Decimals.isNumber(cells.get(0), mark)
+                        && candidate.splitHeader(header).size() == cells.size()
+                        && !Decimals.isNumber(candidate.splitHeader(header).get(0), mark)) {
+                    return Optional.of(candidate);
+                }
+            }
+        }
+        return Optional.empty();
+    }
+
     private static boolean allNumbers(List<String> cells, char mark) {
         for (String c : cells) {
             if (!Decimals.isNumber(c, mark)) {
