@@ -26,11 +26,14 @@ final class ChartStyle {
     static final Color MODEL = new Color(0x1F, 0x5F, 0xA8);
     static final Color REFERENCE = new Color(0x88, 0x88, 0x88);
 
-    /** Series colours, chosen to stay distinct for the common forms of colour blindness. */
+    /** Series colours, chosen to stay apart for the common forms of colour blindness. */
     private static final Color[] SERIES = {
             new Color(0x1F, 0x5F, 0xA8), new Color(0xC4, 0x5A, 0x12), new Color(0x2E, 0x8B, 0x57),
             new Color(0x8E, 0x3B, 0x8E), new Color(0xB8, 0x93, 0x0B), new Color(0x4A, 0xA3, 0xC9),
-            new Color(0x7A, 0x4E, 0x2D), new Color(0xC0, 0x39, 0x5B)};
+            new Color(0x7A, 0x4E, 0x2D), new Color(0xC0, 0x39, 0x5B), new Color(0x5B, 0x5E, 0xA6),
+            new Color(0x6B, 0x8E, 0x23), new Color(0xE0, 0x8A, 0x9E), new Color(0x00, 0x6D, 0x6F)};
+    /** Hue step for series beyond the list: the golden angle, which keeps successive hues far apart. */
+    private static final float GOLDEN_TURN = 0.381966f;
     private static final float[][] DASHES = {null, {9f, 4f}, {2f, 3f}, {9f, 3f, 2f, 3f}};
 
     private static final String FAMILY = Font.SANS_SERIF;
@@ -44,13 +47,17 @@ final class ChartStyle {
     private ChartStyle() {
     }
 
+    /** Distinct for every series: bar charts have no dash pattern to tell equal colours apart. */
     static Paint seriesPaint(int i) {
-        return SERIES[i % SERIES.length];
+        if (i < SERIES.length) {
+            return SERIES[i];
+        }
+        return Color.getHSBColor(((i - SERIES.length) * GOLDEN_TURN) % 1f, 0.65f, 0.7f);
     }
 
-    /** Dashes cycle more slowly than colours, so that series with the same colour differ in dash. */
+    /** Dashes cycle beside the colours, so that curves stay apart in a grey print as well. */
     static Stroke seriesStroke(int i) {
-        float[] dash = DASHES[(i / SERIES.length + i) % DASHES.length];
+        float[] dash = DASHES[i % DASHES.length];
         return dash == null ? new BasicStroke(2f)
                 : new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }
