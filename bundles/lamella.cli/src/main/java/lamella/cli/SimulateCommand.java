@@ -1,5 +1,6 @@
 package lamella.cli;
 
+import lamella.api.guard.LiveModels;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
@@ -36,7 +37,7 @@ public final class SimulateCommand implements Command {
     @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
             policy = ReferencePolicy.DYNAMIC, unbind = "removeGeometry")
     void addGeometry(ServiceReference<HeatingGeometry> reference, HeatingGeometry g) {
-        models.add(g, PluginOrigin.of(reference));
+        models.add(g, Origins.of(reference));
     }
 
     void removeGeometry(HeatingGeometry g) {
@@ -46,7 +47,7 @@ public final class SimulateCommand implements Command {
     @Reference(service = Technique.class, cardinality = ReferenceCardinality.MULTIPLE,
             policy = ReferencePolicy.DYNAMIC, unbind = "removeTechnique")
     void addTechnique(ServiceReference<Technique> reference, Technique t) {
-        models.add(t, PluginOrigin.of(reference));
+        models.add(t, Origins.of(reference));
     }
 
     void removeTechnique(Technique t) {

@@ -1,5 +1,8 @@
 package lamella.cli;
 
+import lamella.api.guard.GuardedGeometry;
+import lamella.api.guard.GuardedTechnique;
+import lamella.api.guard.PluginFault;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,7 +1,6 @@
 package lamella.fit;
 
 import java.util.List;
-import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import lamella.api.CaseDocument;
@@ -17,6 +16,10 @@ import lamella.api.fit.FitService;
 import lamella.api.fit.FitSettings;
 import lamella.api.fit.Progress;
 import lamella.api.fit.SensitivityTable;
+import lamella.api.guard.LiveModels;
+import lamella.api.guard.PluginOrigin;
+import org.osgi.framework.Bundle;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -26,8 +29,7 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 @Component(service = FitService.class)
 public final class Fitter implements FitService {
 
-    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
-    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+    private final LiveModels models = new LiveModels();
 
     @Reference
     private StackKernels kernels;
@@ -35,35 +37,42 @@ public final class Fitter implements FitService {
     public Fitter() {
     }
 
-    /** For programs and tests that assemble the services themselves. */
+    /** For programs and tests that assemble the services themselves; each is named by its class in errors. */
     public Fitter(StackKernels kernels, List<HeatingGeometry> geometries, List<Technique> techniques) {
         this.kernels = kernels;
-        this.geometries.addAll(geometries);
-        this.techniques.addAll(techniques);
+        geometries.forEach(g -> models.add(g, new PluginOrigin(g.getClass().getName(), "(not a bundle)")));
+        techniques.forEach(t -> models.add(t, new PluginOrigin(t.getClass().getName(), "(not a bundle)")));
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeGeometry")
-    void addGeometry(HeatingGeometry g) {
-        geometries.add(g);
+    void addGeometry(ServiceReference<HeatingGeometry> reference, HeatingGeometry g) {
+        models.add(g, origin(reference));
     }
 
     void removeGeometry(HeatingGeometry g) {
-        geometries.remove(g);
+        models.remove(g);
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeTechnique")
-    void addTechnique(Technique t) {
-        techniques.add(t);
+    void addTechnique(ServiceReference<Technique> reference, Technique t) {
+        models.add(t, origin(reference));
     }
 
     void removeTechnique(Technique t) {
-        techniques.remove(t);
+        models.remove(t);
+    }
+
+    /** Plug-ins are held behind guards, so a faulty one fails a fit with its name instead of the process. */
+    private static PluginOrigin origin(ServiceReference<?> reference) {
+        Bundle b = reference.getBundle();
+        return b == null ? new PluginOrigin("(unregistered)", "?")
+                : new PluginOrigin(b.getSymbolicName(), b.getVersion().toString());
     }
 
     private ModelCatalog catalog() {
-        return new ModelCatalog(geometries, techniques, kernels);
+        return models.catalog(kernels);
     }
 
     @Override

@@ -1,16 +1,14 @@
 package lamella.cli;
 
+import lamella.api.guard.PluginOrigin;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.ServiceReference;
 
-/**
- * The bundle that registered a service, as {@code lamella plugins} lists it, so that an error can say whose code
- * failed.
- *
- * @param symbolicName the bundle's symbolic name
- * @param version      the bundle's version
- */
-record PluginOrigin(String symbolicName, String version) {
+/** The bundle behind a service reference, for guards' messages. */
+final class Origins {
+
+    private Origins() {
+    }
 
     static PluginOrigin of(ServiceReference<?> reference) {
         Bundle bundle = reference.getBundle();
@@ -19,10 +17,5 @@ record PluginOrigin(String symbolicName, String version) {
             return new PluginOrigin("(unregistered)", "?");
         }
         return new PluginOrigin(bundle.getSymbolicName(), bundle.getVersion().toString());
-    }
-
-    @Override
-    public String toString() {
-        return "bundle " + symbolicName + " " + version;
     }
 }

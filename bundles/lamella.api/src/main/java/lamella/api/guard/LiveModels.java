@@ -1,4 +1,4 @@
-package lamella.cli;
+package lamella.api.guard;
 
 import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
@@ -12,28 +12,28 @@ import lamella.api.Technique;
  * bundle dropped into plugins/ (or removed) changes what the next run can use. Each is held behind a guard that
  * names its bundle when it fails; removal finds the guard by the plug-in it wraps.
  */
-final class LiveModels {
+public final class LiveModels {
 
     private final List<GuardedGeometry> geometries = new CopyOnWriteArrayList<>();
     private final List<GuardedTechnique> techniques = new CopyOnWriteArrayList<>();
 
-    void add(HeatingGeometry g, PluginOrigin origin) {
+    public void add(HeatingGeometry g, PluginOrigin origin) {
         geometries.add(new GuardedGeometry(g, origin));
     }
 
-    void remove(HeatingGeometry g) {
+    public void remove(HeatingGeometry g) {
         geometries.removeIf(guard -> guard.guards(g));
     }
 
-    void add(Technique t, PluginOrigin origin) {
+    public void add(Technique t, PluginOrigin origin) {
         techniques.add(new GuardedTechnique(t, origin));
     }
 
-    void remove(Technique t) {
+    public void remove(Technique t) {
         techniques.removeIf(guard -> guard.guards(t));
     }
 
-    ModelCatalog catalog(StackKernels kernels) {
+    public ModelCatalog catalog(StackKernels kernels) {
         return new ModelCatalog(List.<HeatingGeometry>copyOf(geometries), List.<Technique>copyOf(techniques), kernels);
     }
 }

@@ -1,4 +1,4 @@
-package lamella.cli;
+package lamella.api.guard;
 
 import lamella.api.ModelEvaluationException;
 
@@ -6,11 +6,11 @@ import lamella.api.ModelEvaluationException;
  * A failure already blamed on one plug-in. Guards let it pass unchanged, so a geometry's failure seen through a
  * technique's guard stays the geometry's.
  */
-final class PluginFault extends ModelEvaluationException {
+public final class PluginFault extends ModelEvaluationException {
 
     private static final long serialVersionUID = 1L;
 
-    PluginFault(String message, Throwable cause) {
+    public PluginFault(String message, Throwable cause) {
         super(message, cause);
     }
 }

@@ -1,4 +1,4 @@
-package lamella.cli;
+package lamella.api.guard;
 
 import java.util.List;
 import java.util.Optional;
@@ -15,19 +15,19 @@ import lamella.api.TechniqueModel;
  * signal becomes a {@link PluginFault} naming its type and bundle. A geometry's fault raised while the technique
  * evaluates passes through as the geometry's. Overrides every method of the interface, default methods included.
  */
-final class GuardedTechnique implements Technique {
+public final class GuardedTechnique implements Technique {
 
     private final Technique plugin;
     private final String type;
     private final Blame blame;
 
-    GuardedTechnique(Technique plugin, PluginOrigin origin) {
+    public GuardedTechnique(Technique plugin, PluginOrigin origin) {
         this.plugin = plugin;
         this.type = new Blame("a technique", origin).call("type()", plugin::type);
         this.blame = new Blame("technique '" + type + "'", origin);
     }
 
-    boolean guards(Technique t) {
+    public boolean guards(Technique t) {
         return plugin == t;
     }
 

@@ -1,4 +1,4 @@
-package lamella.cli;
+package lamella.api.guard;
 
 import java.util.List;
 import lamella.api.GeometryModel;
@@ -15,20 +15,20 @@ import lamella.api.StackKernel;
  * a faulty plug-in fails one run with a message instead of the process. Overrides every method of the interface,
  * default methods included, so that none silently bypasses the plug-in.
  */
-final class GuardedGeometry implements HeatingGeometry {
+public final class GuardedGeometry implements HeatingGeometry {
 
     private final HeatingGeometry plugin;
     private final String type;
     private final Blame blame;
 
     /** Asks the plug-in for its type once: a case file selects it by that name, and errors quote it. */
-    GuardedGeometry(HeatingGeometry plugin, PluginOrigin origin) {
+    public GuardedGeometry(HeatingGeometry plugin, PluginOrigin origin) {
         this.plugin = plugin;
         this.type = new Blame("a geometry", origin).call("type()", plugin::type);
         this.blame = new Blame("geometry '" + type + "'", origin);
     }
 
-    boolean guards(HeatingGeometry g) {
+    public boolean guards(HeatingGeometry g) {
         return plugin == g;
     }
 

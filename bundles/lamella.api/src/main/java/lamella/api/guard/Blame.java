@@ -1,4 +1,4 @@
-package lamella.cli;
+package lamella.api.guard;
 
 import java.util.function.Supplier;
 import lamella.api.ModelEvaluationException;
@@ -10,14 +10,14 @@ import lamella.api.ModelEvaluationException;
  * @param subject what the plug-in is, such as {@code geometry 'line-pair'}
  * @param origin  the bundle that registered it
  */
-record Blame(String subject, PluginOrigin origin) {
+public record Blame(String subject, PluginOrigin origin) {
 
     /**
      * A {@link ModelEvaluationException} is a plug-in saying that its model cannot be evaluated: its message is kept
      * and the plug-in named after it. Anything else it throws is a fault in it. Linkage errors count: a plug-in built
      * against another Lamella version fails with NoSuchMethodError or AbstractMethodError.
      */
-    PluginFault fault(Throwable thrown) {
+    public PluginFault fault(Throwable thrown) {
         if (thrown instanceof PluginFault already) {
             return already;
         }
@@ -27,12 +27,12 @@ record Blame(String subject, PluginOrigin origin) {
         return failed(thrown.toString(), thrown);
     }
 
-    PluginFault failed(String problem, Throwable cause) {
+    public PluginFault failed(String problem, Throwable cause) {
         return new PluginFault(this + " failed: " + problem, cause);
     }
 
     /** Calls the plug-in; a result of null is a fault too, since callers would only fail later and elsewhere. */
-    <T> T call(String method, Supplier<T> body) {
+    public <T> T call(String method, Supplier<T> body) {
         T value;
         try {
             value = body.get();
