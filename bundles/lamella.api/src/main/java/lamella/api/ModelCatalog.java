@@ -26,6 +26,16 @@ public final class ModelCatalog {
         this.kernels = kernels;
     }
 
+    /** The live geometries, for choosers. */
+    public List<HeatingGeometry> geometries() {
+        return geometries;
+    }
+
+    /** The live techniques, for choosers. */
+    public List<Technique> techniques() {
+        return techniques;
+    }
+
     public Optional<HeatingGeometry> geometry(String type) {
         return geometries.stream().filter(g -> g.type().equals(type)).findFirst();
     }

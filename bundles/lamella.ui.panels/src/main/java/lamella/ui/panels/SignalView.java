@@ -1,0 +1,190 @@
+package lamella.ui.panels;
+
+import java.awt.BasicStroke;
+import java.awt.geom.Ellipse2D;
+import java.util.List;
+import lamella.api.CaseDocument;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Workbench;
+import lamella.ui.charts.ChartCanvas;
+import lamella.ui.charts.PlotLook;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Label;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * The Signal panel: the chosen dataset's points and the model line over them. Every change of the case's inputs
+ * recomputes the model in the background; only the newest edit's curve is drawn, and the axes keep their zoom.
+ */
+final class SignalView implements PanelView {
+
+    private final Workbench workbench;
+    private final Project project;
+    private final Composite root;
+    private final CurvePicker picker;
+    private final Combo signalCombo;
+    private final StatusLine status;
+    private final ChartCanvas canvas;
+    private final LatestOnly<Outcome<SignalCurve>> work;
+    private final DataFiles files = new DataFiles();
+    private final Project.Listener listener = this::changed;
+    private XYSeries model;
+    private String shownKey;
+
+    SignalView(Composite parent, Workbench workbench) {
+        this.workbench = workbench;
+        this.project = workbench.project();
+        this.work = new LatestOnly<>(workbench, "Model signal");
+        root = new Composite(parent, SWT.NONE);
+        root.setLayout(new GridLayout(4, false));
+        picker = new CurvePicker(root, this::recompute);
+        Label sl = new Label(root, SWT.NONE);
+        sl.setText("Signal:");
+        signalCombo = new Combo(root, SWT.READ_ONLY);
+        signalCombo.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, false, false));
+        signalCombo.addListener(SWT.Selection, e -> recompute());
+        status = new StatusLine(root, 4);
+        canvas = new ChartCanvas(root, SWT.NONE);
+        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1);
+        gd.widthHint = 640;
+        gd.heightHint = 420;
+        canvas.setLayoutData(gd);
+        project.addListener(listener);
+        picker.refresh(project);
+        recompute();
+    }
+
+    @Override
+    public Control control() {
+        return root;
+    }
+
+    @Override
+    public void close() {
+        project.removeListener(listener);
+        work.cancel();
+    }
+
+    ChartCanvas canvas() {
+        return canvas;
+    }
+
+    /** The model line as drawn, for tests. */
+    double[] modelValues() {
+        if (model == null) {
+            return new double[0];
+        }
+        double[] y = new double[model.getItemCount()];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = model.getY(i).doubleValue();
+        }
+        return y;
+    }
+
+    CurvePicker picker() {
+        return picker;
+    }
+
+    String statusText() {
+        return status.text();
+    }
+
+    private void changed(Project.Change change) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (change == Project.Change.FIT_SETUP || change == Project.Change.FILE) {
+            picker.refresh(project);
+        }
+        if (change == Project.Change.INPUTS || change == Project.Change.FIT_SETUP) {
+            recompute();
+        }
+    }
+
+    private void recompute() {
+        project.problem().ifPresent(p -> status.show("The case as edited has a problem; showing the last valid"
+                + " version. " + p.getMessage(), StatusLine.Tone.PROBLEM));
+        CaseDocument doc = project.current().orElse(null);
+        if (doc == null) {
+            return;
+        }
+        int dataset = picker.selected();
+        String signal = signalCombo.getSelectionIndex() < 0 ? null : signalCombo.getText();
+        long started = System.nanoTime();
+        work.submit(progress -> SignalCurve.compute(doc, dataset, signal, workbench.catalog(),
+                workbench.importers(), files), outcome -> show(outcome, started));
+    }
+
+    private void show(Outcome<SignalCurve> outcome, long started) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (!outcome.ok()) {
+            status.show(outcome.problem(), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        SignalCurve c = outcome.value();
+        List<String> items = List.of(signalCombo.getItems());
+        if (!items.equals(c.signals())) {
+            signalCombo.setItems(c.signals().toArray(String[]::new));
+        }
+        signalCombo.select(c.signals().indexOf(c.signal()));
+        String key = picker.selected() + "|" + c.signal() + "|" + c.xColumn();
+        if (!key.equals(shownKey)) {
+            canvas.setChart(chart(c));
+            shownKey = key;
+        } else {
+            model.clear();
+            for (int i = 0; i < c.modelX().length; i++) {
+                model.add(c.modelX()[i], c.modelY()[i], false);
+            }
+            model.fireSeriesChanged();
+        }
+        long ms = (System.nanoTime() - started) / 1_000_000;
+        String problem = project.problem().map(p -> "  The case as edited has a problem; showing the last valid"
+                + " version. " + p.getMessage()).orElse("");
+        status.show(c.technique().toUpperCase() + " model of " + c.modelX().length + " points"
+                + (c.dataName().isEmpty() ? "" : " over " + c.dataX().length + " data points of " + c.dataName())
+                + ", computed in " + ms + " ms." + problem,
+                problem.isEmpty() ? StatusLine.Tone.PLAIN : StatusLine.Tone.PROBLEM);
+    }
+
+    private JFreeChart chart(SignalCurve c) {
+        XYSeries data = new XYSeries(c.dataName().isEmpty() ? "data" : "data: " + c.dataName(), false, true);
+        for (int i = 0; i < c.dataX().length; i++) {
+            data.add(c.dataX()[i], c.dataY()[i], false);
+        }
+        model = new XYSeries("model", false, true);
+        for (int i = 0; i < c.modelX().length; i++) {
+            model.add(c.modelX()[i], c.modelY()[i], false);
+        }
+        XYSeriesCollection set = new XYSeriesCollection();
+        set.addSeries(data);
+        set.addSeries(model);
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
+        r.setSeriesLinesVisible(0, false);
+        r.setSeriesShapesVisible(0, true);
+        r.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
+        r.setSeriesShapesFilled(0, false);
+        r.setSeriesPaint(0, PlotLook.DATA);
+        r.setSeriesLinesVisible(1, true);
+        r.setSeriesShapesVisible(1, false);
+        r.setSeriesPaint(1, PlotLook.MODEL);
+        r.setSeriesStroke(1, new BasicStroke(2f));
+        boolean log = SignalCurve.logarithmic(c.xColumn());
+        XYPlot plot = new XYPlot(set, PlotLook.xAxis(Words.x(c.xColumn(), c.technique()), log, c.modelX()),
+                PlotLook.linear(Words.signal(c.signal())), r);
+        plot.getRangeAxis().setAutoRangeMinimumSize(PlotLook.leastSpan(c.modelY()));
+        return PlotLook.chart(null, plot, true);
+    }
+}

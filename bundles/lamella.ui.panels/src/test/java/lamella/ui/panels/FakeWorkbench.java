@@ -1,0 +1,216 @@
+package lamella.ui.panels;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Consumer;
+import lamella.api.CaseFormat;
+import lamella.api.HeatingGeometry;
+import lamella.api.ModelCatalog;
+import lamella.api.Technique;
+import lamella.api.data.DataImporter;
+import lamella.api.fit.FitService;
+import lamella.api.fit.Progress;
+import lamella.api.fit.ReportWriter;
+import lamella.api.material.MaterialCatalog;
+import lamella.api.material.MaterialLibrary;
+import lamella.casefile.CaseFileReader;
+import lamella.engine.Engine;
+import lamella.fit.Fitter;
+import lamella.geometry.elliptic.EllipticBeams;
+import lamella.geometry.gaussian.GaussianBeams;
+import lamella.geometry.line.LineHeater;
+import lamella.geometry.point.PointSource;
+import lamella.geometry.ring.RingSource;
+import lamella.io.delimited.DelimitedImporter;
+import lamella.materials.ShippedLibraryForTests;
+import lamella.technique.fdtr.FrequencyDomain;
+import lamella.technique.sstr.SteadyState;
+import lamella.technique.tdtr.TimeDomain;
+import lamella.technique.threeomega.ThreeOmega;
+import lamella.ui.api.BackgroundWork;
+import lamella.ui.api.Messages;
+import lamella.ui.api.Project;
+import lamella.ui.api.Task;
+import lamella.ui.api.Workbench;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
+
+/**
+ * A workbench for panel tests built from the real services (engine, geometries, techniques, case reader, fitter,
+ * delimited importer, the shipped material library), with background work on a thread pool.
+ */
+final class FakeWorkbench implements Workbench {
+
+    static final Path DEMO = Path.of("../../demo-data/oxide-film-joint/case.json");
+    private static final Path SHIPPED_MATERIALS = Path.of("../lamella.materials.shipped/src/main/resources/materials");
+
+    private final Display display;
+    private final Shell shell;
+    private final ModelCatalog catalog;
+    private final CaseFileReader reader = new CaseFileReader();
+    private final Fitter fitter;
+    private final MaterialCatalog materials;
+    private final Project project;
+    private final ExecutorService pool = Executors.newFixedThreadPool(2);
+    private final FakeMessages messages = new FakeMessages();
+
+    FakeWorkbench(Display display, Shell shell) throws Exception {
+        this.display = display;
+        this.shell = shell;
+        List<HeatingGeometry> g = List.of(new GaussianBeams(), new PointSource(), new LineHeater(), new RingSource(),
+                new EllipticBeams());
+        List<Technique> t = List.of(new FrequencyDomain(), new TimeDomain(), new SteadyState(), new ThreeOmega());
+        Engine engine = new Engine();
+        catalog = new ModelCatalog(g, t, engine);
+        fitter = new Fitter(engine, g, t);
+        if (Files.isDirectory(SHIPPED_MATERIALS)) {
+            MaterialLibrary shipped = ShippedLibraryForTests.read(SHIPPED_MATERIALS);
+            reader.addLibrary(shipped);
+            materials = new MaterialCatalog(List.of(shipped));
+        } else {
+            materials = null;
+        }
+        project = Project.open(DEMO, reader::read);
+    }
+
+    void shutdown() {
+        pool.shutdownNow();
+    }
+
+    FakeMessages messageLog() {
+        return messages;
+    }
+
+    @Override
+    public Display display() {
+        return display;
+    }
+
+    @Override
+    public Shell shell() {
+        return shell;
+    }
+
+    @Override
+    public Project project() {
+        return project;
+    }
+
+    @Override
+    public Messages messages() {
+        return messages;
+    }
+
+    @Override
+    public ModelCatalog catalog() {
+        return catalog;
+    }
+
+    @Override
+    public CaseFormat caseFormat() {
+        return reader;
+    }
+
+    @Override
+    public Optional<FitService> fitter() {
+        return Optional.of(fitter);
+    }
+
+    @Override
+    public Optional<ReportWriter> reports() {
+        return Optional.empty();
+    }
+
+    @Override
+    public Optional<MaterialCatalog> materials() {
+        return Optional.ofNullable(materials);
+    }
+
+    @Override
+    public List<DataImporter> importers() {
+        return List.of(new DelimitedImporter());
+    }
+
+    @Override
+    public <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone) {
+        AtomicBoolean cancelled = new AtomicBoolean();
+        AtomicBoolean done = new AtomicBoolean();
+        Progress progress = new Progress() {
+            @Override
+            public void update(String stage, int d, int total) {
+            }
+
+            @Override
+            public boolean cancelled() {
+                return cancelled.get();
+            }
+        };
+        pool.submit(() -> {
+            try {
+                T result = work.run(progress);
+                display.asyncExec(() -> {
+                    done.set(true);
+                    if (!cancelled.get()) {
+                        onDone.accept(result);
+                    }
+                });
+            } catch (Exception | Error e) {
+                done.set(true);
+                if (!cancelled.get()) {
+                    messages.error(label + " failed", e);
+                }
+            }
+        });
+        return new Task() {
+            @Override
+            public void cancel() {
+                cancelled.set(true);
+            }
+
+            @Override
+            public boolean done() {
+                return done.get();
+            }
+        };
+    }
+
+    @Override
+    public void show(String panelId) {
+    }
+
+    static final class FakeMessages implements Messages {
+
+        private final List<Message> all = new CopyOnWriteArrayList<>();
+
+        @Override
+        public void info(String text) {
+            all.add(new Message(Instant.now(), Level.INFO, text, ""));
+        }
+
+        @Override
+        public void warning(String text) {
+            all.add(new Message(Instant.now(), Level.WARNING, text, ""));
+        }
+
+        @Override
+        public void error(String text, Throwable cause) {
+            all.add(new Message(Instant.now(), Level.ERROR, text, String.valueOf(cause)));
+        }
+
+        @Override
+        public List<Message> all() {
+            return all;
+        }
+
+        @Override
+        public void subscribe(Consumer<Message> listener) {
+        }
+    }
+}
