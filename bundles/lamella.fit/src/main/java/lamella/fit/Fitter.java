@@ -8,6 +8,7 @@ import lamella.api.CaseModel;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.ModelCatalog;
+import lamella.api.ParameterRef;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
@@ -121,10 +122,19 @@ public final class Fitter implements FitService {
             }
             FitProblem problem = FitProblem.of(doc, spec, catalog);
             PreparedDataset d = problem.datasets.get(dataset);
-            return Sensitivities.of(d.model, catalog, d.xColumn, d.x, signal != null ? signal : d.signal);
+            SensitivityTable t = Sensitivities.of(d.model, catalog, d.xColumn, d.x, signal != null ? signal : d.signal);
+            return new SensitivityTable(t.xColumn(), t.x(), t.signal(), t.phaseLike(),
+                    t.parameters().stream().map(r -> named(r, d.spec)).toList(), t.values());
         } catch (InputException e) {
             throw doc.locate(e);
         }
+    }
+
+    /** A dataset's own geometry or measurement block is addressed through the dataset, as the fit block does. */
+    private static ParameterRef named(ParameterRef r, DatasetSpec d) {
+        boolean own = (r.scope() == ParameterRef.Scope.GEOMETRY && d.geometry() != null)
+                || (r.scope() == ParameterRef.Scope.MEASUREMENT && d.measurement() != null);
+        return own ? r.inDataset(d.index()) : r;
     }
 
     private static String chosen(Technique t, String signal) throws InputException {
