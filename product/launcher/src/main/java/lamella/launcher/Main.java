@@ -19,6 +19,7 @@ public final class Main {
 
     private static final Duration PLUGIN_PATIENCE = Duration.ofSeconds(10);
     private static final long DISPATCHER_PATIENCE_MS = 10_000;
+    private static final long WORKBENCH_PATIENCE_MS = 20_000;
     private static final long POLL_MS = 20;
     private static final int FAILED = 1;
 
@@ -33,6 +34,7 @@ public final class Main {
     }
 
     private static int run(String[] args) {
+        boolean workbench = args.length == 0 && DisplayCheck.available(System.getenv(), System.getProperties());
         String[] commandLine = args.length == 0 ? new String[] {"help"} : args;
         FelixRuntime runtime;
         try {
@@ -47,6 +49,9 @@ public final class Main {
             BundleContext context = runtime.framework().getBundleContext();
             PluginSettler.settle(context, runtime.pluginsAtLaunch(), PLUGIN_PATIENCE)
                     .forEach(p -> System.err.println("lamella: " + p));
+            if (workbench) {
+                return WorkbenchStart.run(context, WORKBENCH_PATIENCE_MS) ? 0 : FAILED;
+            }
             return dispatch(context, commandLine);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

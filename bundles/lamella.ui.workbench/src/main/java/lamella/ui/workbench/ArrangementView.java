@@ -1,0 +1,290 @@
+package lamella.ui.workbench;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.CTabFolder;
+import org.eclipse.swt.custom.CTabFolder2Adapter;
+import org.eclipse.swt.custom.CTabFolderEvent;
+import org.eclipse.swt.custom.CTabItem;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.graphics.Point;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Label;
+
+/**
+ * Shows an {@link Arrangement} as widgets — splits as sash forms, areas as tab folders — and rebuilds them from the
+ * arrangement after every change, so that the arrangement stays the one truth that is saved. Panel controls survive
+ * a rebuild: they wait in the shelf's parking composite while the areas are replaced.
+ */
+final class ArrangementView {
+
+    /** What the view asks of the window when the user acts on a tab. */
+    interface Actions {
+        void close(String panelId);
+
+        void changed();
+    }
+
+    private final Composite host;
+    private final PanelShelf shelf;
+    private final Actions actions;
+    private final Map<SashForm, Drawn> sashes = new LinkedHashMap<>();
+    private final Map<CTabFolder, TabArea> folders = new LinkedHashMap<>();
+    private Arrangement arrangement;
+    private Control top;
+
+    ArrangementView(Composite host, PanelShelf shelf, Arrangement arrangement, Actions actions) {
+        this.host = host;
+        this.shelf = shelf;
+        this.arrangement = arrangement;
+        this.actions = actions;
+    }
+
+    Arrangement arrangement() {
+        captureWeights();
+        return arrangement;
+    }
+
+    void replace(Arrangement with) {
+        arrangement = with;
+        rebuild();
+    }
+
+    boolean shows(String panelId) {
+        return shelf.isLive(panelId) && !arrangement.closed.contains(panelId)
+                && arrangement.areaOf(panelId).isPresent();
+    }
+
+    /** Moves a panel as a drop on an area would; the public face of a tab drag. */
+    boolean move(String panelId, String targetPanelId, Zone zone) {
+        captureWeights();
+        boolean moved = arrangement.move(panelId, targetPanelId, zone);
+        if (moved) {
+            rebuild();
+            actions.changed();
+        }
+        return moved;
+    }
+
+    /** Enlarges the area holding the panel to fill the window, or restores every area if it is enlarged already. */
+    void toggleEnlarged(String panelId) {
+        edit(() -> arrangement.enlarged = arrangement.enlarged != null ? null : panelId);
+        actions.changed();
+    }
+
+    boolean enlarged() {
+        return arrangement.enlarged != null;
+    }
+
+    /** Brings a shown panel's tab to the front. */
+    void bringToFront(String panelId) {
+        arrangement.areaOf(panelId).ifPresent(a -> a.front = panelId);
+        for (Map.Entry<CTabFolder, TabArea> e : folders.entrySet()) {
+            for (CTabItem item : e.getKey().getItems()) {
+                if (panelId.equals(item.getData(PANEL))) {
+                    e.getKey().setSelection(item);
+                }
+            }
+        }
+    }
+
+    /** The area under a point of the display and the zone of it the point is in, for a tab being dragged. */
+    Optional<DropTarget> dropAt(Point onDisplay) {
+        for (Map.Entry<CTabFolder, TabArea> e : folders.entrySet()) {
+            CTabFolder folder = e.getKey();
+            Point origin = folder.toDisplay(0, 0);
+            Point size = folder.getSize();
+            Rectangle r = new Rectangle(origin.x, origin.y, size.x, size.y);
+            if (r.contains(onDisplay) && folder.getSelection() != null) {
+                Zone zone = DropTarget.zoneOf(r, folder.getTabHeight(), onDisplay);
+                return Optional.of(new DropTarget((String) folder.getSelection().getData(PANEL), zone,
+                        DropTarget.highlight(r, zone)));
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** Panels shown, with their area's position in the tree (such as {@code 0/1/0}) and whether it is in front. */
+    List<String> placements() {
+        List<String> out = new ArrayList<>();
+        describe(arrangement.root, "0", out);
+        return out;
+    }
+
+    /** Applies a change to the arrangement and redraws; sash positions are taken in first, while they still match. */
+    void edit(Runnable change) {
+        captureWeights();
+        change.run();
+        rebuild();
+    }
+
+    void rebuild() {
+        shelf.park();
+        if (top != null && !top.isDisposed()) {
+            top.dispose();
+        }
+        sashes.clear();
+        folders.clear();
+        Optional<TabArea> enlarged = Optional.ofNullable(arrangement.enlarged).flatMap(arrangement::areaOf);
+        top = enlarged.isPresent() ? area(host, enlarged.get(), true) : part(host, arrangement.root);
+        if (top == null) {
+            top = emptyNotice(host);
+        }
+        host.layout(true, true);
+    }
+
+    private Control part(Composite parent, Part part) {
+        if (part instanceof TabArea a) {
+            return area(parent, a, false);
+        }
+        Split split = (Split) part;
+        List<Integer> drawn = new ArrayList<>();
+        for (int i = 0; i < split.parts.size(); i++) {
+            if (rendersSomething(split.parts.get(i))) {
+                drawn.add(i);
+            }
+        }
+        if (drawn.isEmpty()) {
+            return null;
+        }
+        if (drawn.size() == 1) {
+            // A split with one part to show is drawn as that part alone; the saved weights stay as they are.
+            return part(parent, split.parts.get(drawn.get(0)));
+        }
+        SashForm sash = new SashForm(parent, (split.sideBySide ? SWT.HORIZONTAL : SWT.VERTICAL) | SWT.SMOOTH);
+        sash.setSashWidth(6);
+        sash.setBackground(AreaLook.sashColour(sash.getDisplay()));
+        int[] weights = new int[drawn.size()];
+        for (int k = 0; k < drawn.size(); k++) {
+            part(sash, split.parts.get(drawn.get(k)));
+            weights[k] = split.weights.get(drawn.get(k));
+        }
+        sash.setWeights(weights);
+        sashes.put(sash, new Drawn(split, drawn));
+        return sash;
+    }
+
+    private Control area(Composite parent, TabArea area, boolean enlarged) {
+        List<String> visible = area.panels.stream().filter(this::shows).toList();
+        if (visible.isEmpty()) {
+            return null;
+        }
+        CTabFolder folder = AreaLook.folder(parent);
+        folder.setMaximized(enlarged);
+        for (String id : visible) {
+            Optional<Control> control = shelf.control(id);
+            if (control.isEmpty()) {
+                continue;
+            }
+            CTabItem item = new CTabItem(folder, SWT.CLOSE);
+            item.setText(shelf.title(id));
+            item.setData(PANEL, id);
+            control.get().setParent(folder);
+            item.setControl(control.get());
+            if (id.equals(area.front)) {
+                folder.setSelection(item);
+            }
+        }
+        if (folder.getItemCount() == 0) {
+            folder.dispose();
+            return null;
+        }
+        if (folder.getSelection() == null) {
+            folder.setSelection(0);
+            area.front = (String) folder.getItem(0).getData(PANEL);
+        }
+        folders.put(folder, area);
+        folder.addListener(SWT.Selection, e -> {
+            if (e.item != null) {
+                area.front = (String) e.item.getData(PANEL);
+                actions.changed();
+            }
+        });
+        folder.addCTabFolder2Listener(new CTabFolder2Adapter() {
+            @Override
+            public void close(CTabFolderEvent e) {
+                e.doit = false;
+                actions.close((String) e.item.getData(PANEL));
+            }
+
+            @Override
+            public void maximize(CTabFolderEvent e) {
+                toggleEnlarged(frontOf(folder));
+            }
+
+            @Override
+            public void restore(CTabFolderEvent e) {
+                toggleEnlarged(frontOf(folder));
+            }
+        });
+        folder.addListener(SWT.MouseDoubleClick, e -> {
+            CTabItem item = folder.getItem(new Point(e.x, e.y));
+            if (item != null) {
+                toggleEnlarged((String) item.getData(PANEL));
+            }
+        });
+        TabDrag.attach(folder, this);
+        return folder;
+    }
+
+    private static String frontOf(CTabFolder folder) {
+        return (String) folder.getSelection().getData(PANEL);
+    }
+
+    private static Control emptyNotice(Composite parent) {
+        Composite box = new Composite(parent, SWT.NONE);
+        box.setLayout(new GridLayout());
+        Label l = new Label(box, SWT.CENTER | SWT.WRAP);
+        l.setText("No panel is open. Choose panels from the View menu, or View ▸ Arrangements ▸ Reset to default.");
+        l.setLayoutData(new GridData(SWT.CENTER, SWT.CENTER, true, true));
+        return box;
+    }
+
+    /** Copies the sash positions the user dragged into the arrangement; parts not drawn keep their weights. */
+    private void captureWeights() {
+        sashes.forEach((sash, drawn) -> {
+            if (!sash.isDisposed()) {
+                int[] w = sash.getWeights();
+                for (int k = 0; k < w.length && k < drawn.parts().size(); k++) {
+                    drawn.split().weights.set(drawn.parts().get(k), Math.max(1, w[k]));
+                }
+            }
+        });
+    }
+
+    private boolean rendersSomething(Part p) {
+        if (p instanceof TabArea a) {
+            return a.panels.stream().anyMatch(this::shows);
+        }
+        return ((Split) p).parts.stream().anyMatch(this::rendersSomething);
+    }
+
+    private void describe(Part p, String path, List<String> out) {
+        if (p instanceof TabArea a) {
+            for (String id : a.panels) {
+                if (shows(id)) {
+                    out.add(id + " " + path + (id.equals(a.front) ? " front" : ""));
+                }
+            }
+            return;
+        }
+        Split s = (Split) p;
+        for (int i = 0; i < s.parts.size(); i++) {
+            describe(s.parts.get(i), path + "/" + i, out);
+        }
+    }
+
+    static final String PANEL = "lamella.panel";
+
+    /** A split as drawn: which of its parts have a place in the sash form, in order. */
+    private record Drawn(Split split, List<Integer> parts) {
+    }
+}

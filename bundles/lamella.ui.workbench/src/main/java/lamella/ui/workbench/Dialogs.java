@@ -1,0 +1,68 @@
+package lamella.ui.workbench;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.Point;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.MessageBox;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swt.widgets.Text;
+
+/** Small questions the window asks. */
+final class Dialogs {
+
+    private Dialogs() {
+    }
+
+    static void centre(Shell dialog, Shell over) {
+        Rectangle p = over.getBounds();
+        Point s = dialog.getSize();
+        dialog.setLocation(p.x + (p.width - s.x) / 2, p.y + (p.height - s.y) / 3);
+    }
+
+    /** Asks for a name; null when cancelled or left empty. */
+    static String askName(Shell parent, String title, String prompt, String initial) {
+        Shell d = new Shell(parent, SWT.DIALOG_TRIM | SWT.APPLICATION_MODAL);
+        d.setText(title);
+        d.setLayout(new GridLayout(2, false));
+        Label l = new Label(d, SWT.NONE);
+        l.setText(prompt);
+        l.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
+        Text t = new Text(d, SWT.BORDER | SWT.SINGLE);
+        t.setText(initial);
+        GridData td = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        td.widthHint = 320;
+        t.setLayoutData(td);
+        String[] answer = {null};
+        Button ok = new Button(d, SWT.PUSH);
+        ok.setText("Save");
+        ok.setLayoutData(new GridData(SWT.END, SWT.CENTER, true, false));
+        Button cancel = new Button(d, SWT.PUSH);
+        cancel.setText("Cancel");
+        ok.addListener(SWT.Selection, e -> {
+            answer[0] = t.getText().strip();
+            d.close();
+        });
+        cancel.addListener(SWT.Selection, e -> d.close());
+        d.setDefaultButton(ok);
+        d.pack();
+        centre(d, parent);
+        d.open();
+        while (!d.isDisposed()) {
+            if (!d.getDisplay().readAndDispatch()) {
+                d.getDisplay().sleep();
+            }
+        }
+        return answer[0] == null || answer[0].isEmpty() ? null : answer[0];
+    }
+
+    static void tell(Shell parent, String title, String text, int icon) {
+        MessageBox box = new MessageBox(parent, icon | SWT.OK);
+        box.setText(title);
+        box.setMessage(text);
+        box.open();
+    }
+}

@@ -1,0 +1,95 @@
+package lamella.ui.workbench;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import lamella.ui.api.Area;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Workbench;
+import lamella.ui.api.WorkbenchPanel;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
+import org.osgi.service.component.annotations.Component;
+
+/** The project's files at a glance: the case file, its folder, every dataset's data file (found or missing). */
+@Component(service = WorkbenchPanel.class)
+public final class ProjectPanel implements WorkbenchPanel {
+
+    @Override
+    public String id() {
+        return "project";
+    }
+
+    @Override
+    public String title() {
+        return "Project";
+    }
+
+    @Override
+    public Area preferredArea() {
+        return Area.RIGHT;
+    }
+
+    @Override
+    public PanelView open(Composite parent, Workbench workbench) {
+        Table table = new Table(parent, SWT.FULL_SELECTION | SWT.SINGLE | SWT.V_SCROLL | SWT.H_SCROLL);
+        table.setHeaderVisible(true);
+        table.setLinesVisible(true);
+        for (String[] c : List.of(new String[] {"Item", "150"}, new String[] {"File", "230"},
+                new String[] {"State", "80"})) {
+            TableColumn col = new TableColumn(table, SWT.LEFT);
+            col.setText(c[0]);
+            col.setWidth(Integer.parseInt(c[1]));
+        }
+        Project project = workbench.project();
+        Project.Listener refresh = change -> fill(table, project);
+        project.addListener(refresh);
+        fill(table, project);
+        return new PanelView() {
+            @Override
+            public Control control() {
+                return table;
+            }
+
+            @Override
+            public void close() {
+                project.removeListener(refresh);
+            }
+        };
+    }
+
+    private static void fill(Table table, Project p) {
+        if (table.isDisposed()) {
+            return;
+        }
+        table.removeAll();
+        row(table, "Case file", p.file().map(f -> f.getFileName().toString()).orElse("untitled"),
+                p.dirty() ? "unsaved changes" : p.file().isPresent() ? "saved" : "not saved yet");
+        row(table, "Folder", p.folder().toString(), Files.isDirectory(p.folder()) ? "found" : "missing");
+        List<?> datasets = p.datasets();
+        for (int i = 0; i < datasets.size(); i++) {
+            Path data = p.dataFile(i);
+            String signal = p.datasets().get(i).path("signal").asText("");
+            row(table, "Dataset " + (i + 1) + (signal.isEmpty() ? "" : " (" + signal + ")"), shortName(p, data),
+                    Files.isRegularFile(data) ? "found" : "missing");
+        }
+        if (datasets.isEmpty()) {
+            row(table, "Datasets", "none yet: drop a data file on the window", "");
+        }
+        row(table, "Last fit", p.lastFit().isPresent() ? "this session" : "none this session", "");
+    }
+
+    /** Data inside the project's folder by its relative path, which is how the case file names it. */
+    private static String shortName(Project p, Path data) {
+        return data.startsWith(p.folder()) ? p.folder().relativize(data).toString() : data.toString();
+    }
+
+    private static void row(Table t, String item, String file, String state) {
+        new TableItem(t, SWT.NONE).setText(new String[] {item, file, state});
+    }
+}

@@ -1,0 +1,20 @@
+package lamella.ui.workbench;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A tabbed area: panel ids in tab order, the one in front, and optionally the default {@link lamella.ui.api.Area}
+ * it stands for, where panels without a saved place open. Ids of panels whose bundle is gone stay here, so that
+ * the panel returns to its place with its bundle.
+ */
+final class TabArea extends Part {
+
+    final List<String> panels = new ArrayList<>();
+    String front;
+    String role;
+
+    TabArea(String role) {
+        this.role = role;
+    }
+}

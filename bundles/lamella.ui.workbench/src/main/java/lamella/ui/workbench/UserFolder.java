@@ -1,0 +1,35 @@
+package lamella.ui.workbench;
+
+import java.nio.file.Path;
+
+/**
+ * The user's Lamella folder ({@code ~/.lamella}, or the folder property {@code lamella.user.dir} names, which tests
+ * use): the arrangement, named arrangements, recent projects and recovery copies.
+ */
+record UserFolder(Path root) {
+
+    static final String PROPERTY = "lamella.user.dir";
+
+    static UserFolder of(String configured) {
+        if (configured != null && !configured.isBlank()) {
+            return new UserFolder(Path.of(configured).toAbsolutePath());
+        }
+        return new UserFolder(Path.of(System.getProperty("user.home"), ".lamella"));
+    }
+
+    Path arrangement() {
+        return root.resolve("arrangement.json");
+    }
+
+    Path namedArrangements() {
+        return root.resolve("arrangements");
+    }
+
+    Path recent() {
+        return root.resolve("recent.json");
+    }
+
+    Path recovery() {
+        return root.resolve("recovery");
+    }
+}

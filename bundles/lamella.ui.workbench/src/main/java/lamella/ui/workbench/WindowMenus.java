@@ -1,0 +1,183 @@
+package lamella.ui.workbench;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import lamella.ui.api.WorkbenchPanel;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Event;
+import org.eclipse.swt.widgets.FileDialog;
+import org.eclipse.swt.widgets.Menu;
+import org.eclipse.swt.widgets.MenuItem;
+import org.eclipse.swt.widgets.Shell;
+
+/** The menu bar: File, View and Help. Lists that change (panels, recent projects, arrangements) fill on opening. */
+final class WindowMenus {
+
+    private final WorkbenchWindow window;
+    private final Shell shell;
+    private Menu view;
+    private Menu help;
+
+    WindowMenus(WorkbenchWindow window) {
+        this.window = window;
+        this.shell = window.shell();
+    }
+
+    void install() {
+        Menu bar = new Menu(shell, SWT.BAR);
+        file(bar);
+        view = cascade(bar, "&View");
+        view.addListener(SWT.Show, e -> fillView());
+        fillView();
+        help = cascade(bar, "&Help");
+        item(help, "&Laser and heater safety…", 0, () -> SafetyNotice.open(shell));
+        item(help, "&About Lamella", 0, () -> AboutNotice.open(shell));
+        shell.setMenuBar(bar);
+    }
+
+    /** The View menu's item for a panel, as a user would find it. */
+    MenuItem panelItem(String panelId) {
+        fillView();
+        for (MenuItem i : view.getItems()) {
+            if (panelId.equals(i.getData(ArrangementView.PANEL))) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("no View menu item for panel '" + panelId + "'");
+    }
+
+    List<String> viewLabels() {
+        fillView();
+        return java.util.Arrays.stream(view.getItems()).filter(i -> (i.getStyle() & SWT.SEPARATOR) == 0)
+                .map(i -> ((i.getStyle() & SWT.CHECK) != 0 ? (i.getSelection() ? "[x] " : "[ ] ") : "")
+                        + i.getText().replace("&", "")).toList();
+    }
+
+    /** Chooses a Help menu item as a user would. */
+    void chooseHelp(String label) {
+        for (MenuItem i : help.getItems()) {
+            if (i.getText().replace("&", "").startsWith(label)) {
+                i.notifyListeners(SWT.Selection, new Event());
+                return;
+            }
+        }
+        throw new IllegalArgumentException("no Help menu item '" + label + "'");
+    }
+
+    private void file(Menu bar) {
+        Menu file = cascade(bar, "&File");
+        ProjectSession s = window.session();
+        item(file, "&New from case…", SWT.MOD1 | 'N', s::newFromCase);
+        item(file, "&Open…", SWT.MOD1 | 'O', s::open);
+        Menu recent = new Menu(shell, SWT.DROP_DOWN);
+        MenuItem recentItem = new MenuItem(file, SWT.CASCADE);
+        recentItem.setText("Open &recent");
+        recentItem.setMenu(recent);
+        recent.addListener(SWT.Show, e -> {
+            clear(recent);
+            List<Path> paths = s.recent().paths();
+            if (paths.isEmpty()) {
+                new MenuItem(recent, SWT.PUSH).setText("(no recent projects)");
+                recent.getItems()[0].setEnabled(false);
+            }
+            for (Path p : paths) {
+                item(recent, p.getFileName() + "  —  " + p.getParent(), 0, () -> s.openRecent(p));
+            }
+        });
+        new MenuItem(file, SWT.SEPARATOR);
+        item(file, "&Save", SWT.MOD1 | 'S', s::save);
+        item(file, "Save &as…", SWT.MOD1 | SWT.SHIFT | 'S', s::saveAs);
+        new MenuItem(file, SWT.SEPARATOR);
+        item(file, "&Import data…", SWT.MOD1 | 'I', this::importData);
+        new MenuItem(file, SWT.SEPARATOR);
+        item(file, "&Quit", SWT.MOD1 | 'Q', shell::close);
+    }
+
+    private void importData() {
+        FileDialog d = new FileDialog(shell, SWT.OPEN | SWT.MULTI);
+        d.setText("Import instrument data");
+        if (d.open() != null) {
+            for (String name : d.getFileNames()) {
+                window.drop().importFile(Path.of(d.getFilterPath(), name));
+            }
+        }
+    }
+
+    private void fillView() {
+        clear(view);
+        List<WorkbenchPanel> panels = window.shelf().livePanels().stream()
+                .sorted(Comparator.comparing(WorkbenchPanel::title)).toList();
+        for (WorkbenchPanel p : panels) {
+            MenuItem i = new MenuItem(view, SWT.CHECK);
+            i.setText(p.title());
+            i.setData(ArrangementView.PANEL, p.id());
+            i.setSelection(window.layout().shows(p.id()));
+            i.addListener(SWT.Selection, e -> window.setShown(p.id(), i.getSelection()));
+        }
+        if (panels.isEmpty()) {
+            MenuItem none = new MenuItem(view, SWT.PUSH);
+            none.setText("(no panels are installed)");
+            none.setEnabled(false);
+        }
+        new MenuItem(view, SWT.SEPARATOR);
+        item(view, window.layout().enlarged() ? "Show all &areas" : "&Enlarge the front area", SWT.MOD1 | 'M',
+                window::toggleEnlarged);
+        Menu arrangements = new Menu(shell, SWT.DROP_DOWN);
+        MenuItem a = new MenuItem(view, SWT.CASCADE);
+        a.setText("A&rrangements");
+        a.setMenu(arrangements);
+        item(arrangements, "&Save as named…", 0, this::saveNamed);
+        Menu restore = new Menu(shell, SWT.DROP_DOWN);
+        MenuItem r = new MenuItem(arrangements, SWT.CASCADE);
+        r.setText("&Restore named");
+        r.setMenu(restore);
+        List<String> names = window.arrangements().names();
+        r.setEnabled(!names.isEmpty());
+        for (String n : names) {
+            item(restore, n, 0, () -> restoreNamed(n));
+        }
+        new MenuItem(arrangements, SWT.SEPARATOR);
+        item(arrangements, "Reset to &default", 0, window::resetArrangement);
+    }
+
+    private void saveNamed() {
+        String name = Dialogs.askName(shell, "Save arrangement", "Name of this arrangement:", "");
+        if (name != null) {
+            window.arrangements().saveNamed(name, window.layout().arrangement());
+        }
+    }
+
+    private void restoreNamed(String name) {
+        try {
+            window.useArrangement(window.arrangements().named(name));
+            window.messages().info("Restored the arrangement '" + name + "'.");
+        } catch (IOException | RuntimeException e) {
+            window.messages().error("Could not restore the arrangement '" + name + "'", e);
+        }
+    }
+
+    private Menu cascade(Menu bar, String text) {
+        MenuItem top = new MenuItem(bar, SWT.CASCADE);
+        top.setText(text);
+        Menu menu = new Menu(shell, SWT.DROP_DOWN);
+        top.setMenu(menu);
+        return menu;
+    }
+
+    private static void item(Menu menu, String text, int accelerator, Runnable action) {
+        MenuItem i = new MenuItem(menu, SWT.PUSH);
+        i.setText(text);
+        if (accelerator != 0) {
+            i.setAccelerator(accelerator);
+        }
+        i.addListener(SWT.Selection, e -> action.run());
+    }
+
+    private static void clear(Menu menu) {
+        for (MenuItem i : menu.getItems()) {
+            i.dispose();
+        }
+    }
+}

@@ -1,0 +1,190 @@
+package lamella.ui.workbench;
+
+import java.nio.file.Path;
+import java.util.Hashtable;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.Function;
+import lamella.api.CaseFormat;
+import lamella.api.HeatingGeometry;
+import lamella.api.ModelCatalog;
+import lamella.api.StackKernels;
+import lamella.api.Technique;
+import lamella.api.data.DataImporter;
+import lamella.api.fit.FitService;
+import lamella.api.fit.ReportWriter;
+import lamella.api.material.MaterialCatalog;
+import lamella.ui.api.WorkbenchPanel;
+import org.eclipse.swt.widgets.Display;
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceRegistration;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Deactivate;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+
+/**
+ * The workbench as a service of a JDK type, so that the launcher (which sees only java.*) can start it: a
+ * {@link Runnable} with {@code lamella.role=workbench} whose {@code run()} creates the SWT display on the calling
+ * thread, opens the window and runs its event loop until the window closes. While the window is open, a
+ * {@code Function<String, String>} with {@code lamella.role=workbench.control} lets a script or test in the same
+ * process drive it (see {@link WindowControl}). Activation touches no SWT: the display belongs to the caller.
+ */
+@Component(service = Runnable.class, immediate = true, property = "lamella.role=workbench")
+public final class WorkbenchComponent implements Runnable, LiveServices {
+
+    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
+    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+    private final List<DataImporter> importers = new CopyOnWriteArrayList<>();
+    private final List<WorkbenchPanel> panels = new CopyOnWriteArrayList<>();
+
+    @Reference
+    private CaseFormat caseFormat;
+    @Reference
+    private StackKernels kernels;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile FitService fitter;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile ReportWriter reports;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile MaterialCatalog materials;
+
+    private BundleContext context;
+    private UserFolder user;
+    private Path home;
+    private volatile WorkbenchWindow window;
+
+    @Activate
+    void activate(BundleContext context) {
+        this.context = context;
+        this.user = UserFolder.of(context.getProperty(UserFolder.PROPERTY));
+        String h = context.getProperty("lamella.home");
+        this.home = h == null ? null : Path.of(h);
+    }
+
+    @Deactivate
+    void deactivate() {
+        WorkbenchWindow w = window;
+        if (w != null) {
+            w.requestClose();
+        }
+    }
+
+    @Override
+    public void run() {
+        Display.setAppName("Lamella");
+        Display display = new Display();
+        ServiceRegistration<?> control = null;
+        try {
+            MessageLog messages = new MessageLog();
+            long started = System.nanoTime();
+            WorkbenchWindow w = new WorkbenchWindow(display, this, messages, user, home);
+            window = w;
+            w.open();
+            Hashtable<String, Object> props = new Hashtable<>();
+            props.put("lamella.role", "workbench.control");
+            control = context.registerService(Function.class, new WindowControl(w, started), props);
+            while (!w.closed()) {
+                if (!display.readAndDispatch()) {
+                    display.sleep();
+                }
+            }
+        } finally {
+            window = null;
+            if (control != null) {
+                try {
+                    control.unregister();
+                } catch (IllegalStateException alreadyGone) {
+                    // the bundle stopped first, which unregistered it
+                }
+            }
+            display.dispose();
+        }
+    }
+
+    // ------------------------------------------------------------------ LiveServices
+
+    @Override
+    public CaseFormat caseFormat() {
+        return caseFormat;
+    }
+
+    @Override
+    public ModelCatalog catalog() {
+        return new ModelCatalog(geometries, techniques, kernels);
+    }
+
+    @Override
+    public Optional<FitService> fitter() {
+        return Optional.ofNullable(fitter);
+    }
+
+    @Override
+    public Optional<ReportWriter> reports() {
+        return Optional.ofNullable(reports);
+    }
+
+    @Override
+    public Optional<MaterialCatalog> materials() {
+        return Optional.ofNullable(materials);
+    }
+
+    @Override
+    public List<DataImporter> importers() {
+        return List.copyOf(importers);
+    }
+
+    @Override
+    public List<WorkbenchPanel> panels() {
+        return List.copyOf(panels);
+    }
+
+    // ------------------------------------------------------------------ references
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addGeometry(HeatingGeometry g) {
+        geometries.add(g);
+    }
+
+    void removeGeometry(HeatingGeometry g) {
+        geometries.remove(g);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addTechnique(Technique t) {
+        techniques.add(t);
+    }
+
+    void removeTechnique(Technique t) {
+        techniques.remove(t);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addImporter(DataImporter i) {
+        importers.add(i);
+    }
+
+    void removeImporter(DataImporter i) {
+        importers.remove(i);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addPanel(WorkbenchPanel p) {
+        panels.add(p);
+        WorkbenchWindow w = window;
+        if (w != null) {
+            w.panelArrived(p);
+        }
+    }
+
+    void removePanel(WorkbenchPanel p) {
+        panels.remove(p);
+        WorkbenchWindow w = window;
+        if (w != null) {
+            w.panelLeft(p);
+        }
+    }
+}

@@ -1,0 +1,368 @@
+package lamella.ui.workbench;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Consumer;
+import lamella.api.CaseFormat;
+import lamella.api.ModelCatalog;
+import lamella.api.data.DataImporter;
+import lamella.api.fit.FitService;
+import lamella.api.fit.ReportWriter;
+import lamella.api.material.MaterialCatalog;
+import lamella.ui.api.BackgroundWork;
+import lamella.ui.api.Messages;
+import lamella.ui.api.Project;
+import lamella.ui.api.Task;
+import lamella.ui.api.Workbench;
+import lamella.ui.api.WorkbenchPanel;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
+
+/**
+ * The window: menus, the arranged areas of panels, the status line; and the {@link Workbench} every panel is given.
+ * Created and used on the UI thread; {@link #panelArrived} and {@link #panelLeft} may be called from any thread.
+ */
+final class WorkbenchWindow implements Workbench {
+
+    private static final int DEFAULT_WIDTH = 1440;
+    private static final int DEFAULT_HEIGHT = 900;
+
+    private final Display display;
+    private final LiveServices services;
+    private final MessageLog messages;
+    private final ArrangementStore arrangements;
+    private final Shell shell;
+    private final PanelShelf shelf;
+    private final ArrangementView layout;
+    private final StatusLine status;
+    private final BackgroundTasks tasks;
+    private final ProjectSession session;
+    private final DataDrop drop;
+    private final WindowMenus menus;
+    private final Project.Listener projectListener = change -> projectChanged();
+    private long firstPaintNanos;
+
+    WorkbenchWindow(Display display, LiveServices services, MessageLog messages, UserFolder user, Path home) {
+        this.display = display;
+        this.services = services;
+        this.messages = messages;
+        this.arrangements = new ArrangementStore(user, messages);
+        messages.deliverOn(display);
+        shell = new Shell(display, SWT.SHELL_TRIM);
+        GridLayout grid = new GridLayout(1, false);
+        grid.marginWidth = 0;
+        grid.marginHeight = 0;
+        grid.verticalSpacing = 0;
+        shell.setLayout(grid);
+        Composite host = new Composite(shell, SWT.NONE);
+        FillLayout fill = new FillLayout();
+        fill.marginWidth = 4;
+        fill.marginHeight = 4;
+        host.setLayout(fill);
+        host.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        status = new StatusLine(shell);
+        Composite parking = new Composite(shell, SWT.NONE);
+        GridData parked = new GridData();
+        parked.exclude = true;
+        parking.setLayoutData(parked);
+        parking.setVisible(false);
+        shelf = new PanelShelf(parking, this, messages);
+        layout = new ArrangementView(host, shelf, arrangements.last(), new ArrangementView.Actions() {
+            @Override
+            public void close(String panelId) {
+                setShown(panelId, false);
+            }
+
+            @Override
+            public void changed() {
+                // The arrangement is saved when the window closes; nothing else depends on it meanwhile.
+            }
+        });
+        tasks = new BackgroundTasks(display, messages, () -> status.showWork(tasks().summary()));
+        session = new ProjectSession(shell, services.caseFormat()::read, user, home, messages, this::projectReplaced);
+        drop = new DataDrop(this);
+        menus = new WindowMenus(this);
+        host.addListener(SWT.Paint, e -> {
+            if (firstPaintNanos == 0) {
+                firstPaintNanos = System.nanoTime();
+            }
+        });
+    }
+
+    /** Opens the window with the panels live now; panels that come later are added as they arrive. */
+    void open() {
+        session.openInitial();
+        for (WorkbenchPanel p : services.panels()) {
+            addPanel(p);
+        }
+        menus.install();
+        drop.acceptOn(shell);
+        status.showWork("");
+        shell.addListener(SWT.Close, e -> e.doit = closing());
+        placeWindow();
+        layout.rebuild();
+        shell.open();
+        display.asyncExec(session::offerRecovery);
+        display.timerExec(ProjectSession.RECOVERY_EVERY_MS, new Runnable() {
+            @Override
+            public void run() {
+                if (!shell.isDisposed()) {
+                    session.writeRecovery();
+                    display.timerExec(ProjectSession.RECOVERY_EVERY_MS, this);
+                }
+            }
+        });
+    }
+
+    boolean closed() {
+        return shell.isDisposed();
+    }
+
+    long firstPaintNanos() {
+        return firstPaintNanos;
+    }
+
+    void panelArrived(WorkbenchPanel panel) {
+        onUi(() -> {
+            addPanel(panel);
+            layout.rebuild();
+        });
+    }
+
+    void panelLeft(WorkbenchPanel panel) {
+        onUi(() -> {
+            if (shelf.panel(panel.id()).filter(p -> p == panel).isPresent()) {
+                layout.edit(() -> shelf.left(panel.id()));
+            }
+        });
+    }
+
+    /** Closes the window as the user would (asking about unsaved changes); from any thread. */
+    void requestClose() {
+        onUi(shell::close);
+    }
+
+    // ------------------------------------------------------------------ used by the menus and the control
+
+    ProjectSession session() {
+        return session;
+    }
+
+    PanelShelf shelf() {
+        return shelf;
+    }
+
+    ArrangementView layout() {
+        return layout;
+    }
+
+    ArrangementStore arrangements() {
+        return arrangements;
+    }
+
+    DataDrop drop() {
+        return drop;
+    }
+
+    WindowMenus menus() {
+        return menus;
+    }
+
+    StatusLine status() {
+        return status;
+    }
+
+    BackgroundTasks tasks() {
+        return tasks;
+    }
+
+    void setShown(String panelId, boolean shown) {
+        if (shown) {
+            show(panelId);
+            return;
+        }
+        layout.edit(() -> {
+            layout.arrangement().closed.add(panelId);
+            shelf.release(panelId);
+        });
+    }
+
+    void toggleEnlarged() {
+        layout.arrangement().areas().stream().filter(a -> a.front != null && layout.shows(a.front)).findFirst()
+                .ifPresent(a -> layout.toggleEnlarged(a.front));
+    }
+
+    void resetArrangement() {
+        useArrangement(Arrangement.standard());
+        messages.info("The arrangement is back to the standard one.");
+    }
+
+    void useArrangement(Arrangement a) {
+        Rectangle b = shell.getBounds();
+        a.x = b.x;
+        a.y = b.y;
+        a.width = b.width;
+        a.height = b.height;
+        shelf.livePanels().forEach(p -> a.place(p.id(), p.preferredArea()));
+        layout.replace(a);
+    }
+
+    // ------------------------------------------------------------------ Workbench
+
+    @Override
+    public Display display() {
+        return display;
+    }
+
+    @Override
+    public Shell shell() {
+        return shell;
+    }
+
+    @Override
+    public Project project() {
+        return session.project();
+    }
+
+    @Override
+    public Messages messages() {
+        return messages;
+    }
+
+    @Override
+    public ModelCatalog catalog() {
+        return services.catalog();
+    }
+
+    @Override
+    public CaseFormat caseFormat() {
+        return services.caseFormat();
+    }
+
+    @Override
+    public Optional<FitService> fitter() {
+        return services.fitter();
+    }
+
+    @Override
+    public Optional<ReportWriter> reports() {
+        return services.reports();
+    }
+
+    @Override
+    public Optional<MaterialCatalog> materials() {
+        return services.materials();
+    }
+
+    @Override
+    public List<DataImporter> importers() {
+        return services.importers();
+    }
+
+    @Override
+    public <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone) {
+        return tasks.submit(label, work, onDone);
+    }
+
+    @Override
+    public void show(String panelId) {
+        if (!shelf.isLive(panelId)) {
+            messages.warning("There is no panel '" + panelId + "' (its bundle is not installed or not started).");
+            return;
+        }
+        if (!layout.shows(panelId)) {
+            layout.edit(() -> layout.arrangement().closed.remove(panelId));
+        }
+        layout.bringToFront(panelId);
+    }
+
+    // ------------------------------------------------------------------ internals
+
+    private void addPanel(WorkbenchPanel panel) {
+        if (shelf.panel(panel.id()).filter(p -> p == panel).isPresent()) {
+            return;
+        }
+        if (shelf.isLive(panel.id())) {
+            messages.warning("Two panels have the id '" + panel.id() + "'; the second (" + panel.title()
+                    + ") is not shown.");
+            return;
+        }
+        shelf.arrived(panel);
+        layout.arrangement().place(panel.id(), panel.preferredArea());
+    }
+
+    private boolean closing() {
+        session.writeRecovery();
+        if (!session.confirmDiscard()) {
+            return false;
+        }
+        session.deleteRecovery();
+        Arrangement a = layout.arrangement();
+        a.windowMaximised = shell.getMaximized();
+        if (!a.windowMaximised) {
+            Rectangle b = shell.getBounds();
+            a.x = b.x;
+            a.y = b.y;
+            a.width = b.width;
+            a.height = b.height;
+        }
+        arrangements.saveLast(a);
+        session.project().removeListener(projectListener);
+        shelf.releaseAll();
+        tasks.shutdown();
+        return true;
+    }
+
+    private void projectReplaced(Project p) {
+        p.addListener(projectListener);
+        // Panels hold listeners on the project they were opened with, so they reopen with the new one.
+        if (shell.getMenuBar() != null) {
+            layout.edit(shelf::releaseAll);
+        }
+        projectChanged();
+    }
+
+    private void projectChanged() {
+        if (!shell.isDisposed()) {
+            shell.setText("Lamella — " + session.name() + (session.project().dirty() ? " •" : ""));
+            status.showProject(session.project());
+        }
+    }
+
+    /** The saved bounds if they still fit on a screen, else a comfortable size centred on the primary one. */
+    private void placeWindow() {
+        Arrangement a = layout.arrangement();
+        Rectangle screen = display.getPrimaryMonitor().getClientArea();
+        Rectangle saved = new Rectangle(a.x, a.y, a.width, a.height);
+        if (a.width > 200 && a.height > 150 && screen.intersects(saved)) {
+            shell.setBounds(saved);
+        } else {
+            int w = Math.min(DEFAULT_WIDTH, screen.width);
+            int h = Math.min(DEFAULT_HEIGHT, screen.height);
+            shell.setBounds(screen.x + (screen.width - w) / 2, screen.y + (screen.height - h) / 2, w, h);
+        }
+        shell.setMaximized(a.windowMaximised);
+    }
+
+    private void onUi(Runnable r) {
+        if (display.isDisposed()) {
+            return;
+        }
+        if (display.getThread() == Thread.currentThread()) {
+            r.run();
+        } else {
+            display.asyncExec(() -> {
+                if (!shell.isDisposed()) {
+                    r.run();
+                }
+            });
+        }
+    }
+}

@@ -1,0 +1,55 @@
+package lamella.launcher;
+
+import java.util.Collection;
+import java.util.concurrent.TimeUnit;
+
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.InvalidSyntaxException;
+import org.osgi.framework.ServiceReference;
+
+/**
+ * Opens the desktop workbench on the calling thread — the launcher's main thread, which SWT's display then belongs
+ * to — and returns when its window closes. The workbench bundle offers it as a {@link Runnable} with
+ * {@code lamella.role=workbench}, a JDK type because nothing else crosses to the launcher's class loader.
+ */
+final class WorkbenchStart {
+
+    static final String FILTER = "(lamella.role=workbench)";
+    private static final long POLL_MS = 20;
+
+    private WorkbenchStart() {
+    }
+
+    /** @return false, having said why, when no workbench came up within the patience */
+    static boolean run(BundleContext context, long patienceMs) throws InterruptedException {
+        // Charts are drawn into images off-screen; SWT, not AWT, owns the display.
+        System.setProperty("java.awt.headless", "true");
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(patienceMs);
+        while (true) {
+            try {
+                Collection<ServiceReference<Runnable>> refs = context.getServiceReferences(Runnable.class, FILTER);
+                if (!refs.isEmpty()) {
+                    ServiceReference<Runnable> ref = refs.iterator().next();
+                    Runnable workbench = context.getService(ref);
+                    if (workbench != null) {
+                        try {
+                            workbench.run();
+                        } finally {
+                            context.ungetService(ref);
+                        }
+                        return true;
+                    }
+                }
+            } catch (InvalidSyntaxException e) {
+                throw new IllegalStateException("the workbench filter is constant and valid", e);
+            }
+            if (System.nanoTime() > deadline) {
+                System.err.println("lamella: the workbench did not come up within " + patienceMs / 1000 + " s; is"
+                        + " the desktop feature (bundle lamella.ui.workbench and SWT) installed and resolved?"
+                        + " Run 'lamella help' for the commands.");
+                return false;
+            }
+            Thread.sleep(POLL_MS);
+        }
+    }
+}

@@ -1,0 +1,244 @@
+package lamella.product;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Function;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.osgi.framework.Bundle;
+import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceReference;
+
+import lamella.launcher.FelixRuntime;
+
+/**
+ * The desktop workbench in a private runtime and user folder, its display owned by a test thread as the launcher's
+ * main thread owns it. The window is driven through its control service, each command run on the UI thread as
+ * the user's gesture would be. Screenshots go to target/screenshots/ for a person to look at.
+ */
+class WorkbenchIT {
+
+    private static final long PATIENCE_MS = 20_000;
+    private static final Path SHOTS = Path.of(System.getProperty("basedir", "."), "target", "screenshots");
+
+    @TempDir
+    static Path home;
+    @TempDir
+    static Path user;
+    private static FelixRuntime runtime;
+    private static BundleContext context;
+    private static Thread ui;
+    private static final AtomicReference<Throwable> uiFailure = new AtomicReference<>();
+    private static Function<String, String> window;
+
+    @BeforeAll
+    static void start() throws Exception {
+        assumeTrue(System.getenv("DISPLAY") != null, "the workbench tests need a display; ./run-tests provides one");
+        RuntimeCopy.into(home);
+        copyDemo(home);
+        runtime = FelixRuntime.start(home, Map.of("lamella.user.dir", user.toString()));
+        context = runtime.framework().getBundleContext();
+        window = openWindow();
+    }
+
+    @AfterAll
+    static void stop() throws Exception {
+        if (window != null) {
+            closeWindow();
+        }
+        if (runtime != null) {
+            runtime.close();
+        }
+    }
+
+    @Test
+    void everyRegisteredPanelIsShownAndPhotographed() throws Exception {
+        List<String> registered = registeredPanelIds();
+        assertTrue(registered.contains("messages") && registered.contains("project"), registered.toString());
+        List<String> shown = lines(ask("placements")).stream().map(l -> l.split(" ")[0]).sorted().toList();
+        assertEquals(registered.stream().sorted().toList(), shown);
+        for (String size : List.of("1600 1000", "1280 800")) {
+            ask("size " + size);
+            for (String id : registered) {
+                assertEquals("ok", ask("front " + id));
+                Path png = SHOTS.resolve("panel-" + id + "-" + size.replace(' ', 'x') + ".png");
+                ask("screenshot " + png);
+                assertTrue(Files.size(png) > 10_000, png + " is too small to show a window");
+            }
+        }
+        ask("size 1600 1000");
+    }
+
+    @Test
+    void theTitleNamesTheProjectAndTheStatusLineJudgesTheCase() {
+        assertTrue(ask("title").matches("Lamella — [^ /]+\\.json( •)?"), ask("title"));
+        assertTrue(ask("status").startsWith("Case valid: gaussian heating"), ask("status"));
+    }
+
+    @Test
+    void theViewMenuHidesAndShowsAPanel() throws Exception {
+        assertTrue(lines(ask("view-menu")).contains("[x] Project"), ask("view-menu"));
+        assertEquals("hidden", ask("toggle project"));
+        assertTrue(lines(ask("view-menu")).contains("[ ] Project"), ask("view-menu"));
+        assertTrue(lines(ask("placements")).stream().noneMatch(l -> l.startsWith("project ")));
+        ask("screenshot " + SHOTS.resolve("project-hidden.png"));
+        assertEquals("shown", ask("toggle project"));
+        assertTrue(lines(ask("placements")).stream().anyMatch(l -> l.startsWith("project ")));
+    }
+
+    @Test
+    void theSafetyNoticeCarriesTheLaserCaution() {
+        String text = ask("safety");
+        assertTrue(text.contains("Class 3B and Class 4 lasers"), text);
+        assertTrue(text.contains("eye protection rated for every wavelength"), text);
+        assertTrue(text.contains("interlocked enclosures"), text);
+    }
+
+    @Test
+    void saveAsWritesACaseTheCaseReaderAccepts() throws Exception {
+        Path target = user.resolve("saved/oxide-copy.json");
+        assertEquals("saved", ask("save-as " + target));
+        assertEquals("Lamella — oxide-copy.json", ask("title"));
+        Object format = service("lamella.api.CaseFormat", null);
+        Object doc = api(format, "lamella.api.CaseFormat").getMethod("read", Path.class).invoke(format, target);
+        assertNotNull(doc);
+        String text = Files.readString(target, StandardCharsets.UTF_8);
+        assertTrue(text.contains("\"stack\""), text);
+        assertTrue(Files.readString(user.resolve("recent.json")).contains("oxide-copy.json"));
+    }
+
+    @Test
+    void anArrangementSurvivesARestart() throws Exception {
+        String before = area(lines(ask("placements")), "messages");
+        assertEquals("moved", ask("move project messages RIGHT"));
+        List<String> moved = lines(ask("placements"));
+        // The messages area became a split: messages on the left, project in a new area on its right.
+        assertEquals(before + "/0", area(moved, "messages"), moved.toString());
+        assertEquals(before + "/1", area(moved, "project"), moved.toString());
+        ask("screenshot " + SHOTS.resolve("arrangement-before-restart.png"));
+
+        closeWindow();
+        Bundle wb = bundle("lamella.ui.workbench");
+        wb.stop();
+        wb.start();
+        window = openWindow();
+
+        assertEquals(moved, lines(ask("placements")));
+        ask("screenshot " + SHOTS.resolve("arrangement-after-restart.png"));
+        assertTrue(Files.readString(user.resolve("arrangement.json")).contains("\"project\""));
+    }
+
+    @Test
+    void theWorkbenchPaintsQuickly() {
+        String ms = ask("first-paint-ms");
+        System.out.println("workbench: first paint " + ms + " ms after the display was created");
+        assertTrue(Long.parseLong(ms) < 10_000, ms);
+    }
+
+    // ------------------------------------------------------------------ helpers
+
+    private static String area(List<String> placements, String id) {
+        return placements.stream().filter(l -> l.startsWith(id + " ")).map(l -> l.split(" ")[1]).findFirst()
+                .orElseThrow(() -> new AssertionError(id + " not in " + placements));
+    }
+
+    private static String ask(String command) {
+        String answer = window.apply(command);
+        if (answer.startsWith("error:")) {
+            throw new AssertionError(command + " → " + answer);
+        }
+        return answer;
+    }
+
+    private static List<String> lines(String text) {
+        return text.isEmpty() ? List.of() : Arrays.asList(text.split("\n"));
+    }
+
+    @SuppressWarnings("unchecked")
+    private static Function<String, String> openWindow() throws Exception {
+        Runnable workbench = (Runnable) service("java.lang.Runnable", "(lamella.role=workbench)");
+        uiFailure.set(null);
+        ui = new Thread(() -> {
+            try {
+                workbench.run();
+            } catch (Throwable t) {
+                uiFailure.set(t);
+            }
+        }, "workbench-ui");
+        ui.start();
+        return (Function<String, String>) service("java.util.function.Function", "(lamella.role=workbench.control)");
+    }
+
+    private static void closeWindow() throws InterruptedException {
+        assertEquals("closed", window.apply("close"));
+        ui.join(TimeUnit.SECONDS.toMillis(10));
+        assertTrue(!ui.isAlive(), "the UI thread ended when the window closed");
+        if (uiFailure.get() != null) {
+            throw new AssertionError("the workbench failed", uiFailure.get());
+        }
+        window = null;
+    }
+
+    private static Object service(String type, String filter) throws Exception {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(PATIENCE_MS);
+        while (System.nanoTime() < deadline) {
+            if (uiFailure.get() != null) {
+                throw new AssertionError("the workbench failed", uiFailure.get());
+            }
+            ServiceReference<?>[] refs = context.getServiceReferences(type, filter);
+            if (refs != null && refs.length > 0) {
+                return context.getService(refs[0]);
+            }
+            Thread.sleep(20);
+        }
+        throw new AssertionError("no " + type + " " + filter + " within " + PATIENCE_MS + " ms");
+    }
+
+    private static List<String> registeredPanelIds() throws Exception {
+        List<String> ids = new ArrayList<>();
+        ServiceReference<?>[] refs = context.getServiceReferences("lamella.ui.api.WorkbenchPanel", null);
+        for (ServiceReference<?> r : refs) {
+            Object panel = context.getService(r);
+            ids.add((String) api(panel, "lamella.ui.api.WorkbenchPanel").getMethod("id").invoke(panel));
+            context.ungetService(r);
+        }
+        return ids;
+    }
+
+    /** The API interface as the service's own bundle sees it; the API is not on this test's class path. */
+    private static Class<?> api(Object service, String name) throws ClassNotFoundException {
+        return Class.forName(name, false, service.getClass().getClassLoader());
+    }
+
+    private static Bundle bundle(String name) {
+        return Stream.of(context.getBundles()).filter(b -> name.equals(b.getSymbolicName())).findFirst()
+                .orElseThrow(() -> new AssertionError("no bundle " + name));
+    }
+
+    private static void copyDemo(Path target) throws IOException {
+        Path demo = RuntimeCopy.assembled().resolve("demo/oxide-film-joint");
+        Path to = Files.createDirectories(target.resolve("demo/oxide-film-joint"));
+        try (Stream<Path> files = Files.list(demo)) {
+            for (Path f : files.toList()) {
+                Files.copy(f, to.resolve(f.getFileName().toString()));
+            }
+        }
+    }
+}
