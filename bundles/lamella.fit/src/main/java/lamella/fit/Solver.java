@@ -77,9 +77,10 @@ final class Solver {
                 .parameterValidator(v -> new ArrayRealVector(clamp(v.toArray()), false))
                 .maxEvaluations(Integer.MAX_VALUE)
                 .maxIterations(MAX_ITERATIONS);
+        // a relative 1e-8 in the cost and the parameters is far inside any measurement's uncertainty
         LevenbergMarquardtOptimizer lm = new LevenbergMarquardtOptimizer()
-                .withCostRelativeTolerance(1e-12)
-                .withParameterRelativeTolerance(1e-10);
+                .withCostRelativeTolerance(1e-8)
+                .withParameterRelativeTolerance(1e-8);
         try {
             LeastSquaresOptimizer.Optimum o = lm.optimize(b.build());
             double[] u = o.getPoint().toArray();

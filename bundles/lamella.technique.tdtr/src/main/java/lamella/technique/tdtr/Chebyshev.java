@@ -4,21 +4,34 @@ import lamella.api.FrequencyResponse;
 import lamella.api.ModelEvaluationException;
 
 /**
- * A Chebyshev interpolant of g(s) = H(eˢ)·e^(s/2) on [a, b], in barycentric form on Chebyshev points of the first
- * kind (Berrut & Trefethen, SIAM Review 46, 501, 2004), which is stable at any degree.
+ * A Chebyshev interpolant of g(s) = H(eˢ)·e^(s/2) on [a, b] through Chebyshev points of the first kind, held as its
+ * Chebyshev coefficients and evaluated by Clenshaw's recurrence, which is stable and needs no division (Press et
+ * al., Numerical Recipes, 3rd ed., 2007, §5.8).
  */
 final class Chebyshev {
 
-    private final double[] nodes;
-    private final double[] weights;
-    private final double[] re;
-    private final double[] im;
+    private final double a;
+    private final double b;
+    private final double[] cr;
+    private final double[] ci;
 
-    private Chebyshev(double[] nodes, double[] weights, double[] re, double[] im) {
-        this.nodes = nodes;
-        this.weights = weights;
-        this.re = re;
-        this.im = im;
+    private Chebyshev(double a, double b, double[] re, double[] im) {
+        this.a = a;
+        this.b = b;
+        int n = re.length;
+        cr = new double[n];
+        ci = new double[n];
+        for (int k = 0; k < n; k++) {
+            double sr = 0;
+            double si = 0;
+            for (int j = 0; j < n; j++) {
+                double c = Math.cos(Math.PI * k * (j + 0.5) / n);
+                sr += re[j] * c;
+                si += im[j] * c;
+            }
+            cr[k] = 2.0 * sr / n;
+            ci[k] = 2.0 * si / n;
+        }
     }
 
     /**
@@ -29,20 +42,18 @@ final class Chebyshev {
         double[] z = new double[2];
         for (int n = firstDegree; n <= maxDegree; n *= 2) {
             double[] x = new double[n];
-            double[] w = new double[n];
             double[] gr = new double[n];
             double[] gi = new double[n];
             double scale = 0;
             for (int j = 0; j < n; j++) {
                 double angle = Math.PI * (j + 0.5) / n;
                 x[j] = 0.5 * (a + b) + 0.5 * (b - a) * Math.cos(angle);
-                w[j] = ((j & 1) == 0 ? 1 : -1) * Math.sin(angle);
                 g(h, x[j], z);
                 gr[j] = z[0];
                 gi[j] = z[1];
                 scale = Math.max(scale, Math.hypot(z[0], z[1]));
             }
-            Chebyshev c = new Chebyshev(x, w, gr, gi);
+            Chebyshev c = new Chebyshev(a, b, gr, gi);
             double worst = 0;
             double[] e = new double[2];
             for (double t : new double[] {0.013, 0.137, 0.391, 0.644, 0.877, 0.991}) {
@@ -73,22 +84,21 @@ final class Chebyshev {
 
     /** The interpolant at s, into out as (re, im). */
     void at(double s, double[] out) {
-        double nr = 0;
-        double ni = 0;
-        double d = 0;
-        for (int j = 0; j < nodes.length; j++) {
-            double diff = s - nodes[j];
-            if (diff == 0) {
-                out[0] = re[j];
-                out[1] = im[j];
-                return;
-            }
-            double c = weights[j] / diff;
-            nr += c * re[j];
-            ni += c * im[j];
-            d += c;
+        double t = (2 * s - a - b) / (b - a);
+        double twoT = 2 * t;
+        double r1 = 0;
+        double r2 = 0;
+        double i1 = 0;
+        double i2 = 0;
+        for (int k = cr.length - 1; k >= 1; k--) {
+            double r0 = cr[k] + twoT * r1 - r2;
+            double i0 = ci[k] + twoT * i1 - i2;
+            r2 = r1;
+            r1 = r0;
+            i2 = i1;
+            i1 = i0;
         }
-        out[0] = nr / d;
-        out[1] = ni / d;
+        out[0] = 0.5 * cr[0] + t * r1 - r2;
+        out[1] = 0.5 * ci[0] + t * i1 - i2;
     }
 }

@@ -23,8 +23,8 @@ final class PulseTrainSum {
     private static final double WEIGHT_FLOOR_X = Math.sqrt(Math.log(1e10) / Math.PI);
     /** Terms |m| ≤ this are always evaluated exactly. */
     private static final int EXACT_TERMS = 10;
-    private static final int FIRST_DEGREE = 24;
-    private static final int MAX_DEGREE = 384;
+    private static final int FIRST_DEGREE = 48;
+    private static final int MAX_DEGREE = 768;
     private static final double INTERPOLATION_TOLERANCE = 1e-9;
     /** Re-seed the phase recurrence exactly this often to keep rounding from building up. */
     private static final int RESEED = 256;
