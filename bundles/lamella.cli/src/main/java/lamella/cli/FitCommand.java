@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CancellationException;
+import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
@@ -68,7 +69,7 @@ public final class FitCommand implements Command {
             io.out().print(FitSummary.format(outcome));
             if (o.has("--out")) {
                 Path out = io.resolve(o.value("--out"));
-                SignalCsv.writeAtomically(out, FitResultJson.format(casePath, outcome));
+                AtomicText.write(out, FitResultJson.format(casePath, outcome));
                 io.err().println("wrote " + out);
             }
             return OK;

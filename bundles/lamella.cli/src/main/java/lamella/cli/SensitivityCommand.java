@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
@@ -71,7 +72,7 @@ public final class SensitivityCommand implements Command {
             io.err().print(ranking(t));
             if (o.has("--out")) {
                 Path out = io.resolve(o.value("--out"));
-                SignalCsv.writeAtomically(out, csv);
+                AtomicText.write(out, csv);
                 io.err().println("wrote " + out);
             } else {
                 io.out().print(csv);

@@ -1,5 +1,6 @@
 package lamella.cli;
 
+import lamella.api.AtomicText;
 import lamella.api.guard.LiveModels;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -134,7 +135,7 @@ public final class SimulateCommand implements Command {
         }
         Path out = io.resolve(outArg);
         try {
-            SignalCsv.writeAtomically(out, csv);
+            AtomicText.write(out, csv);
         } catch (IOException e) {
             io.err().println("lamella simulate: cannot write " + out + ": " + e.getMessage());
             return FAILED;

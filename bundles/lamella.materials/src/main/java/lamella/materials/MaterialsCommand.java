@@ -1,15 +1,11 @@
 package lamella.materials;
 
 import java.io.IOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
+import lamella.api.AtomicText;
 import lamella.api.InputException;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
@@ -173,7 +169,7 @@ public final class MaterialsCommand implements Command {
         }
         Path target = io.resolve(out);
         try {
-            writeAtomically(target, json);
+            AtomicText.write(target, json);
         } catch (IOException e) {
             io.err().println("lamella materials: cannot write " + target + ": " + e.getMessage());
             return FAILED;
@@ -187,22 +183,4 @@ public final class MaterialsCommand implements Command {
         return BAD_INPUT;
     }
 
-    /** Next to the target, then moved into place: a reader never sees half a file. */
-    static void writeAtomically(Path target, String content) throws IOException {
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".part");
-        try {
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-                w.write(content);
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
-    }
 }

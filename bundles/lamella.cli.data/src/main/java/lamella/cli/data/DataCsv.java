@@ -1,15 +1,8 @@
 package lamella.cli.data;
 
-import java.io.IOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
+import lamella.api.AtomicText;
 import lamella.api.data.SignalNames;
 import lamella.conditioning.ConditionedTable;
 
@@ -54,25 +47,7 @@ final class DataCsv {
     }
 
     static String number(double v) {
-        return String.format(Locale.ROOT, "%.12e", v);
+        return AtomicText.number(v);
     }
 
-    /** Writes next to the target and moves into place, so a reader never sees half a file. */
-    static void writeAtomically(Path target, String content) throws IOException {
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".part");
-        try {
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-                w.write(content);
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
-    }
 }

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import lamella.api.AtomicText;
 import lamella.api.InputException;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
@@ -116,7 +117,7 @@ public final class ImportCommand implements Command {
         } else {
             Path out = io.resolve(request.out());
             try {
-                DataCsv.writeAtomically(out, csv);
+                AtomicText.write(out, csv);
             } catch (IOException e) {
                 io.err().println("lamella import: cannot write " + out + ": " + e.getMessage());
                 return FAILED;

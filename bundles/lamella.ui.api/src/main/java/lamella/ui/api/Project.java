@@ -8,16 +8,15 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.Predicate;
+import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
 import lamella.api.InputException;
@@ -290,7 +289,7 @@ public final class Project {
         if (!newFolder.equals(folder)) {
             rebaseDataPaths(newFolder);
         }
-        writeAtomically(abs, json());
+        AtomicText.write(abs, json());
         file = abs;
         folder = newFolder;
         dirty = false;
@@ -299,7 +298,7 @@ public final class Project {
 
     /** Writes the document to a recovery file without changing where the project belongs. */
     public void writeRecovery(Path target) throws IOException {
-        writeAtomically(target, json());
+        AtomicText.write(target, json());
     }
 
     // ------------------------------------------------------------------ internals
@@ -465,22 +464,6 @@ public final class Project {
                     it.remove();
                 }
             }
-        }
-    }
-
-    private static void writeAtomically(Path target, String content) throws IOException {
-        Path dir = target.getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".part");
-        try {
-            Files.writeString(tmp, content, StandardCharsets.UTF_8);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
         }
     }
 }
