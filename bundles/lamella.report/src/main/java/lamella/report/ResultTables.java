@@ -122,7 +122,8 @@ final class ResultTables {
         h.raw("</tbody></table>\n");
     }
 
+    /** Joined with no-break spaces, so a narrow column never splits a unit such as W/(m K) across lines. */
     static String withUnit(String number, String unit) {
-        return unit.isEmpty() ? number : number + " " + unit;
+        return unit.isEmpty() ? number : number + "\u00a0" + unit.replace(' ', '\u00a0');
     }
 }

@@ -94,9 +94,10 @@ class FitReportWriterTest {
     void thePageNamesEveryParameterWithValueAndUnitAndShowsTheWarning() throws IOException {
         String html = Files.readString(page);
         assertTrue(html.contains("film.k_through_w_mk"));
-        assertTrue(html.contains("1.400 ± 0.070 W/(m K)"), "film conductivity with σ and unit");
-        assertTrue(html.contains("(1.20 ± 0.15) × 10⁸ W/(m² K)"), "boundary conductance with σ and unit");
-        assertTrue(html.contains("(6.00 ± 0.25) × 10⁻⁶ m"), "pump radius with σ and unit");
+        // values and units are joined by no-break spaces (U+00A0) so that a unit never wraps
+        assertTrue(html.contains("1.400 ± 0.070\u00a0W/(m\u00a0K)"), "film conductivity with σ and unit");
+        assertTrue(html.contains("(1.20 ± 0.15) × 10⁸\u00a0W/(m²\u00a0K)"), "boundary conductance with σ and unit");
+        assertTrue(html.contains("(6.00 ± 0.25) × 10⁻⁶\u00a0m"), "pump radius with σ and unit");
         assertTrue(html.contains("at a bound"), "the pump radius's flag");
         int warnings = html.indexOf("class=\"warnings\"");
         assertTrue(warnings > 0 && html.indexOf(SyntheticFit.WARNING) > warnings, "warning inside its box");
