@@ -1,0 +1,367 @@
+package lamella.ui.panels;
+
+import java.awt.BasicStroke;
+import java.awt.geom.Ellipse2D;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import lamella.api.CaseDocument;
+import lamella.api.ParameterRef;
+import lamella.api.fit.BudgetLine;
+import lamella.api.fit.DatasetFit;
+import lamella.api.fit.FitOutcome;
+import lamella.api.fit.FitService;
+import lamella.api.fit.FitSettings;
+import lamella.api.fit.FittedParameter;
+import lamella.api.fit.ReportWriter;
+import lamella.api.fit.SensitivityTable;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Task;
+import lamella.ui.api.Workbench;
+import lamella.ui.charts.ChartCanvas;
+import lamella.ui.charts.PlotLook;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.program.Program;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.DirectoryDialog;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.ProgressBar;
+import org.eclipse.swt.widgets.Spinner;
+import org.eclipse.swt.widgets.Table;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * The Fit panel: starts and cancels a fit of the case's fit block in the background, then shows the values ± σ,
+ * their correlations, the uncertainty budget and each dataset's residuals, and writes the HTML report.
+ */
+final class FitView implements PanelView {
+
+    private static final int BAR_STEPS = 1000;
+
+    private final Workbench workbench;
+    private final Project project;
+    private final Composite root;
+    private final Button start;
+    private final Button cancel;
+    private final Button report;
+    private final Spinner monteCarlo;
+    private final ProgressBar bar;
+    private final StatusLine status;
+    private final Table results;
+    private final Table correlation;
+    private final Table budget;
+    private final Combo residualPick;
+    private final ChartCanvas residuals;
+    private final Project.Listener listener = this::changed;
+    private Task running;
+    private FitOutcome shown;
+
+    FitView(Composite parent, Workbench workbench) {
+        this.workbench = workbench;
+        this.project = workbench.project();
+        root = new Composite(parent, SWT.NONE);
+        root.setLayout(new GridLayout(1, false));
+        Composite controls = new Composite(root, SWT.NONE);
+        controls.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        controls.setLayout(new GridLayout(7, false));
+        start = push(controls, "Start fit", this::startFit);
+        cancel = push(controls, "Cancel", this::cancelFit);
+        cancel.setEnabled(false);
+        Label mc = new Label(controls, SWT.NONE);
+        mc.setText("Monte Carlo refits (0: linearised σ only):");
+        monteCarlo = new Spinner(controls, SWT.BORDER);
+        monteCarlo.setValues(0, 0, 5000, 0, 10, 100);
+        bar = new ProgressBar(controls, SWT.SMOOTH);
+        bar.setMaximum(BAR_STEPS);
+        GridData bgd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        bgd.minimumWidth = 120;
+        bar.setLayoutData(bgd);
+        report = push(controls, "Write report…", this::writeReport);
+        report.setEnabled(false);
+        new Label(controls, SWT.NONE);
+        status = new StatusLine(root, 1);
+        SashForm sash = new SashForm(root, SWT.HORIZONTAL);
+        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        Composite tables = new Composite(sash, SWT.NONE);
+        tables.setLayout(new GridLayout(1, false));
+        heading(tables, "Fitted values (1σ; total includes every uncertain input)");
+        results = table(tables, 90);
+        heading(tables, "Correlation of the fitted values (dimensionless)");
+        correlation = table(tables, 80);
+        heading(tables, "Uncertainty budget: 1σ each source contributes to each fitted value");
+        budget = table(tables, 120);
+        Composite right = new Composite(sash, SWT.NONE);
+        right.setLayout(new GridLayout(2, false));
+        Label rl = new Label(right, SWT.NONE);
+        rl.setText("Residuals of:");
+        residualPick = new Combo(right, SWT.READ_ONLY);
+        residualPick.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        residualPick.addListener(SWT.Selection, e -> drawResiduals());
+        residuals = new ChartCanvas(right, SWT.NONE);
+        GridData cgd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
+        cgd.widthHint = 420;
+        cgd.heightHint = 300;
+        residuals.setLayoutData(cgd);
+        sash.setWeights(new int[] {55, 45});
+        project.addListener(listener);
+        project.lastFit().ifPresent(this::show);
+        if (project.lastFit().isEmpty()) {
+            status.show(workbench.fitter().isPresent() ? "Press Start fit to fit the free inputs of the case's fit"
+                    + " block; the values and their uncertainty appear here." : "No fitting service is live, so"
+                    + " no fit can run (check that bundle lamella.fit runs).", StatusLine.Tone.PLAIN);
+        }
+    }
+
+    @Override
+    public Control control() {
+        return root;
+    }
+
+    @Override
+    public void close() {
+        project.removeListener(listener);
+        cancelFit();
+    }
+
+    Table results() {
+        return results;
+    }
+
+    Button startButton() {
+        return start;
+    }
+
+    String statusText() {
+        return status.text();
+    }
+
+    private static Button push(Composite parent, String text, Runnable action) {
+        Button b = new Button(parent, SWT.PUSH);
+        b.setText(text);
+        b.addListener(SWT.Selection, e -> action.run());
+        return b;
+    }
+
+    private static void heading(Composite parent, String text) {
+        Label l = new Label(parent, SWT.NONE);
+        l.setText(text);
+    }
+
+    private static Table table(Composite parent, int height) {
+        Table t = Tables.create(parent);
+        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true);
+        gd.heightHint = height;
+        t.setLayoutData(gd);
+        return t;
+    }
+
+    private void changed(Project.Change change) {
+        if (change == Project.Change.RESULT && !root.isDisposed()) {
+            project.lastFit().ifPresent(o -> {
+                if (o != shown) {
+                    show(o);
+                }
+            });
+        }
+    }
+
+    private void startFit() {
+        FitService fitter = workbench.fitter().orElse(null);
+        if (fitter == null) {
+            status.show("No fitting service is live (check that bundle lamella.fit runs).", StatusLine.Tone.PROBLEM);
+            return;
+        }
+        if (project.problem().isPresent()) {
+            status.show("Fix the case first: " + project.problem().get().getMessage(), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        CaseDocument doc = project.current().orElseThrow();
+        FitSettings settings = FitSettings.defaults().withMonteCarlo(monteCarlo.getSelection());
+        start.setEnabled(false);
+        cancel.setEnabled(true);
+        bar.setSelection(0);
+        status.show("Fitting…", StatusLine.Tone.PLAIN);
+        long t0 = System.nanoTime();
+        running = workbench.background("Fit", p -> fitter.fit(doc, settings,
+                new ProgressRelay(p, root.getDisplay(), this::progress)), outcome -> {
+                    running = null;
+                    if (root.isDisposed()) {
+                        return;
+                    }
+                    start.setEnabled(true);
+                    cancel.setEnabled(false);
+                    bar.setSelection(BAR_STEPS);
+                    project.setLastFit(outcome);
+                    show(outcome);
+                    status.show(summary(outcome, (System.nanoTime() - t0) / 1e9), outcome.warnings().isEmpty()
+                            && outcome.converged() ? StatusLine.Tone.PLAIN : StatusLine.Tone.CAUTION);
+                });
+        // A failed fit reaches the Messages panel; the buttons come back when the task is over.
+        watch(running);
+    }
+
+    private void watch(Task task) {
+        root.getDisplay().timerExec(200, () -> {
+            if (root.isDisposed() || task != running) {
+                return;
+            }
+            if (task.done()) {
+                running = null;
+                start.setEnabled(true);
+                cancel.setEnabled(false);
+                status.show("The fit stopped without a result; the Messages panel says why.",
+                        StatusLine.Tone.PROBLEM);
+                return;
+            }
+            watch(task);
+        });
+    }
+
+    private void progress(String stage, double fraction) {
+        if (root.isDisposed() || running == null) {
+            return;
+        }
+        if (!Double.isNaN(fraction)) {
+            bar.setSelection((int) Math.round(fraction * BAR_STEPS));
+        }
+        status.show(stage, StatusLine.Tone.PLAIN);
+    }
+
+    private void cancelFit() {
+        if (running != null) {
+            running.cancel();
+            running = null;
+            if (!root.isDisposed()) {
+                start.setEnabled(true);
+                cancel.setEnabled(false);
+                bar.setSelection(0);
+                status.show("Fit cancelled.", StatusLine.Tone.CAUTION);
+            }
+        }
+    }
+
+    private static String summary(FitOutcome o, double seconds) {
+        String s = (o.converged() ? "Converged" : "Did not converge") + " after " + o.evaluations()
+                + " model evaluations in " + String.format(java.util.Locale.ROOT, "%.1f", seconds)
+                + " s; reduced χ² " + NumberText.format(o.reducedChiSquare()) + ".";
+        return o.warnings().isEmpty() ? s : s + " " + String.join(" ", o.warnings());
+    }
+
+    private void show(FitOutcome o) {
+        shown = o;
+        List<FittedParameter> ps = o.parameters();
+        List<String[]> rows = new ArrayList<>();
+        for (FittedParameter p : ps) {
+            DisplayUnit u = DisplayUnit.of(p.ref());
+            String note = p.atBound() ? "ended on a bound: σ not meaningful"
+                    : !p.identifiable() ? "not determined by the data" : "";
+            rows.add(new String[] {Words.parameter(p.ref()), NumberText.format(u.shown(p.value())),
+                    "± " + NumberText.format(u.shown(p.sigma())), NumberText.format(u.shown(p.sigmaNoise())),
+                    u.unit(), note});
+        }
+        Tables.fill(results, new String[] {"parameter", "value", "± σ total", "σ noise", "unit", "note"}, rows);
+        List<String[]> corr = new ArrayList<>();
+        String[] ch = new String[ps.size() + 1];
+        ch[0] = "parameter";
+        for (int i = 0; i < ps.size(); i++) {
+            ch[i + 1] = "(" + (i + 1) + ")";
+            String[] r = new String[ps.size() + 1];
+            r[0] = "(" + (i + 1) + ") " + Words.parameter(ps.get(i).ref());
+            for (int j = 0; j < ps.size(); j++) {
+                r[j + 1] = String.format(java.util.Locale.ROOT, "%+.3f", o.correlation()[i][j]).replace('-', '−');
+            }
+            corr.add(r);
+        }
+        Tables.fill(correlation, ch, corr);
+        String[] bh = new String[ps.size() + 2];
+        bh[0] = "source";
+        bh[1] = "input σ";
+        for (int i = 0; i < ps.size(); i++) {
+            bh[i + 2] = "→ (" + (i + 1) + ") (" + DisplayUnit.of(ps.get(i).ref()).unit() + ")";
+        }
+        List<String[]> brows = new ArrayList<>();
+        for (BudgetLine b : o.budget()) {
+            String[] r = new String[ps.size() + 2];
+            r[0] = b.source() == null ? b.label() : Words.parameter(b.source());
+            r[1] = b.source() == null ? "—" : inputSigma(b.source(), b.inputSigma());
+            for (int i = 0; i < ps.size(); i++) {
+                r[i + 2] = NumberText.format(DisplayUnit.of(ps.get(i).ref()).shown(b.contributions()[i]));
+            }
+            brows.add(r);
+        }
+        Tables.fill(budget, bh, brows);
+        residualPick.setItems(o.datasets().stream().map(d -> "dataset " + (d.index() + 1) + ": "
+                + Path.of(d.source()).getFileName() + " (" + d.signal() + ")").toArray(String[]::new));
+        residualPick.select(0);
+        drawResiduals();
+        report.setEnabled(workbench.reports().isPresent());
+        root.layout(true, true);
+    }
+
+    private static String inputSigma(ParameterRef ref, double sigma) {
+        DisplayUnit u = DisplayUnit.of(ref);
+        return NumberText.format(u.shown(sigma)) + " " + u.unit();
+    }
+
+    private void drawResiduals() {
+        int i = residualPick.getSelectionIndex();
+        if (shown == null || i < 0 || i >= shown.datasets().size()) {
+            residuals.setChart(null);
+            return;
+        }
+        DatasetFit d = shown.datasets().get(i);
+        XYSeries s = new XYSeries("(data − model)/σ, reduced χ² " + NumberText.format(d.reducedChiSquare()),
+                false, true);
+        for (int k = 0; k < d.x().length; k++) {
+            s.add(d.x()[k], (d.data()[k] - d.model()[k]) / d.sigma()[k], false);
+        }
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, true);
+        r.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
+        r.setSeriesPaint(0, PlotLook.MODEL);
+        r.setSeriesStroke(0, new BasicStroke(1f));
+        XYPlot plot = new XYPlot(new XYSeriesCollection(s), PlotLook.xAxis(Words.x(d.xColumn(), d.technique()),
+                SignalCurve.logarithmic(d.xColumn()), d.x()), PlotLook.linear("normalised residual (dimensionless)"), r);
+        plot.addRangeMarker(new ValueMarker(0, PlotLook.REFERENCE, new BasicStroke(1f)));
+        residuals.setChart(PlotLook.chart(null, plot, true));
+    }
+
+    private void writeReport() {
+        ReportWriter writer = workbench.reports().orElse(null);
+        FitService fitter = workbench.fitter().orElse(null);
+        if (writer == null || fitter == null || shown == null || project.current().isEmpty()) {
+            status.show("A report needs a finished fit and a live report service.", StatusLine.Tone.PROBLEM);
+            return;
+        }
+        DirectoryDialog d = new DirectoryDialog(root.getShell());
+        d.setText("Folder for the report");
+        d.setMessage("The report's page, plots and tables are written into this folder.");
+        String folder = d.open();
+        if (folder == null) {
+            return;
+        }
+        CaseDocument doc = project.current().get();
+        FitOutcome outcome = shown;
+        status.show("Writing the report…", StatusLine.Tone.PLAIN);
+        workbench.background("Report", p -> {
+            List<SensitivityTable> sens = new ArrayList<>();
+            for (int i = 0; i < outcome.datasets().size(); i++) {
+                sens.add(fitter.sensitivity(doc, outcome.datasets().get(i).index(), null));
+            }
+            return writer.write(doc, outcome, sens, Path.of(folder));
+        }, page -> {
+            status.show("Report written: " + page, StatusLine.Tone.PLAIN);
+            Program.launch(page.toString());
+        });
+    }
+}

@@ -1,0 +1,134 @@
+package lamella.ui.panels;
+
+import lamella.api.CaseDocument;
+import lamella.api.InputException;
+import lamella.api.ModelEvaluationException;
+import lamella.api.fit.FitService;
+import lamella.api.fit.SensitivityTable;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Workbench;
+import lamella.ui.charts.ChartCanvas;
+import lamella.ui.charts.PlotLook;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * The Sensitivity panel: the sensitivity of the chosen curve's signal to every numeric input of the case, over the
+ * dataset's x values (or the case's own), recomputed in the background when the case changes.
+ */
+final class SensitivityView implements PanelView {
+
+    private final Workbench workbench;
+    private final Project project;
+    private final Composite root;
+    private final CurvePicker picker;
+    private final StatusLine status;
+    private final ChartCanvas canvas;
+    private final LatestOnly<Outcome<SensitivityTable>> work;
+    private final Project.Listener listener = this::changed;
+    private SensitivityTable shown;
+
+    SensitivityView(Composite parent, Workbench workbench) {
+        this.workbench = workbench;
+        this.project = workbench.project();
+        this.work = new LatestOnly<>(workbench, "Sensitivities");
+        root = new Composite(parent, SWT.NONE);
+        root.setLayout(new GridLayout(2, false));
+        picker = new CurvePicker(root, this::recompute);
+        status = new StatusLine(root, 2);
+        canvas = new ChartCanvas(root, SWT.NONE);
+        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
+        gd.widthHint = 640;
+        gd.heightHint = 420;
+        canvas.setLayoutData(gd);
+        project.addListener(listener);
+        picker.refresh(project);
+        recompute();
+    }
+
+    @Override
+    public Control control() {
+        return root;
+    }
+
+    @Override
+    public void close() {
+        project.removeListener(listener);
+        work.cancel();
+    }
+
+    SensitivityTable shown() {
+        return shown;
+    }
+
+    private void changed(Project.Change change) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (change == Project.Change.FIT_SETUP || change == Project.Change.FILE) {
+            picker.refresh(project);
+        }
+        if (change == Project.Change.INPUTS || change == Project.Change.FIT_SETUP) {
+            recompute();
+        }
+    }
+
+    private void recompute() {
+        FitService fitter = workbench.fitter().orElse(null);
+        CaseDocument doc = project.current().orElse(null);
+        if (fitter == null || doc == null) {
+            status.show(fitter == null ? "No fitting service is live, so no sensitivities can be computed."
+                    : "The case has a problem: " + project.problem().map(Exception::getMessage).orElse(""),
+                    StatusLine.Tone.PROBLEM);
+            return;
+        }
+        int dataset = picker.selected();
+        status.show("Computing sensitivities…", StatusLine.Tone.PLAIN);
+        work.submit(p -> {
+            try {
+                return Outcome.of(fitter.sensitivity(doc, dataset, null));
+            } catch (InputException e) {
+                return Outcome.failed(e.getMessage());
+            } catch (ModelEvaluationException e) {
+                return Outcome.failed("the model cannot be evaluated: " + e.getMessage());
+            }
+        }, this::show);
+    }
+
+    private void show(Outcome<SensitivityTable> o) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (!o.ok()) {
+            status.show(o.problem(), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        SensitivityTable t = o.value();
+        shown = t;
+        XYSeriesCollection set = new XYSeriesCollection();
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+        for (int p = 0; p < t.parameters().size(); p++) {
+            XYSeries s = new XYSeries(Words.parameter(t.parameters().get(p)), false, true);
+            for (int i = 0; i < t.x().length; i++) {
+                s.add(t.x()[i], t.values()[p][i], false);
+            }
+            set.addSeries(s);
+            r.setSeriesPaint(p, PlotLook.seriesPaint(p));
+            r.setSeriesStroke(p, PlotLook.seriesStroke(p));
+        }
+        String technique = project.model().map(m -> m.measurement().get("type")).map(String::valueOf).orElse("");
+        XYPlot plot = new XYPlot(set, PlotLook.xAxis(Words.x(t.xColumn(), technique),
+                SignalCurve.logarithmic(t.xColumn()), t.x()), PlotLook.linear(Words.sensitivity(t.phaseLike())), r);
+        canvas.setChart(PlotLook.chart("Sensitivity of " + Words.signal(t.signal()), plot, true));
+        status.show(t.parameters().size() + " inputs over " + t.x().length + " points of x; larger |S| means the"
+                + " signal tells more about the input.", StatusLine.Tone.PLAIN);
+    }
+}

@@ -1,0 +1,302 @@
+package lamella.ui.panels;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Function;
+import lamella.api.CaseModel;
+import lamella.api.HeatingGeometry;
+import lamella.api.ParameterRef;
+import lamella.api.ParameterSpec;
+import lamella.api.Technique;
+import lamella.api.Units;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Workbench;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Group;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Text;
+
+/**
+ * The Set-up panel: the technique and the heating geometry with their case-file parameters (SI values, units from
+ * the keys), and an estimate of the steady temperature rise from an absorbed power, which is a panel setting and
+ * not part of the case.
+ */
+final class SetupView implements PanelView {
+
+    private static final String CAUTION = "Lasers of Class 3B/4 and driven heaters: follow your facility's safety"
+            + " procedures (eye protection for every wavelength, interlocks, current limits); this estimate does not"
+            + " replace them.";
+
+    private final Workbench workbench;
+    private final Project project;
+    private final Composite root;
+    private final BlockEditor technique;
+    private final BlockEditor geometry;
+    private final Text power;
+    private final StatusLine rise;
+    private final LatestOnly<Outcome<Double>> work;
+    private final Project.Listener listener = c -> refresh();
+
+    SetupView(Composite parent, Workbench workbench) {
+        this.workbench = workbench;
+        this.project = workbench.project();
+        this.work = new LatestOnly<>(workbench, "Steady temperature rise");
+        root = new Composite(parent, SWT.NONE);
+        root.setLayout(new GridLayout(1, false));
+        technique = new BlockEditor(root, "Technique", "measurement",
+                workbench.catalog().techniques().stream().map(Technique::type).toList(),
+                type -> workbench.catalog().technique(type).map(Technique::parameters).orElse(List.of()),
+                type -> workbench.catalog().technique(type).map(Technique::summary).orElse(""));
+        geometry = new BlockEditor(root, "Heating geometry", "geometry",
+                workbench.catalog().geometries().stream().map(HeatingGeometry::type).toList(),
+                type -> workbench.catalog().geometry(type).map(HeatingGeometry::parameters).orElse(List.of()),
+                type -> workbench.catalog().geometry(type).map(HeatingGeometry::summary).orElse(""));
+        Group heat = new Group(root, SWT.NONE);
+        heat.setText("Steady heating");
+        heat.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        heat.setLayout(new GridLayout(2, false));
+        Label pl = new Label(heat, SWT.NONE);
+        pl.setText("absorbed power (mW):");
+        power = new Text(heat, SWT.BORDER | SWT.RIGHT);
+        GridData pgd = new GridData(SWT.LEFT, SWT.CENTER, false, false);
+        pgd.widthHint = 90;
+        power.setLayoutData(pgd);
+        power.setText("10");
+        power.addListener(SWT.DefaultSelection, e -> estimate());
+        power.addListener(SWT.FocusOut, e -> estimate());
+        rise = new StatusLine(heat, 2);
+        Label caution = new Label(heat, SWT.WRAP);
+        GridData cgd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        cgd.widthHint = 300;
+        caution.setLayoutData(cgd);
+        caution.setText(CAUTION);
+        project.addListener(listener);
+        refresh();
+    }
+
+    @Override
+    public Control control() {
+        return root;
+    }
+
+    @Override
+    public void close() {
+        project.removeListener(listener);
+        work.cancel();
+    }
+
+    void setPower(String milliwatts) {
+        power.setText(milliwatts);
+        estimate();
+    }
+
+    String riseText() {
+        return rise.text();
+    }
+
+    private void refresh() {
+        if (root.isDisposed()) {
+            return;
+        }
+        ObjectNode tree = project.tree();
+        technique.show(tree.path("measurement"));
+        geometry.show(tree.path("geometry"));
+        root.layout(true, true);
+        estimate();
+    }
+
+    private void estimate() {
+        Double mw = NumberText.parse(power.getText());
+        if (mw == null || !(mw > 0)) {
+            rise.show("absorbed power: " + (mw == null ? NumberText.notANumber(power.getText())
+                    : "a power is positive"), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        CaseModel model = project.model().orElse(null);
+        if (model == null) {
+            rise.show("The case has a problem: " + project.problem().map(Exception::getMessage).orElse(""),
+                    StatusLine.Tone.PROBLEM);
+            return;
+        }
+        double watts = mw * 1e-3;
+        work.submit(p -> SteadyRise.perWatt(model, workbench.catalog()), o -> {
+            if (root.isDisposed()) {
+                return;
+            }
+            if (!o.ok()) {
+                rise.show(o.problem(), StatusLine.Tone.CAUTION);
+                return;
+            }
+            double k = o.value() * watts;
+            String text = "Predicted steady temperature rise: " + NumberText.format(k) + " K ("
+                    + NumberText.format(o.value()) + " K/W at 0 Hz × " + NumberText.format(mw) + " mW).";
+            if (k > SteadyRise.WARNING_K) {
+                rise.show(text + " That is large: properties at this temperature may differ from those in the"
+                        + " case; lower the power or model the heated sample.", StatusLine.Tone.PROBLEM);
+            } else if (k > SteadyRise.CAUTION_K) {
+                rise.show(text + " Consider whether the properties still hold at this temperature.",
+                        StatusLine.Tone.CAUTION);
+            } else {
+                rise.show(text, StatusLine.Tone.PLAIN);
+            }
+        });
+    }
+
+    /** A chooser of the service type and a field per parameter of one case block. */
+    private final class BlockEditor {
+
+        private final String block;
+        private final Function<String, List<ParameterSpec>> specs;
+        private final Function<String, String> summary;
+        private final Combo type;
+        private final Label about;
+        private final Composite fields;
+        private final StatusLine problem;
+        private final List<Text> texts = new ArrayList<>();
+        private String shownType;
+
+        BlockEditor(Composite parent, String title, String block, List<String> types,
+                    Function<String, List<ParameterSpec>> specs, Function<String, String> summary) {
+            this.block = block;
+            this.specs = specs;
+            this.summary = summary;
+            Group g = new Group(parent, SWT.NONE);
+            g.setText(title);
+            g.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+            g.setLayout(new GridLayout(2, false));
+            Label tl = new Label(g, SWT.NONE);
+            tl.setText("type:");
+            type = new Combo(g, SWT.READ_ONLY);
+            type.setItems(types.stream().sorted().toArray(String[]::new));
+            type.addListener(SWT.Selection, e -> changeType(type.getText()));
+            about = new Label(g, SWT.WRAP);
+            GridData agd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+            agd.widthHint = 300;
+            about.setLayoutData(agd);
+            fields = new Composite(g, SWT.NONE);
+            fields.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1));
+            GridLayout fl = new GridLayout(2, false);
+            fl.marginWidth = 0;
+            fields.setLayout(fl);
+            problem = new StatusLine(g, 2);
+        }
+
+        void show(JsonNode values) {
+            String t = values.path("type").asText("");
+            if (!t.equals(shownType)) {
+                build(t);
+            }
+            List<ParameterSpec> ps = specs.apply(t);
+            for (int i = 0; i < ps.size(); i++) {
+                Text text = texts.get(i);
+                if (!text.isFocusControl()) {
+                    text.setText(display(values.path(ps.get(i).key())));
+                }
+            }
+        }
+
+        private void build(String t) {
+            shownType = t;
+            type.select(List.of(type.getItems()).indexOf(t));
+            about.setText(summary.apply(t));
+            for (Control c : fields.getChildren()) {
+                c.dispose();
+            }
+            texts.clear();
+            for (ParameterSpec s : specs.apply(t)) {
+                Label l = new Label(fields, SWT.NONE);
+                String unit = Units.ofKey(s.key());
+                l.setText(Words.key(s.key()) + (unit.isEmpty() ? "" : " (" + unit + ")")
+                        + (s.required() ? "" : ", optional") + ":");
+                l.setToolTipText(s.description() + " — case-file key " + s.key());
+                Text text = new Text(fields, SWT.BORDER);
+                GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+                gd.widthHint = 160;
+                text.setLayoutData(gd);
+                text.setToolTipText(s.description());
+                text.setMessage(s.required() ? s.constraint().wording()
+                        : Double.isNaN(s.defaultValue()) ? "none" : "default " + NumberText.format(s.defaultValue()));
+                text.addListener(SWT.DefaultSelection, e -> commit(s, text.getText()));
+                text.addListener(SWT.FocusOut, e -> commit(s, text.getText()));
+                texts.add(text);
+            }
+        }
+
+        private String display(JsonNode v) {
+            if (v.isNumber()) {
+                return NumberText.format(v.asDouble());
+            }
+            if (v.isArray()) {
+                List<String> parts = new ArrayList<>();
+                v.forEach(n -> parts.add(NumberText.format(n.asDouble())));
+                return String.join(", ", parts);
+            }
+            return "";
+        }
+
+        private void commit(ParameterSpec s, String text) {
+            ObjectNode b = (ObjectNode) project.tree().path(block);
+            if (text.trim().equals(display(b.path(s.key())))) {
+                return;
+            }
+            String label = Words.key(s.key()) + " (" + Units.ofKey(s.key()) + ")";
+            if (text.isBlank()) {
+                if (s.required()) {
+                    problem.show(label + " is required: " + s.constraint().wording(), StatusLine.Tone.PROBLEM);
+                    return;
+                }
+                b.remove(s.key());
+                problem.show("", StatusLine.Tone.PLAIN);
+                project.setBlock(block, b);
+                return;
+            }
+            if (s.kind() == ParameterSpec.Kind.NUMBER_LIST) {
+                ArrayNode list = b.putArray(s.key());
+                for (String part : text.split("[,;\\s]+")) {
+                    Double v = NumberText.parse(part);
+                    if (v == null || !s.constraint().admits(v)) {
+                        problem.show(label + ": " + (v == null ? NumberText.notANumber(part)
+                                : NumberText.format(v) + " is not " + s.constraint().wording())
+                                + "; separate values with commas", StatusLine.Tone.PROBLEM);
+                        return;
+                    }
+                    list.add(v);
+                }
+                problem.show("", StatusLine.Tone.PLAIN);
+                project.setBlock(block, b);
+                return;
+            }
+            Double v = NumberText.parse(text);
+            if (v == null || !s.constraint().admits(v)) {
+                problem.show(label + ": " + (v == null ? NumberText.notANumber(text)
+                        : NumberText.format(v) + " is not " + s.constraint().wording()), StatusLine.Tone.PROBLEM);
+                return;
+            }
+            problem.show("", StatusLine.Tone.PLAIN);
+            project.set(block.equals("geometry") ? ParameterRef.geometry(s.key())
+                    : ParameterRef.measurement(s.key()), v);
+        }
+
+        /** Keeps the values the new type also reads; drops the rest, which it would refuse. */
+        private void changeType(String t) {
+            ObjectNode old = (ObjectNode) project.tree().path(block);
+            ObjectNode b = old.objectNode();
+            b.put("type", t);
+            for (ParameterSpec s : specs.apply(t)) {
+                if (old.has(s.key())) {
+                    b.set(s.key(), old.get(s.key()));
+                }
+            }
+            project.setBlock(block, b);
+        }
+    }
+}

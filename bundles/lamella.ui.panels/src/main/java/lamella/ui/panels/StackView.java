@@ -1,0 +1,396 @@
+package lamella.ui.panels;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import lamella.api.CaseModel;
+import lamella.api.Layer;
+import lamella.api.ParameterRef;
+import lamella.api.material.Material;
+import lamella.ui.api.PanelView;
+import lamella.ui.api.Project;
+import lamella.ui.api.Workbench;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.TableEditor;
+import org.eclipse.swt.graphics.Point;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
+import org.eclipse.swt.widgets.Text;
+
+/**
+ * The Stack panel: one row per layer from the heated surface down; a click on a value edits it in place, and the
+ * strip below sets the selected value's role in a fit (fixed, free, or uncertain by a relative σ).
+ */
+final class StackView implements PanelView {
+
+    private static final int NAME = 0;
+    private static final int MATERIAL = 1;
+    private static final int FIRST_VALUE = 2;
+    private static final String EXPLICIT = "(explicit values)";
+    private static final String[] ROLES = {"fixed", "free", "uncertain ± σ"};
+
+    private final Workbench workbench;
+    private final Project project;
+    private final Composite root;
+    private final Table table;
+    private final TableEditor editor;
+    private final StatusLine status;
+    private final Label selectedLabel;
+    private final Combo roleCombo;
+    private final Text sigmaText;
+    private final CrossSection drawing;
+    private final Project.Listener listener = c -> refresh();
+    private List<String> names = List.of();
+    private ParameterRef selected;
+    private boolean projectProblemShown;
+
+    StackView(Composite parent, Workbench workbench) {
+        this.workbench = workbench;
+        this.project = workbench.project();
+        root = new Composite(parent, SWT.NONE);
+        root.setLayout(new GridLayout(1, false));
+        SashForm sash = new SashForm(root, SWT.HORIZONTAL);
+        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        Composite left = new Composite(sash, SWT.NONE);
+        left.setLayout(new GridLayout(2, false));
+        table = new Table(left, SWT.BORDER | SWT.FULL_SELECTION | SWT.SINGLE);
+        table.setHeaderVisible(true);
+        table.setLinesVisible(true);
+        GridData tgd = new GridData(SWT.FILL, SWT.FILL, true, true);
+        tgd.heightHint = 150;
+        table.setLayoutData(tgd);
+        column("layer", 90);
+        column("material", 120);
+        for (LayerColumn c : LayerColumn.VALUES) {
+            column(c.heading(), 110);
+        }
+        editor = new TableEditor(table);
+        editor.grabHorizontal = true;
+        table.addListener(SWT.MouseDown, e -> clicked(new Point(e.x, e.y)));
+        Composite buttons = new Composite(left, SWT.NONE);
+        buttons.setLayout(new GridLayout(1, true));
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, false, false));
+        button(buttons, "Add layer", this::addLayer);
+        button(buttons, "Remove layer", this::removeLayer);
+        button(buttons, "Move up", () -> move(-1));
+        button(buttons, "Move down", () -> move(1));
+        Composite strip = new Composite(left, SWT.NONE);
+        strip.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
+        strip.setLayout(new GridLayout(5, false));
+        selectedLabel = new Label(strip, SWT.NONE);
+        selectedLabel.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        roleCombo = new Combo(strip, SWT.READ_ONLY);
+        roleCombo.setItems(ROLES);
+        Label sl = new Label(strip, SWT.NONE);
+        sl.setText("σ (% of value):");
+        sigmaText = new Text(strip, SWT.BORDER | SWT.RIGHT);
+        GridData sgd = new GridData(SWT.LEFT, SWT.CENTER, false, false);
+        sgd.widthHint = 60;
+        sigmaText.setLayoutData(sgd);
+        button(strip, "Set role", this::applyRole);
+        status = new StatusLine(left, 2);
+        drawing = new CrossSection(sash);
+        sash.setWeights(new int[] {72, 28});
+        select(null);
+        project.addListener(listener);
+        refresh();
+    }
+
+    @Override
+    public Control control() {
+        return root;
+    }
+
+    @Override
+    public void close() {
+        project.removeListener(listener);
+    }
+
+    Table table() {
+        return table;
+    }
+
+    String statusText() {
+        return status.text();
+    }
+
+    private void column(String heading, int width) {
+        TableColumn c = new TableColumn(table, SWT.LEFT);
+        c.setText(heading);
+        c.pack();
+        c.setWidth(Math.max(c.getWidth() + 8, width));
+    }
+
+    private static Button button(Composite parent, String text, Runnable action) {
+        Button b = new Button(parent, SWT.PUSH);
+        b.setText(text);
+        b.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, false, false));
+        b.addListener(SWT.Selection, e -> action.run());
+        return b;
+    }
+
+    private void refresh() {
+        if (root.isDisposed()) {
+            return;
+        }
+        JsonNode layers = project.tree().path("stack").path("layers");
+        List<String> now = new ArrayList<>();
+        layers.forEach(l -> now.add(l.path("name").asText()));
+        names = now;
+        Optional<CaseModel> model = project.model();
+        int keep = table.getSelectionIndex();
+        table.removeAll();
+        for (int i = 0; i < names.size(); i++) {
+            JsonNode node = layers.get(i);
+            TableItem item = new TableItem(table, SWT.NONE);
+            item.setText(NAME, names.get(i));
+            item.setText(MATERIAL, node.path("material").asText(EXPLICIT));
+            String name = names.get(i);
+            Optional<Layer> resolved = model.flatMap(m -> m.stack().layer(name));
+            for (int c = 0; c < LayerColumn.VALUES.size(); c++) {
+                item.setText(FIRST_VALUE + c, cell(names.get(i), LayerColumn.VALUES.get(c), resolved, node));
+            }
+        }
+        if (keep >= 0 && keep < names.size()) {
+            table.setSelection(keep);
+        }
+        model.ifPresent(m -> drawing.show(m.stack()));
+        if (project.problem().isPresent()) {
+            status.show("The case as edited has a problem (the drawing shows the last valid stack): "
+                    + project.problem().get().getMessage(), StatusLine.Tone.PROBLEM);
+            projectProblemShown = true;
+        } else if (projectProblemShown) {
+            status.show("", StatusLine.Tone.PLAIN);
+            projectProblemShown = false;
+        }
+    }
+
+    private String cell(String layer, LayerColumn c, Optional<Layer> resolved, JsonNode node) {
+        ParameterRef ref = ParameterRef.layer(layer, c.key());
+        double v = resolved.map(l -> value(l, c.key())).orElse(node.path(c.key()).asDouble(Double.NaN));
+        String text;
+        if (Double.isInfinite(v)) {
+            text = c.key().equals("thickness_m") ? "semi-infinite" : "perfect contact";
+        } else {
+            text = NumberText.format(c.unit().shown(v));
+        }
+        if (!node.has(c.key()) && node.has("material") && Double.isFinite(v)) {
+            text += " (material)";
+        }
+        return text + roleMark(ref);
+    }
+
+    private String roleMark(ParameterRef ref) {
+        return switch (project.role(ref)) {
+            case FIXED -> "";
+            case FREE -> "   ▸ free";
+            case UNCERTAIN -> {
+                double s = project.relativeSigma(ref);
+                yield Double.isNaN(s) ? "   ± σ" : "   ± " + NumberText.format(100 * s) + " %";
+            }
+        };
+    }
+
+    private static double value(Layer l, String key) {
+        return switch (key) {
+            case "thickness_m" -> l.thickness();
+            case "k_through_w_mk" -> l.kThrough();
+            case "k_in_plane_w_mk" -> l.kInPlaneX();
+            case "heat_capacity_j_m3k" -> l.heatCapacity();
+            default -> l.conductanceBelow();
+        };
+    }
+
+    private void clicked(Point p) {
+        TableItem item = table.getItem(p);
+        if (item == null) {
+            return;
+        }
+        int row = table.indexOf(item);
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            if (item.getBounds(c).contains(p)) {
+                if (c == MATERIAL) {
+                    editMaterial(item, row);
+                } else if (c >= FIRST_VALUE) {
+                    select(ParameterRef.layer(names.get(row), LayerColumn.VALUES.get(c - FIRST_VALUE).key()));
+                    editValue(item, row, c);
+                }
+                return;
+            }
+        }
+    }
+
+    private void editValue(TableItem item, int row, int column) {
+        disposeEditor();
+        Text t = new Text(table, SWT.NONE);
+        String shown = item.getText(column);
+        int cut = shown.indexOf(' ');
+        t.setText(cut > 0 ? shown.substring(0, cut) : shown);
+        t.selectAll();
+        t.addListener(SWT.DefaultSelection, e -> {
+            if (commit(row, column, t.getText())) {
+                disposeEditor();
+            }
+        });
+        t.addListener(SWT.Traverse, e -> {
+            if (e.detail == SWT.TRAVERSE_ESCAPE) {
+                disposeEditor();
+            }
+        });
+        t.addListener(SWT.FocusOut, e -> {
+            if (!t.isDisposed() && commit(row, column, t.getText())) {
+                disposeEditor();
+            }
+        });
+        editor.setEditor(t, item, column);
+        t.setFocus();
+    }
+
+    /**
+     * Sets one value from the text typed in its cell, in the column's display unit; a text that is not a positive
+     * number is refused with a message, never clamped. True when the value was taken.
+     */
+    boolean commit(int row, int column, String text) {
+        LayerColumn c = LayerColumn.VALUES.get(column - FIRST_VALUE);
+        String layer = names.get(row);
+        String shownNow = table.getItem(row).getText(column);
+        if (text.trim().equals(shownNow.split(" ")[0])) {
+            return true;
+        }
+        Double v = NumberText.parse(text);
+        if (v == null) {
+            status.show(layer + " · " + c.heading() + ": " + NumberText.notANumber(text), StatusLine.Tone.PROBLEM);
+            return false;
+        }
+        if (!(v > 0)) {
+            status.show(layer + " · " + c.heading() + ": " + NumberText.format(v) + " is not allowed; a layer's"
+                    + " values are positive", StatusLine.Tone.PROBLEM);
+            return false;
+        }
+        status.show("", StatusLine.Tone.PLAIN);
+        project.set(ParameterRef.layer(layer, c.key()), c.unit().si(v));
+        return true;
+    }
+
+    private void editMaterial(TableItem item, int row) {
+        disposeEditor();
+        Combo combo = new Combo(table, SWT.READ_ONLY);
+        List<String> ids = new ArrayList<>();
+        ids.add(EXPLICIT);
+        workbench.materials().ifPresent(m -> m.effective().stream().map(Material::id).forEach(ids::add));
+        combo.setItems(ids.toArray(String[]::new));
+        combo.select(Math.max(0, ids.indexOf(item.getText(MATERIAL))));
+        combo.addListener(SWT.Selection, e -> {
+            String layer = names.get(row);
+            String choice = combo.getText();
+            disposeEditor();
+            if (choice.equals(EXPLICIT)) {
+                project.clearLayerKey(layer, "material");
+            } else {
+                project.setLayerText(layer, "material", choice);
+            }
+        });
+        combo.addListener(SWT.FocusOut, e -> disposeEditor());
+        editor.setEditor(combo, item, MATERIAL);
+        combo.setFocus();
+    }
+
+    private void disposeEditor() {
+        Control old = editor.getEditor();
+        if (old != null && !old.isDisposed()) {
+            old.dispose();
+        }
+    }
+
+    private void select(ParameterRef ref) {
+        selected = ref;
+        boolean any = ref != null;
+        roleCombo.setEnabled(any);
+        sigmaText.setEnabled(any);
+        if (!any) {
+            selectedLabel.setText("Click a value to edit it and to set its role in a fit.");
+            return;
+        }
+        selectedLabel.setText("Role in a fit of " + Words.parameter(ref) + ":");
+        Project.Role role = project.role(ref);
+        roleCombo.select(role.ordinal());
+        double s = project.relativeSigma(ref);
+        sigmaText.setText(Double.isNaN(s) ? "" : NumberText.format(100 * s));
+        selectedLabel.getParent().layout(true);
+    }
+
+    private void applyRole() {
+        if (selected == null) {
+            return;
+        }
+        switch (roleCombo.getSelectionIndex()) {
+            case 1 -> project.setFree(selected, Double.NaN, Double.NaN);
+            case 2 -> {
+                Double pct = NumberText.parse(sigmaText.getText());
+                if (pct == null || !(pct > 0)) {
+                    status.show("σ of " + Words.parameter(selected) + ": "
+                            + (pct == null ? NumberText.notANumber(sigmaText.getText()) : "a σ is positive")
+                            + "; give it in % of the value, such as 3", StatusLine.Tone.PROBLEM);
+                    return;
+                }
+                project.setUncertain(selected, pct / 100);
+            }
+            default -> project.setFixed(selected);
+        }
+        status.show("", StatusLine.Tone.PLAIN);
+    }
+
+    /** A new layer above the bottom one, with placeholder values shown in the table for the user to replace. */
+    private void addLayer() {
+        int n = names.size() + 1;
+        String name = "layer " + n;
+        while (names.contains(name)) {
+            name = "layer " + (++n);
+        }
+        ObjectNode l = JsonNodeFactory.instance.objectNode();
+        l.put("name", name);
+        l.put("thickness_m", 1e-7);
+        l.put("k_through_w_mk", 1.0);
+        l.put("heat_capacity_j_m3k", 2e6);
+        int at = Math.max(0, names.size() - 1);
+        project.addLayer(at, l);
+        table.setSelection(at);
+        status.show("Added '" + name + "' with placeholder values (100 nm, 1 W/(m K), 2 MJ/(m³ K)); replace them"
+                + " with the sample's.", StatusLine.Tone.CAUTION);
+    }
+
+    private void removeLayer() {
+        int i = table.getSelectionIndex();
+        if (i < 0) {
+            status.show("Select the layer to remove first.", StatusLine.Tone.CAUTION);
+            return;
+        }
+        if (names.size() == 1) {
+            status.show("A stack needs at least one layer.", StatusLine.Tone.PROBLEM);
+            return;
+        }
+        project.removeLayer(i);
+    }
+
+    private void move(int by) {
+        int i = table.getSelectionIndex();
+        int to = i + by;
+        if (i < 0 || to < 0 || to >= names.size()) {
+            return;
+        }
+        project.moveLayer(i, to);
+        table.setSelection(to);
+    }
+}

@@ -1,0 +1,67 @@
+package lamella.ui.panels;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
+import lamella.api.ParameterRef;
+import lamella.ui.api.Project;
+import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.widgets.Shell;
+import org.junit.jupiter.api.Test;
+
+class StackPanelTest {
+
+    private static final int K_THROUGH = 3;
+
+    @Test
+    void typingAConductivityInTheStackTableChangesTheSignalPanelsModel() throws Exception {
+        try (PanelHarness h = new PanelHarness(1200, 520)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            Shell other = new Shell(h.display);
+            other.setLayout(new FillLayout());
+            other.setSize(900, 600);
+            SignalView signal = (SignalView) new SignalPanel().open(other, h.workbench);
+            other.layout(true, true);
+            assertTrue(h.pumpUntil(() -> signal.modelValues().length > 0, 20_000), signal.statusText());
+            double[] before = signal.modelValues();
+            assertEquals("1", stack.table().getItem(1).getText(K_THROUGH).split(" ")[0]);
+            h.screenshot("stack");
+
+            assertTrue(stack.commit(1, K_THROUGH, "2.5"));
+            assertEquals(2.5, h.workbench.project().model().orElseThrow().value(
+                    ParameterRef.layer("film", "k_through_w_mk"), "test"), 1e-12);
+            assertTrue(h.pumpUntil(() -> !Arrays.equals(before, signal.modelValues()), 20_000),
+                    "the Signal panel's model follows the Stack panel's edit");
+            other.dispose();
+        }
+    }
+
+    @Test
+    void badTextIsRefusedWithAMessageAndNothingChanges() throws Exception {
+        try (PanelHarness h = new PanelHarness(1200, 520)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            String json = h.workbench.project().json();
+            assertFalse(stack.commit(1, K_THROUGH, "1,5"));
+            assertTrue(stack.statusText().contains("'1,5' is not a number"), stack.statusText());
+            assertFalse(stack.commit(1, K_THROUGH, "-2"));
+            assertTrue(stack.statusText().contains("positive"), stack.statusText());
+            assertEquals(json, h.workbench.project().json(), "nothing was clamped or written");
+        }
+    }
+
+    @Test
+    void theTableShowsRolesInDisplayUnits() throws Exception {
+        try (PanelHarness h = new PanelHarness(1200, 520)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            String thickness = stack.table().getItem(0).getText(2);
+            assertTrue(thickness.startsWith("85 ") && thickness.endsWith("± 3 %"), thickness);
+            assertTrue(stack.table().getItem(1).getText(K_THROUGH).endsWith("free"));
+            h.workbench.project().setFixed(ParameterRef.layer("film", "k_through_w_mk"));
+            h.pump(50);
+            assertEquals("1", stack.table().getItem(1).getText(K_THROUGH));
+            assertEquals(Project.Role.FIXED, h.workbench.project().role(ParameterRef.layer("film", "k_through_w_mk")));
+        }
+    }
+}
