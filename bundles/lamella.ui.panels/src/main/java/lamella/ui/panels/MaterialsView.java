@@ -48,7 +48,8 @@ final class MaterialsView implements PanelView {
         search.addListener(SWT.Modify, e -> filter());
         count = new Label(root, SWT.NONE);
         count.setLayoutData(new GridData(SWT.RIGHT, SWT.CENTER, false, false));
-        SashForm sash = new SashForm(root, SWT.HORIZONTAL);
+        // Entries above, details below: both tables get the panel's full width, so source and library stay in view.
+        SashForm sash = new SashForm(root, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 3, 1));
         entries = Tables.create(sash);
         entries.addListener(SWT.Selection, e -> details());
@@ -63,7 +64,7 @@ final class MaterialsView implements PanelView {
         provenance.setLayoutData(pgd);
         properties = Tables.create(right);
         properties.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        sash.setWeights(new int[] {40, 60});
+        sash.setWeights(new int[] {45, 55});
         filter();
     }
 

@@ -38,7 +38,8 @@ final class StatusLine {
             case CAUTION -> amber;
             case PROBLEM -> red;
         });
-        label.getParent().layout(true, true);
+        // The shell re-lays every ancestor, so that a longer wrapped text grows its group instead of being cut.
+        label.getShell().layout(new org.eclipse.swt.widgets.Control[] {label});
     }
 
     String text() {

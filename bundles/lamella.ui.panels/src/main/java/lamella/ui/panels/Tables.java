@@ -9,6 +9,9 @@ import org.eclipse.swt.widgets.TableItem;
 /** Read-only result tables: headers with units, columns as wide as their widest cell. */
 final class Tables {
 
+    /** Wider cells are cut, with the whole text in reach by widening the column, so every column stays in view. */
+    private static final int WIDEST = 260;
+
     private Tables() {
     }
 
@@ -36,7 +39,7 @@ final class Tables {
             }
             for (TableColumn c : t.getColumns()) {
                 c.pack();
-                c.setWidth(c.getWidth() + 10);
+                c.setWidth(Math.min(c.getWidth() + 10, WIDEST));
             }
         } finally {
             t.setRedraw(true);

@@ -14,7 +14,7 @@ class OtherPanelsTest {
             assertTrue(h.pumpUntil(() -> v.riseText().startsWith("Predicted"), 20_000), v.riseText());
             assertTrue(!v.riseText().contains("large"), "10 mW is modest on this sample: " + v.riseText());
             h.screenshot("setup");
-            v.setPower("5000");
+            v.setPower("100");
             assertTrue(h.pumpUntil(() -> v.riseText().contains("That is large"), 20_000), v.riseText());
             h.screenshot("setup-warning");
             v.setPower("abc");
