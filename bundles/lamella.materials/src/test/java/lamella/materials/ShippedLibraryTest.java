@@ -19,7 +19,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * The shipped library against an independent transcription of its cited tables: Incropera & DeWitt, Fundamentals of
+ * The shipped library against an independent copy of its cited tables: Incropera & DeWitt, Fundamentals of
  * Heat and Mass Transfer, 6th ed., Tables A.1 (metals) and A.2 (nonmetallic solids) at 300 K — every value below
  * from memory, written down separately from the library file.
  */
