@@ -1,5 +1,6 @@
 package lamella.report;
 
+import lamella.charts.DecadeAxis;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Locale;
@@ -12,7 +13,6 @@ import java.util.Locale;
 final class Numbers {
 
     private static final MathContext FOUR_DIGITS = new MathContext(4);
-    private static final String SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹";
     private static final int SMALLEST_PLAIN_EXPONENT = -3;
     private static final int LARGEST_PLAIN_EXPONENT = 4;
     /** Digits after the point beyond which the σ's rounding no longer matters to a reader. */
@@ -66,14 +66,7 @@ final class Numbers {
     }
 
     static String powerOfTen(int e) {
-        StringBuilder sb = new StringBuilder("10");
-        if (e < 0) {
-            sb.append('⁻');
-        }
-        for (char c : Integer.toString(Math.abs(e)).toCharArray()) {
-            sb.append(SUPERSCRIPT_DIGITS.charAt(c - '0'));
-        }
-        return sb.toString();
+        return DecadeAxis.powerOfTen(e);
     }
 
     private static String fixed(double v, int decimals) {

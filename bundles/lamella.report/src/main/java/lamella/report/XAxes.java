@@ -1,5 +1,6 @@
 package lamella.report;
 
+import lamella.charts.DecadeAxis;
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;

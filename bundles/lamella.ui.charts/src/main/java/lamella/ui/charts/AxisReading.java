@@ -1,6 +1,7 @@
 package lamella.ui.charts;
 
 import java.util.Locale;
+import lamella.charts.DecadeAxis;
 
 /** A value read off an axis, in the axis's own unit: the text in the last parentheses of its label. */
 final class AxisReading {
@@ -34,24 +35,12 @@ final class AxisReading {
         if (a != 0 && (a < 1e-3 || a >= 1e5)) {
             String s = String.format(Locale.ROOT, "%.3e", v);
             int e = s.indexOf('e');
-            return s.substring(0, e) + "×10" + superscript(Integer.parseInt(s.substring(e + 1)));
+            return s.substring(0, e) + "×" + DecadeAxis.powerOfTen(Integer.parseInt(s.substring(e + 1)));
         }
         return String.format(Locale.ROOT, "%.4g", v);
     }
 
     static String reading(String name, double v, String unit) {
         return name + " = " + number(v) + (unit.isEmpty() ? "" : " " + unit);
-    }
-
-    static String superscript(int exponent) {
-        String digits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-        StringBuilder b = new StringBuilder();
-        if (exponent < 0) {
-            b.append('⁻');
-        }
-        for (char c : Integer.toString(Math.abs(exponent)).toCharArray()) {
-            b.append(digits.charAt(c - '0'));
-        }
-        return b.toString();
     }
 }

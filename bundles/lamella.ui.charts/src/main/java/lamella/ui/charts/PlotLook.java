@@ -1,5 +1,6 @@
 package lamella.ui.charts;
 
+import lamella.charts.DecadeAxis;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
@@ -70,8 +71,15 @@ public final class PlotLook {
 
     /** An x axis: decades for frequency and delay sweeps of positive values, linear otherwise. */
     public static ValueAxis xAxis(String label, boolean logarithmic, double[] x) {
-        ValueAxis a = logarithmic ? new DecadeLogAxis(label) : linear(label);
+        ValueAxis a = logarithmic ? decades(label) : linear(label);
         a.setAutoRangeMinimumSize(leastSpan(x));
+        return a;
+    }
+
+    private static ValueAxis decades(String label) {
+        DecadeAxis a = new DecadeAxis(label);
+        a.setLowerMargin(0.03);
+        a.setUpperMargin(0.03);
         return a;
     }
 

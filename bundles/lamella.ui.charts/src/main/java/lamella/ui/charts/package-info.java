@@ -1,7 +1,7 @@
 /**
  * JFreeChart plots in SWT: {@link lamella.ui.charts.ChartCanvas} draws a chart into a canvas and handles zoom, pan,
  * the read-out under the cursor and export; {@link lamella.ui.charts.PlotLook} and
- * {@link lamella.ui.charts.DecadeLogAxis} give every workbench plot the same look.
+ * {@link lamella.charts.DecadeAxis} give every workbench plot the same look.
  */
 @org.osgi.annotation.bundle.Export
 @org.osgi.annotation.versioning.Version("0.1.0")
