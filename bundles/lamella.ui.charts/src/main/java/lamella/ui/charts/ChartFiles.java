@@ -4,10 +4,8 @@ import java.awt.Rectangle;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
+import lamella.api.AtomicText;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
@@ -33,17 +31,6 @@ public final class ChartFiles {
     }
 
     private static void write(Path target, byte[] bytes) throws IOException {
-        Path abs = target.toAbsolutePath();
-        Path tmp = Files.createTempFile(abs.getParent(), "." + abs.getFileName(), ".part");
-        try {
-            Files.write(tmp, bytes);
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicText.writeBytes(target, bytes);
     }
 }
