@@ -37,9 +37,14 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 @Component(service = {CaseFormat.class, ExplainingCaseFormat.class})
 public final class CaseFileReader implements ExplainingCaseFormat {
 
-    /** {@code fit} is read by the fitting service; this reader only lets it through. */
+    static final String WORKBENCH = "workbench";
+    /**
+     * {@code fit} is read by the fitting service; this reader only lets it through. {@code workbench} holds what the
+     * workbench remembers with a project (settings of techniques and geometries switched away from); no model reads
+     * it, so any object is accepted there.
+     */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
-            LayerReading.TEMPERATURE, "fit");
+            LayerReading.TEMPERATURE, "fit", WORKBENCH);
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
@@ -79,6 +84,10 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             onlyKnownKeys(root, TOP_KEYS, "a case file");
             if (root.has("description")) {
                 root.requireString("description");
+            }
+            if (root.has(WORKBENCH) && !(root.get(WORKBENCH) instanceof Block)) {
+                throw InputException.at(root.pathOf(WORKBENCH), "expected an object of workbench settings, got "
+                        + Block.describe(root.get(WORKBENCH)));
             }
             double temperature = root.has(LayerReading.TEMPERATURE)
                     ? positive(root, LayerReading.TEMPERATURE, "the sample's temperature in K")

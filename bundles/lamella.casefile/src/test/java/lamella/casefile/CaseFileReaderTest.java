@@ -441,7 +441,7 @@ class CaseFileReaderTest {
             String json = withLayers(SUBSTRATE).replace("\"geometry\"", "\"geometri\"");
             InputException e = fail(json);
             assertAt(e, "geometri", lineOf(json, "\"geometri\""), "did you mean 'geometry'",
-                    "description, fit, geometry, measurement, stack, temperature_k");
+                    "description, fit, geometry, measurement, stack, temperature_k, workbench");
         }
 
         @Test
@@ -450,6 +450,16 @@ class CaseFileReaderTest {
             InputException e = fail(json);
             assertAt(e, "results", 2, "unknown key");
             assertFalse(e.getMessage().contains("did you mean"), e.getMessage());
+        }
+
+        @Test
+        void workbenchSettingsAreAnObjectThatNoModelReads() throws Exception {
+            String json = withLayers(SUBSTRATE).replace("{\n  \"stack\"", "{\n  \"workbench\": {\"remembered\":"
+                    + " {\"measurement\": {\"tdtr\": {\"modulation_hz\": \"any text\"}}}},\n  \"stack\"");
+            CaseDocument doc = read(json);
+            assertEquals(read(withLayers(SUBSTRATE)).stack(), doc.stack());
+            String bad = withLayers(SUBSTRATE).replace("{\n  \"stack\"", "{\n  \"workbench\": [1],\n  \"stack\"");
+            assertAt(fail(bad), "workbench", 2, "expected an object of workbench settings");
         }
 
         @Test
