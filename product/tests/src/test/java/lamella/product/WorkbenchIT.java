@@ -146,6 +146,58 @@ class WorkbenchIT {
     }
 
     @Test
+    void removingALayerAsksFirstAndIsUndoneAndRedoneByMenuAndKeys() throws Exception {
+        assertEquals("ok", ask("front stack"));
+        int layers = lines(ask("table layer")).size() - 1;
+        assertEquals("selected film", ask("table-select layer | 1"));
+        ask("press Remove layer");
+        String question = waitFor(() -> ask("dialog"), q -> q.contains("Remove layer 'film'"));
+        assertTrue(question.contains("Undo"), question);
+        ask("dialog-press Cancel");
+        assertEquals(layers, lines(ask("table layer")).size() - 1, "cancelled: nothing removed");
+
+        ask("press Remove layer");
+        waitFor(() -> ask("dialog"), q -> q.contains("Remove layer 'film'"));
+        ask("dialog-press Remove layer");
+        assertEquals(layers - 1, lines(ask("table layer")).size() - 1);
+        assertEquals("Undo remove layer 'film'", lines(ask("edit-menu")).get(0));
+        assertTrue(ask("title").endsWith(" •"), ask("title"));
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("layer-removed-" + size.replace(' ', 'x') + ".png"));
+        }
+
+        ask("key ctrl+z");
+        assertEquals(layers, lines(ask("table layer")).size() - 1, "Ctrl+Z brings the layer back");
+        assertTrue(lines(ask("table layer")).get(2).startsWith("film\t"), ask("table layer"));
+        assertEquals("Redo remove layer 'film'", lines(ask("edit-menu")).get(1));
+        ask("key ctrl+shift+z");
+        assertEquals(layers - 1, lines(ask("table layer")).size() - 1, "Ctrl+Shift+Z removes it again");
+        ask("undo");
+        ask("key ctrl+y");
+        assertEquals(layers - 1, lines(ask("table layer")).size() - 1, "Ctrl+Y redoes too");
+        ask("undo");
+        assertEquals(layers, lines(ask("table layer")).size() - 1);
+        ask("size 1600 1000");
+    }
+
+    @Test
+    void switchingTechniqueAwayAndBackKeepsItsSettings() throws Exception {
+        assertEquals("ok", ask("front setup"));
+        String tdtr = ask("fields Technique");
+        assertTrue(tdtr.contains("modulation") && tdtr.contains("repetition"), tdtr);
+        assertEquals("chosen fdtr", ask("choose Technique | fdtr"));
+        assertTrue(!ask("fields Technique").contains("modulation"), ask("fields Technique"));
+        ask("screenshot " + SHOTS.resolve("technique-fdtr.png"));
+        assertEquals("chosen tdtr", ask("choose Technique | tdtr"));
+        assertEquals(tdtr, ask("fields Technique"), "modulation and repetition came back");
+        assertTrue(lines(ask("edit-menu")).get(0).startsWith("Undo switch the technique to tdtr"), ask("edit-menu"));
+        ask("undo");
+        ask("undo");
+        assertEquals(tdtr, ask("fields Technique"));
+    }
+
+    @Test
     void theWorkbenchPaintsQuickly() {
         String ms = ask("first-paint-ms");
         System.out.println("workbench: first paint " + ms + " ms after the display was created");
@@ -153,6 +205,19 @@ class WorkbenchIT {
     }
 
     // ------------------------------------------------------------------ helpers
+
+    /** Asks until the answer passes the check; the last answer otherwise fails the test. */
+    private static String waitFor(java.util.function.Supplier<String> question, java.util.function.Predicate<String> ok)
+            throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(PATIENCE_MS);
+        String answer = question.get();
+        while (!ok.test(answer) && System.nanoTime() < deadline) {
+            Thread.sleep(50);
+            answer = question.get();
+        }
+        assertTrue(ok.test(answer), answer);
+        return answer;
+    }
 
     private static String area(List<String> placements, String id) {
         return placements.stream().filter(l -> l.startsWith(id + " ")).map(l -> l.split(" ")[1]).findFirst()

@@ -11,10 +11,14 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collection;
+import java.util.HashMap;
 import java.util.Iterator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.Consumer;
 import java.util.function.Predicate;
 import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
@@ -27,14 +31,21 @@ import lamella.api.fit.FitOutcome;
  * The case being edited: the case-file document itself (stack, geometry, measurement and the fit block with its
  * datasets, free and uncertain inputs), so that what the workbench saves is exactly what the headless commands
  * read. Every edit is checked at once by the live case reader; {@link #current()} is the last document that passed,
- * {@link #problem()} what is wrong with the present one. UI thread only.
+ * {@link #problem()} what is wrong with the present one.
+ *
+ * <p>The document changes only through {@link #edit}: one named, undoable step each, kept in a deep history
+ * ({@link #undo}, {@link #redo}). The convenience methods ({@link #set}, {@link #removeLayer}, …) are edits too.
+ * Saving marks the clean point: undoing or redoing back to it makes the project clean again. UI thread only.
  */
 public final class Project {
 
     /** How a fit treats an input. */
     public enum Role { FIXED, FREE, UNCERTAIN }
 
-    /** What changed, for listeners. */
+    /**
+     * What changed, for listeners: model inputs (stack, geometry, measurement), the fit block, a fit result, or the
+     * project's file state (saved, dirty, history).
+     */
     public enum Change { INPUTS, FIT_SETUP, RESULT, FILE }
 
     @FunctionalInterface
@@ -42,20 +53,33 @@ public final class Project {
         void changed(Change change);
     }
 
+    /**
+     * The top-level key of the workbench's own settings in a case file (values of techniques and geometries switched
+     * away from); the case reader accepts it and nothing in it affects the model.
+     */
+    public static final String WORKBENCH_KEY = "workbench";
+
+    private static final String REMEMBERED = "remembered";
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private final CaseReader reader;
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
+    private final EditHistory history = new EditHistory();
+    private final Map<String, String> relocated = new HashMap<>();
     private ObjectNode document;
+    private ObjectNode clean;
+    private boolean dirty;
     private Path file;
     private Path folder;
-    private boolean dirty;
     private CaseDocument current;
     private InputException problem;
     private FitOutcome lastFit;
 
-    private Project(ObjectNode document, Path file, Path folder, CaseReader reader) {
+    private Project(ObjectNode document, boolean saved, Path file, Path folder, CaseReader reader) {
+        absoluteDataPaths(document, folder);
         this.document = document;
+        this.clean = saved ? document : null;
+        this.dirty = !saved;
         this.file = file;
         this.folder = folder;
         this.reader = reader;
@@ -67,16 +91,28 @@ public final class Project {
         Path abs = file.toAbsolutePath().normalize();
         reader.read(abs);
         JsonNode tree = JSON.readTree(Files.readString(abs, StandardCharsets.UTF_8));
-        return new Project((ObjectNode) tree, abs, abs.getParent(), reader);
+        return new Project((ObjectNode) tree, true, abs, abs.getParent(), reader);
     }
 
     /** A new, unsaved project from case-file text; relative data paths resolve against folder. */
     public static Project of(String json, Path folder, CaseReader reader) throws IOException {
+        return new Project(object(json), true, null, folder.toAbsolutePath().normalize(), reader);
+    }
+
+    /**
+     * A project restored from a recovery copy: untitled, and unsaved from the start, so that closing asks before the
+     * recovered changes are lost again.
+     */
+    public static Project recovered(String json, Path folder, CaseReader reader) throws IOException {
+        return new Project(object(json), false, null, folder.toAbsolutePath().normalize(), reader);
+    }
+
+    private static ObjectNode object(String json) throws IOException {
         JsonNode tree = JSON.readTree(json);
         if (!(tree instanceof ObjectNode o)) {
             throw new IOException("a case document is a JSON object");
         }
-        return new Project(o, null, folder.toAbsolutePath().normalize(), reader);
+        return o;
     }
 
     public void addListener(Listener l) {
@@ -97,6 +133,7 @@ public final class Project {
         return folder;
     }
 
+    /** True when the document differs from what was last opened or saved. */
     public boolean dirty() {
         return dirty;
     }
@@ -125,64 +162,134 @@ public final class Project {
         }
     }
 
-    /** A copy of the document's tree, for panels that show more than values. */
+    /** A copy of the document's tree, for panels that show more than values; data paths in it are absolute. */
     public ObjectNode tree() {
         return document.deepCopy();
+    }
+
+    // ------------------------------------------------------------------ edits and their history
+
+    /**
+     * Changes the document: the mutation gets a working copy of the whole document, which becomes the project's
+     * document when it returns, as one undoable step of the given name ("remove layer 'film'"). A mutation that
+     * leaves the document as it was records nothing. Do not keep the node after the mutation returns.
+     */
+    public void edit(String name, Consumer<ObjectNode> mutation) {
+        edit(name, null, mutation);
+    }
+
+    /**
+     * An edit that merges with the step just before when both carry equal merge keys, so that the keystrokes of one
+     * visit to a field undo as one step. Use a key that is new for every visit (a field's focus, for example).
+     */
+    public void edit(String name, Object mergeKey, Consumer<ObjectNode> mutation) {
+        ObjectNode before = document;
+        ObjectNode after = before.deepCopy();
+        mutation.accept(after);
+        if (after.equals(before)) {
+            return;
+        }
+        history.record(name, before, after, mergeKey);
+        document = after;
+        changed(before, after);
+    }
+
+    /** The name of the edit {@link #undo} would take back, such as "remove layer 'film'". */
+    public Optional<String> undoName() {
+        return history.undoStep().map(EditHistory.Step::name);
+    }
+
+    /** The name of the edit {@link #redo} would make again. */
+    public Optional<String> redoName() {
+        return history.redoStep().map(EditHistory.Step::name);
+    }
+
+    /** Takes back the newest edit; false when there is none. */
+    public boolean undo() {
+        if (history.undoStep().isEmpty()) {
+            return false;
+        }
+        ObjectNode before = document;
+        document = relocate(history.undo().before());
+        changed(before, document);
+        return true;
+    }
+
+    /** Makes the newest undone edit again; false when there is none. */
+    public boolean redo() {
+        if (history.redoStep().isEmpty()) {
+            return false;
+        }
+        ObjectNode before = document;
+        document = relocate(history.redo().after());
+        changed(before, document);
+        return true;
+    }
+
+    /** The number of steps that can be undone now. */
+    public int undoSteps() {
+        return history.undoable();
     }
 
     // ------------------------------------------------------------------ inputs
 
     /** Sets a numeric input (a layer property, or a key of the case's or a dataset's geometry/measurement block). */
     public void set(ParameterRef ref, double value) {
-        ObjectNode holder = holder(ref);
-        holder.put(ref.key(), value);
-        if (ref.scope() == ParameterRef.Scope.LAYER && ref.key().equals("k_in_plane_w_mk")) {
-            holder.remove("k_in_plane_x_w_mk");
-            holder.remove("k_in_plane_y_w_mk");
-        }
-        edited(Change.INPUTS);
+        set(ref, value, null);
+    }
+
+    /** Sets a numeric input as part of typing: edits with the same merge key become one step. */
+    public void set(ParameterRef ref, double value, Object mergeKey) {
+        edit("change " + InputNames.of(ref), mergeKey, d -> {
+            ObjectNode holder = holder(d, ref);
+            holder.put(ref.key(), value);
+            if (ref.scope() == ParameterRef.Scope.LAYER && ref.key().equals("k_in_plane_w_mk")) {
+                holder.remove("k_in_plane_x_w_mk");
+                holder.remove("k_in_plane_y_w_mk");
+            }
+        });
     }
 
     /** Removes a key from a layer (to fall back on its default or its material's value). */
     public void clearLayerKey(String layer, String key) {
-        layerNode(layer).remove(key);
-        edited(Change.INPUTS);
+        edit("clear " + InputNames.of(ParameterRef.layer(layer, key)), d -> layerNode(d, layer).remove(key));
     }
 
     /** Sets a layer's text key, such as its material. */
     public void setLayerText(String layer, String key, String text) {
-        layerNode(layer).put(key, text);
-        edited(Change.INPUTS);
+        edit("set " + InputNames.key(key) + " of layer '" + layer + "' to '" + text + "'",
+                d -> layerNode(d, layer).put(key, text));
     }
 
     /** Replaces the whole layer list's entry at index with a copy of the given layer object. */
     public void putLayer(int index, ObjectNode layer) {
-        layers().set(index, layer.deepCopy());
-        edited(Change.INPUTS);
+        edit("change layer '" + layer.path("name").asText() + "'", d -> layers(d).set(index, layer.deepCopy()));
     }
 
     public void addLayer(int index, ObjectNode layer) {
-        layers().insert(index, layer.deepCopy());
-        edited(Change.INPUTS);
+        edit("add layer '" + layer.path("name").asText() + "'", d -> layers(d).insert(index, layer.deepCopy()));
     }
 
+    /** Removes a layer, and the fit's references to its values with it. */
     public void removeLayer(int index) {
-        String name = layers().get(index).path("name").asText();
-        layers().remove(index);
-        dropRoles(r -> r.scope() == ParameterRef.Scope.LAYER && r.layer().equals(name));
-        edited(Change.INPUTS);
+        String name = layers(document).get(index).path("name").asText();
+        edit("remove layer '" + name + "'", d -> {
+            layers(d).remove(index);
+            dropRoles(d, r -> r.scope() == ParameterRef.Scope.LAYER && r.layer().equals(name));
+        });
     }
 
     public void moveLayer(int from, int to) {
-        ArrayNode l = layers();
-        JsonNode n = l.remove(from);
-        l.insert(to, n);
-        edited(Change.INPUTS);
+        String name = layers(document).get(from).path("name").asText();
+        edit("move layer '" + name + "' " + (to < from ? "up" : "down"), d -> {
+            ArrayNode l = layers(d);
+            JsonNode n = l.remove(from);
+            l.insert(to, n);
+        });
     }
 
     public void setBottom(String bottom) {
-        stackNode().put("bottom", bottom);
-        edited(Change.INPUTS);
+        edit("set the stack's bottom to " + bottom, d -> objectAt(d, "stack").put("bottom", bottom));
     }
 
     /** Replaces the case's geometry or measurement block. */
@@ -190,49 +297,90 @@ public final class Project {
         if (!name.equals("geometry") && !name.equals("measurement")) {
             throw new IllegalArgumentException("geometry or measurement, not " + name);
         }
-        document.set(name, block.deepCopy());
-        edited(Change.INPUTS);
+        edit("change the " + blockWords(name), d -> d.set(name, block.deepCopy()));
+    }
+
+    /**
+     * Switches a geometry or measurement block (the case's, or dataset's own when dataset ≥ 0) to another type. The
+     * values of the type left are remembered with the project; the new block takes the values it remembers for its
+     * type, and then every value of the old block that the new type also reads (keys: the new type's parameters).
+     */
+    public void switchType(String block, int dataset, String type, Collection<String> keys) {
+        if (!block.equals("geometry") && !block.equals("measurement")) {
+            throw new IllegalArgumentException("geometry or measurement, not " + block);
+        }
+        String where = dataset >= 0 ? " of dataset " + (dataset + 1) : "";
+        edit("switch the " + blockWords(block) + where + " to " + type, d -> {
+            ObjectNode holder = dataset >= 0 ? (ObjectNode) fitArray(d, "datasets").get(dataset) : d;
+            ObjectNode old = holder.get(block) instanceof ObjectNode o ? o : holder.objectNode();
+            ObjectNode memory = objectAt(objectAt(objectAt(d, WORKBENCH_KEY), REMEMBERED), block);
+            String oldType = old.path("type").asText("");
+            if (!oldType.isEmpty()) {
+                ObjectNode kept = old.deepCopy();
+                kept.remove("type");
+                memory.set(oldType, kept);
+            }
+            ObjectNode fresh = holder.objectNode();
+            fresh.put("type", type);
+            JsonNode remembered = memory.path(type);
+            for (String key : keys) {
+                if (old.has(key) && !oldType.equals(type)) {
+                    fresh.set(key, old.get(key).deepCopy());
+                } else if (remembered.has(key)) {
+                    fresh.set(key, remembered.get(key).deepCopy());
+                } else if (old.has(key)) {
+                    fresh.set(key, old.get(key).deepCopy());
+                }
+            }
+            holder.set(block, fresh);
+        });
+    }
+
+    private static String blockWords(String block) {
+        return block.equals("geometry") ? "heating geometry" : "technique";
     }
 
     // ------------------------------------------------------------------ fit set-up
 
     public Role role(ParameterRef ref) {
-        if (find(fitArray("free"), ref) >= 0) {
+        if (find(fitArrayOrEmpty("free"), ref) >= 0) {
             return Role.FREE;
         }
-        return find(fitArray("uncertain"), ref) >= 0 ? Role.UNCERTAIN : Role.FIXED;
+        return find(fitArrayOrEmpty("uncertain"), ref) >= 0 ? Role.UNCERTAIN : Role.FIXED;
     }
 
     /** The σ of an uncertain input as a fraction of its value, or NaN if it is not uncertain or given absolutely. */
     public double relativeSigma(ParameterRef ref) {
-        int i = find(fitArray("uncertain"), ref);
-        return i < 0 ? Double.NaN : fitArray("uncertain").get(i).path("sigma_relative").asDouble(Double.NaN);
+        ArrayNode uncertain = fitArrayOrEmpty("uncertain");
+        int i = find(uncertain, ref);
+        return i < 0 ? Double.NaN : uncertain.get(i).path("sigma_relative").asDouble(Double.NaN);
     }
 
     /** Makes an input free, with optional bounds (NaN: none). */
     public void setFree(ParameterRef ref, double min, double max) {
-        setFixedQuietly(ref);
-        ObjectNode e = entry(ref);
-        if (!Double.isNaN(min)) {
-            e.put("min", min);
-        }
-        if (!Double.isNaN(max)) {
-            e.put("max", max);
-        }
-        fitArray("free").add(e);
-        edited(Change.FIT_SETUP);
+        edit("make " + InputNames.of(ref) + " free", d -> {
+            setFixedQuietly(d, ref);
+            ObjectNode e = entry(ref);
+            if (!Double.isNaN(min)) {
+                e.put("min", min);
+            }
+            if (!Double.isNaN(max)) {
+                e.put("max", max);
+            }
+            fitArray(d, "free").add(e);
+        });
     }
 
     /** Makes an input uncertain by a fraction of its value. */
     public void setUncertain(ParameterRef ref, double sigmaRelative) {
-        setFixedQuietly(ref);
-        fitArray("uncertain").add(entry(ref).put("sigma_relative", sigmaRelative));
-        edited(Change.FIT_SETUP);
+        edit("make " + InputNames.of(ref) + " uncertain", d -> {
+            setFixedQuietly(d, ref);
+            fitArray(d, "uncertain").add(entry(ref).put("sigma_relative", sigmaRelative));
+        });
     }
 
     public void setFixed(ParameterRef ref) {
-        setFixedQuietly(ref);
-        edited(Change.FIT_SETUP);
+        edit("fix " + InputNames.of(ref), d -> setFixedQuietly(d, ref));
     }
 
     /** The fit block's datasets, as objects with data, signal, and optional measurement and geometry blocks. */
@@ -243,32 +391,34 @@ public final class Project {
         return out;
     }
 
-    /** Adds a dataset; a path inside the project's folder is stored relative to it. */
+    /** Adds a dataset; saving writes its path relative to the case file, copying the file beside it if needed. */
     public void addDataset(Path data, String signal, ObjectNode measurement, ObjectNode geometry) {
-        ObjectNode d = JSON.createObjectNode();
         Path abs = data.toAbsolutePath().normalize();
-        d.put("data", abs.startsWith(folder) ? folder.relativize(abs).toString() : abs.toString());
-        if (signal != null) {
-            d.put("signal", signal);
-        }
-        if (measurement != null) {
-            d.set("measurement", measurement.deepCopy());
-        }
-        if (geometry != null) {
-            d.set("geometry", geometry.deepCopy());
-        }
-        fitArray("datasets").add(d);
-        edited(Change.FIT_SETUP);
+        edit("add dataset " + abs.getFileName(), d -> {
+            ObjectNode ds = d.objectNode();
+            ds.put("data", abs.toString());
+            if (signal != null) {
+                ds.put("signal", signal);
+            }
+            if (measurement != null) {
+                ds.set("measurement", measurement.deepCopy());
+            }
+            if (geometry != null) {
+                ds.set("geometry", geometry.deepCopy());
+            }
+            fitArray(d, "datasets").add(ds);
+        });
     }
 
     public void removeDataset(int index) {
-        fitArray("datasets").remove(index);
-        edited(Change.FIT_SETUP);
+        String data = Path.of(fitArrayOrEmpty("datasets").get(index).path("data").asText("?")).getFileName()
+                .toString();
+        edit("remove dataset " + (index + 1) + " (" + data + ")", d -> fitArray(d, "datasets").remove(index));
     }
 
     /** The data file of a dataset, resolved against the project's folder. */
     public Path dataFile(int index) {
-        return folder.resolve(fitArray("datasets").get(index).path("data").asText()).normalize();
+        return folder.resolve(fitArrayOrEmpty("datasets").get(index).path("data").asText()).normalize();
     }
 
     // ------------------------------------------------------------------ results and files
@@ -282,17 +432,31 @@ public final class Project {
         fire(Change.RESULT);
     }
 
-    /** Saves atomically (temporary file, then move); the project then belongs to that file. */
+    /**
+     * Saves atomically (temporary file, then move), self-contained: every data file outside the case's folder is
+     * copied beside the case first, and data paths are written relative to the case file. The project then belongs
+     * to that file, and this state of the document is the clean point.
+     */
     public void save(Path target) throws IOException {
         Path abs = target.toAbsolutePath().normalize();
-        Path newFolder = abs.getParent();
-        if (!newFolder.equals(folder)) {
-            rebaseDataPaths(newFolder);
+        Path dir = abs.getParent();
+        Map<String, String> copies = DataCopies.besides(dir, dataPaths(document));
+        ObjectNode saved = document.deepCopy();
+        for (JsonNode ds : saved.path("fit").path("datasets")) {
+            if (ds instanceof ObjectNode o && o.path("data").isTextual()) {
+                Path p = Path.of(copies.getOrDefault(o.get("data").asText(), o.get("data").asText()));
+                o.put("data", dir.relativize(p).toString().replace('\\', '/'));
+            }
         }
-        AtomicText.write(abs, json());
+        AtomicText.write(abs, text(saved));
+        relocated.putAll(copies);
+        document = relocate(document);
         file = abs;
-        folder = newFolder;
+        folder = dir;
+        clean = document;
         dirty = false;
+        history.seal();
+        revalidate();
         fire(Change.FILE);
     }
 
@@ -303,16 +467,36 @@ public final class Project {
 
     // ------------------------------------------------------------------ internals
 
-    private void edited(Change change) {
-        dirty = true;
+    private void changed(ObjectNode before, ObjectNode after) {
+        dirty = clean == null || !after.equals(clean);
         revalidate();
-        fire(change);
+        if (!without(before, "fit").equals(without(after, "fit"))) {
+            fire(Change.INPUTS);
+        }
+        if (!before.path("fit").equals(after.path("fit"))) {
+            fire(Change.FIT_SETUP);
+        }
         fire(Change.FILE);
+    }
+
+    private static ObjectNode without(ObjectNode d, String key) {
+        ObjectNode c = d.deepCopy();
+        c.remove(key);
+        c.remove(WORKBENCH_KEY);
+        return c;
     }
 
     private void fire(Change change) {
         for (Listener l : listeners) {
             l.changed(change);
+        }
+    }
+
+    private static String text(ObjectNode d) {
+        try {
+            return JSON.writeValueAsString(d) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("a JSON tree always serialises", e);
         }
     }
 
@@ -348,44 +532,63 @@ public final class Project {
         }
     }
 
-    private void rebaseDataPaths(Path newFolder) {
-        for (JsonNode d : document.path("fit").path("datasets")) {
-            if (d instanceof ObjectNode o && o.path("data").isTextual()) {
-                Path abs = folder.resolve(o.get("data").asText()).normalize();
-                o.put("data", abs.startsWith(newFolder) ? newFolder.relativize(abs).toString() : abs.toString());
+    /** Data paths are held absolute, so that they mean the same files wherever the project is saved. */
+    private static void absoluteDataPaths(ObjectNode d, Path folder) {
+        for (JsonNode ds : d.path("fit").path("datasets")) {
+            if (ds instanceof ObjectNode o && o.path("data").isTextual()) {
+                o.put("data", folder.resolve(o.get("data").asText()).normalize().toString());
             }
         }
     }
 
-    private ObjectNode holder(ParameterRef ref) {
-        switch (ref.scope()) {
-            case LAYER:
-                return layerNode(ref.layer());
-            default: {
-                String block = ref.scope() == ParameterRef.Scope.GEOMETRY ? "geometry" : "measurement";
-                if (ref.dataset() < 0) {
-                    return objectAt(document, block);
-                }
-                ObjectNode d = (ObjectNode) fitArray("datasets").get(ref.dataset());
-                return objectAt(d, block);
+    private static List<String> dataPaths(ObjectNode d) {
+        List<String> out = new ArrayList<>();
+        for (JsonNode ds : d.path("fit").path("datasets")) {
+            if (ds.path("data").isTextual()) {
+                out.add(ds.get("data").asText());
             }
         }
+        return out;
     }
 
-    private ObjectNode stackNode() {
-        return objectAt(document, "stack");
+    /**
+     * The document with data files that a save copied beside the case replaced by their copies: undoing past a
+     * save must not bring back a path outside the project.
+     */
+    private ObjectNode relocate(ObjectNode d) {
+        if (dataPaths(d).stream().noneMatch(relocated::containsKey)) {
+            return d;
+        }
+        ObjectNode c = d.deepCopy();
+        for (JsonNode ds : c.path("fit").path("datasets")) {
+            if (ds instanceof ObjectNode o && relocated.containsKey(o.path("data").asText())) {
+                o.put("data", relocated.get(o.get("data").asText()));
+            }
+        }
+        return c;
     }
 
-    private ArrayNode layers() {
-        ObjectNode s = stackNode();
+    private static ObjectNode holder(ObjectNode d, ParameterRef ref) {
+        if (ref.scope() == ParameterRef.Scope.LAYER) {
+            return layerNode(d, ref.layer());
+        }
+        String block = ref.scope() == ParameterRef.Scope.GEOMETRY ? "geometry" : "measurement";
+        if (ref.dataset() < 0) {
+            return objectAt(d, block);
+        }
+        return objectAt((ObjectNode) fitArray(d, "datasets").get(ref.dataset()), block);
+    }
+
+    private static ArrayNode layers(ObjectNode d) {
+        ObjectNode s = objectAt(d, "stack");
         if (!(s.get("layers") instanceof ArrayNode a)) {
             return s.putArray("layers");
         }
         return a;
     }
 
-    private ObjectNode layerNode(String name) {
-        for (JsonNode l : layers()) {
+    private static ObjectNode layerNode(ObjectNode d, String name) {
+        for (JsonNode l : layers(d)) {
             if (l.path("name").asText().equals(name) && l instanceof ObjectNode o) {
                 return o;
             }
@@ -393,12 +596,17 @@ public final class Project {
         throw new IllegalArgumentException("no layer '" + name + "'");
     }
 
-    private ArrayNode fitArray(String key) {
-        ObjectNode fit = objectAt(document, "fit");
+    private static ArrayNode fitArray(ObjectNode d, String key) {
+        ObjectNode fit = objectAt(d, "fit");
         if (!(fit.get(key) instanceof ArrayNode a)) {
             return fit.putArray(key);
         }
         return a;
+    }
+
+    /** A fit array of the present document for reading; empty (and not added) when the document has none. */
+    private ArrayNode fitArrayOrEmpty(String key) {
+        return document.path("fit").get(key) instanceof ArrayNode a ? a : JSON.createArrayNode();
     }
 
     private static ObjectNode objectAt(ObjectNode parent, String key) {
@@ -446,19 +654,23 @@ public final class Project {
         return Optional.empty();
     }
 
-    private void setFixedQuietly(ParameterRef ref) {
+    private static void setFixedQuietly(ObjectNode d, ParameterRef ref) {
         for (String key : List.of("free", "uncertain")) {
-            ArrayNode a = fitArray(key);
-            int i = find(a, ref);
-            if (i >= 0) {
-                a.remove(i);
+            if (d.path("fit").get(key) instanceof ArrayNode a) {
+                int i = find(a, ref);
+                if (i >= 0) {
+                    a.remove(i);
+                }
             }
         }
     }
 
-    private void dropRoles(Predicate<ParameterRef> which) {
+    private static void dropRoles(ObjectNode d, Predicate<ParameterRef> which) {
         for (String key : List.of("free", "uncertain")) {
-            Iterator<JsonNode> it = fitArray(key).elements();
+            if (!(d.path("fit").get(key) instanceof ArrayNode a)) {
+                continue;
+            }
+            Iterator<JsonNode> it = a.elements();
             while (it.hasNext()) {
                 if (refOf(it.next()).filter(which).isPresent()) {
                     it.remove();

@@ -9,7 +9,9 @@ import lamella.api.data.DataImporter;
 import lamella.api.fit.FitService;
 import lamella.api.fit.ReportWriter;
 import lamella.api.material.MaterialCatalog;
+import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.MessageBox;
 import org.eclipse.swt.widgets.Shell;
 
 /** What every panel is given. Call on the UI thread unless a method says otherwise. */
@@ -45,4 +47,15 @@ public interface Workbench {
 
     /** Brings a panel to the front, opening it if it is closed. */
     void show(String panelId);
+
+    /**
+     * Asks before a step the user may not have meant, such as removing a layer: true when the user chose the
+     * action. The question names what will happen; action is the button's label ("Remove layer").
+     */
+    default boolean confirm(String title, String question, String action) {
+        MessageBox box = new MessageBox(shell(), SWT.ICON_QUESTION | SWT.OK | SWT.CANCEL);
+        box.setText(title);
+        box.setMessage(question);
+        return box.open() == SWT.OK;
+    }
 }

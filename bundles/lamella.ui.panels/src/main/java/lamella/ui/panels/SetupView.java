@@ -286,17 +286,12 @@ final class SetupView implements PanelView {
                     : ParameterRef.measurement(s.key()), v);
         }
 
-        /** Keeps the values the new type also reads; drops the rest, which it would refuse. */
+        /**
+         * The new type takes the values it had when last chosen and those of the old type it also reads; the old
+         * type's values are remembered with the project for the way back.
+         */
         private void changeType(String t) {
-            ObjectNode old = (ObjectNode) project.tree().path(block);
-            ObjectNode b = old.objectNode();
-            b.put("type", t);
-            for (ParameterSpec s : specs.apply(t)) {
-                if (old.has(s.key())) {
-                    b.set(s.key(), old.get(s.key()));
-                }
-            }
-            project.setBlock(block, b);
+            project.switchType(block, -1, t, specs.apply(t).stream().map(ParameterSpec::key).toList());
         }
     }
 }

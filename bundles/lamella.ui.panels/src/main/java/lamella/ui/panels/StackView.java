@@ -381,7 +381,15 @@ final class StackView implements PanelView {
             status.show("A stack needs at least one layer.", StatusLine.Tone.PROBLEM);
             return;
         }
-        project.removeLayer(i);
+        String name = names.get(i);
+        long roles = LayerColumn.VALUES.stream().filter(c -> project.role(ParameterRef.layer(name, c.key()))
+                != Project.Role.FIXED).count();
+        String question = "Remove layer '" + name + "' from the stack?" + (roles > 0 ? " Its " + roles + " free or"
+                + " uncertain input" + (roles == 1 ? "" : "s") + " leave the fit with it." : "")
+                + "\n\nEdit ▸ Undo brings it back.";
+        if (workbench.confirm("Remove layer", question, "Remove layer")) {
+            project.removeLayer(i);
+        }
     }
 
     private void move(int by) {

@@ -3,18 +3,10 @@ package lamella.ui.panels;
 import java.util.Map;
 import lamella.api.ParameterRef;
 import lamella.api.Units;
+import lamella.ui.api.InputNames;
 
 /** Axis labels, column headings and parameter names in the trade's words, each with its unit. */
 final class Words {
-
-    private static final Map<String, String> LAYER_KEYS = Map.of(
-            "thickness_m", "thickness",
-            "k_through_w_mk", "Λ through",
-            "k_in_plane_w_mk", "Λ in-plane",
-            "k_in_plane_x_w_mk", "Λ in-plane x",
-            "k_in_plane_y_w_mk", "Λ in-plane y",
-            "heat_capacity_j_m3k", "C",
-            "conductance_below_w_m2k", "G below");
 
     private static final Map<String, String> SIGNALS = Map.of(
             "ratio", "ratio −V_in/V_out (dimensionless)",
@@ -58,28 +50,12 @@ final class Words {
 
     /** "film · Λ through", "geometry · pump radius", "dataset 3 · geometry · pump radius". */
     static String parameter(ParameterRef ref) {
-        String prefix = ref.dataset() >= 0 ? "dataset " + (ref.dataset() + 1) + " · " : "";
-        return switch (ref.scope()) {
-            case LAYER -> ref.layer() + " · " + LAYER_KEYS.getOrDefault(ref.key(), ref.key());
-            case GEOMETRY -> prefix + "geometry · " + key(ref.key());
-            case MEASUREMENT -> prefix + "measurement · " + key(ref.key());
-        };
+        return InputNames.of(ref);
     }
 
     /** A case-file key in words, without its unit suffix: {@code pump_radius_m} → "pump radius". */
     static String key(String key) {
-        String unit = Units.ofKey(key);
-        String stem = key;
-        if (!unit.isEmpty()) {
-            for (String suffix : new String[] {"_k_m_per_w", "_k_per_w", "_w_m2k", "_w_mk", "_j_m3k", "_j_kgk",
-                    "_kg_m3", "_hz", "_deg", "_m", "_s", "_k"}) {
-                if (key.endsWith(suffix)) {
-                    stem = key.substring(0, key.length() - suffix.length());
-                    break;
-                }
-            }
-        }
-        return stem.replace('_', ' ');
+        return InputNames.key(key);
     }
 
     private static String withUnit(String column) {

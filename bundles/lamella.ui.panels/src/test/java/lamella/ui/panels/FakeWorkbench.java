@@ -185,6 +185,16 @@ final class FakeWorkbench implements Workbench {
     public void show(String panelId) {
     }
 
+    /** The answer the next questions get, and what they asked. */
+    volatile boolean confirmAnswer = true;
+    final List<String> questions = new CopyOnWriteArrayList<>();
+
+    @Override
+    public boolean confirm(String title, String question, String action) {
+        questions.add(question);
+        return confirmAnswer;
+    }
+
     static final class FakeMessages implements Messages {
 
         private final List<Message> all = new CopyOnWriteArrayList<>();

@@ -5,9 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
+import java.util.List;
 import lamella.api.ParameterRef;
 import lamella.ui.api.Project;
+import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
 import org.junit.jupiter.api.Test;
 
@@ -49,6 +53,47 @@ class StackPanelTest {
             assertTrue(stack.statusText().contains("positive"), stack.statusText());
             assertEquals(json, h.workbench.project().json(), "nothing was clamped or written");
         }
+    }
+
+    @Test
+    void removingALayerAsksFirstAndUndoBringsItBackWithItsRoles() throws Exception {
+        try (PanelHarness h = new PanelHarness(1200, 520)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            Project p = h.workbench.project();
+            Button remove = button(h, "Remove layer");
+            stack.table().setSelection(1);
+            h.workbench.confirmAnswer = false;
+            remove.notifyListeners(SWT.Selection, new Event());
+            assertEquals(1, h.workbench.questions.size());
+            assertTrue(h.workbench.questions.get(0).contains("Remove layer 'film'"), h.workbench.questions.get(0));
+            assertTrue(h.workbench.questions.get(0).contains("2 free or uncertain inputs"),
+                    h.workbench.questions.get(0));
+            assertEquals(3, stack.table().getItemCount(), "not confirmed: nothing removed");
+
+            h.workbench.confirmAnswer = true;
+            remove.notifyListeners(SWT.Selection, new Event());
+            assertEquals(2, stack.table().getItemCount());
+            assertEquals("remove layer 'film'", p.undoName().orElseThrow());
+            p.undo();
+            assertEquals(3, stack.table().getItemCount());
+            assertEquals("film", stack.table().getItem(1).getText(0));
+            assertEquals(Project.Role.FREE, p.role(ParameterRef.layer("film", "k_through_w_mk")));
+        }
+    }
+
+    private static Button button(PanelHarness h, String label) {
+        java.util.ArrayDeque<org.eclipse.swt.widgets.Control> todo = new java.util.ArrayDeque<>(
+                List.of(h.shell.getChildren()));
+        while (!todo.isEmpty()) {
+            org.eclipse.swt.widgets.Control c = todo.pop();
+            if (c instanceof Button b && b.getText().equals(label)) {
+                return b;
+            }
+            if (c instanceof org.eclipse.swt.widgets.Composite k) {
+                todo.addAll(List.of(k.getChildren()));
+            }
+        }
+        throw new AssertionError("no button " + label);
     }
 
     @Test

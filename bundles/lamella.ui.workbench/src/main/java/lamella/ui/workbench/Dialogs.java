@@ -59,6 +59,48 @@ final class Dialogs {
         return answer[0] == null || answer[0].isEmpty() ? null : answer[0];
     }
 
+    /**
+     * A question with the action's own label on its button and Cancel beside it (Escape cancels too); true when
+     * the action was chosen. A window of Lamella's own rather than the system's message box, so that its buttons
+     * answer to the same events as every other control.
+     */
+    static boolean confirm(Shell parent, String title, String question, String action) {
+        Shell d = new Shell(parent, SWT.DIALOG_TRIM | SWT.APPLICATION_MODAL);
+        d.setText(title);
+        GridLayout layout = new GridLayout(2, false);
+        layout.marginWidth = 16;
+        layout.marginHeight = 14;
+        layout.verticalSpacing = 14;
+        d.setLayout(layout);
+        Label text = new Label(d, SWT.WRAP);
+        text.setText(question);
+        GridData td = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        td.widthHint = 420;
+        text.setLayoutData(td);
+        boolean[] chosen = {false};
+        Button yes = new Button(d, SWT.PUSH);
+        yes.setText(action);
+        yes.setLayoutData(new GridData(SWT.END, SWT.CENTER, true, false));
+        Button cancel = new Button(d, SWT.PUSH);
+        cancel.setText("Cancel");
+        yes.addListener(SWT.Selection, e -> {
+            chosen[0] = true;
+            d.close();
+        });
+        cancel.addListener(SWT.Selection, e -> d.close());
+        d.setDefaultButton(cancel);
+        d.pack();
+        centre(d, parent);
+        d.open();
+        cancel.setFocus();
+        while (!d.isDisposed()) {
+            if (!d.getDisplay().readAndDispatch()) {
+                d.getDisplay().sleep();
+            }
+        }
+        return chosen[0];
+    }
+
     static void tell(Shell parent, String title, String text, int icon) {
         MessageBox box = new MessageBox(parent, icon | SWT.OK);
         box.setText(title);

@@ -102,10 +102,7 @@ final class ProjectSession {
         }
         try {
             Path folder = of != null && of.getParent() != null ? of.getParent() : user.root();
-            Project restored = Project.of(Files.readString(copy, StandardCharsets.UTF_8), folder, reader);
-            // Setting a block to itself marks the restored copy unsaved, so closing asks before losing it again.
-            restored.setBlock("geometry", (ObjectNode) restored.tree().path("geometry"));
-            replace(restored);
+            replace(Project.recovered(Files.readString(copy, StandardCharsets.UTF_8), folder, reader));
             messages.info("Restored the unsaved changes of " + about + ".");
         } catch (IOException | RuntimeException e) {
             messages.error("Could not restore the recovery copy " + copy, e);

@@ -30,6 +30,9 @@ final class StatusLine {
     }
 
     void showProject(Project p) {
+        if (bar.isDisposed()) {
+            return;
+        }
         String state = p.dirty() ? "unsaved changes" : p.file().isPresent() ? "saved" : "not saved yet";
         if (p.problem().isPresent()) {
             validity.setForeground(bar.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
@@ -46,6 +49,9 @@ final class StatusLine {
     }
 
     void showWork(String summary) {
+        if (bar.isDisposed()) {
+            return;
+        }
         work.setText(summary.isEmpty() ? "No background work" : "Running: " + summary);
         bar.layout();
     }

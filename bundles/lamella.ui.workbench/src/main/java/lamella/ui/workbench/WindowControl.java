@@ -13,9 +13,17 @@ import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.graphics.ImageData;
 import org.eclipse.swt.graphics.ImageLoader;
 import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Group;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 
 /**
@@ -24,7 +32,11 @@ import org.eclipse.swt.widgets.Text;
  * {@code panels}, {@code placements}, {@code move ID TARGET_ID TABS|LEFT|RIGHT|TOP|BOTTOM}, {@code view-menu},
  * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code save-as PATH}, {@code status},
  * {@code title}, {@code size W H}, {@code screenshot PATH}, {@code messages}, {@code first-paint-ms},
- * {@code close}. A failure answers {@code error: …}.
+ * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
+ * {@code key ctrl+shift+z}; controls found by what they show: {@code press LABEL} (without waiting, so that a dialog
+ * it opens can be answered), {@code dialog}, {@code dialog-press LABEL}, {@code table HEADING},
+ * {@code table-select HEADING | ROW}, {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
 
@@ -97,12 +109,195 @@ final class WindowControl implements Function<String, String> {
                 long painted = window.firstPaintNanos();
                 return painted == 0 ? "not painted" : Long.toString(TimeUnit.NANOSECONDS.toMillis(painted
                         - startedNanos));
+            case "edit-menu":
+                return String.join("\n", window.menus().editLabels());
+            case "undo":
+            case "redo":
+                window.menus().chooseEdit(w[0].equals("undo"));
+                return window.menus().editLabels().get(0);
+            case "key":
+                return keys(w[1]);
+            case "press":
+                return press(rest(w, 1));
+            case "dialog":
+                return WidgetFinder.dialog(window.shell()).map(WindowControl::describe).orElse("none");
+            case "dialog-press":
+                return dialogPress(rest(w, 1));
+            case "table":
+                return table(rest(w, 1));
+            case "table-select":
+                return tableSelect(parts(w));
+            case "choose":
+                return choose(parts(w));
+            case "field":
+                return field(parts(w));
+            case "fields":
+                return fields(rest(w, 1));
             case "close":
                 window.shell().close();
                 return window.closed() ? "closed" : "still open";
             default:
                 return "error: unknown command '" + w[0] + "'";
         }
+    }
+
+    /** Presses keys through the system's input queue, as the keyboard would: {@code ctrl+z}, {@code ctrl+shift+z}. */
+    private String keys(String chord) {
+        Display d = window.display();
+        Shell shell = window.shell();
+        // Without a window manager the keyboard follows the pointer: bring both to the window first.
+        org.eclipse.swt.widgets.Event move = new org.eclipse.swt.widgets.Event();
+        move.type = SWT.MouseMove;
+        Rectangle b = shell.getBounds();
+        move.x = b.x + b.width / 2;
+        move.y = b.y + b.height / 2;
+        d.post(move);
+        shell.forceActive();
+        settle(150);
+        List<String> parts = List.of(chord.toLowerCase(java.util.Locale.ROOT).split("\\+"));
+        List<Integer> modifiers = new java.util.ArrayList<>();
+        for (String m : parts.subList(0, parts.size() - 1)) {
+            modifiers.add(switch (m) {
+                case "ctrl" -> SWT.CTRL;
+                case "shift" -> SWT.SHIFT;
+                case "alt" -> SWT.ALT;
+                default -> throw new IllegalArgumentException("unknown modifier '" + m + "'");
+            });
+        }
+        char key = parts.get(parts.size() - 1).charAt(0);
+        for (int m : modifiers) {
+            post(d, SWT.KeyDown, m, '\0');
+        }
+        post(d, SWT.KeyDown, 0, key);
+        post(d, SWT.KeyUp, 0, key);
+        for (int i = modifiers.size() - 1; i >= 0; i--) {
+            post(d, SWT.KeyUp, modifiers.get(i), '\0');
+        }
+        settle(300);
+        return "pressed " + chord;
+    }
+
+    private static void post(Display d, int type, int keyCode, char character) {
+        org.eclipse.swt.widgets.Event e = new org.eclipse.swt.widgets.Event();
+        e.type = type;
+        e.keyCode = keyCode != 0 ? keyCode : character;
+        e.character = character;
+        if (!d.post(e)) {
+            throw new IllegalStateException("the display refused a posted key event");
+        }
+    }
+
+    private String press(String label) {
+        Shell target = WidgetFinder.dialog(window.shell()).orElse(window.shell());
+        Button b = WidgetFinder.button(target, label).filter(Button::isEnabled)
+                .orElseThrow(() -> new IllegalArgumentException("no enabled button '" + label + "' in view"));
+        window.display().asyncExec(() -> {
+            if (!b.isDisposed()) {
+                b.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+            }
+        });
+        return "pressed";
+    }
+
+    private String dialogPress(String label) {
+        Shell dialog = WidgetFinder.dialog(window.shell())
+                .orElseThrow(() -> new IllegalStateException("no dialog is open"));
+        Button b = WidgetFinder.button(dialog, label)
+                .orElseThrow(() -> new IllegalArgumentException("no button '" + label + "' in " + describe(dialog)));
+        b.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        settle(100);
+        return "pressed";
+    }
+
+    private static String describe(Shell dialog) {
+        return dialog.getText() + ": " + WidgetFinder.visible(dialog).stream()
+                .map(c -> c instanceof Label l ? l.getText() : c instanceof Button b ? "[" + b.getText() + "]" : "")
+                .filter(t -> !t.isEmpty()).collect(Collectors.joining(" "));
+    }
+
+    private String table(String heading) {
+        Table t = WidgetFinder.tableWithColumn(window.shell(), heading)
+                .orElseThrow(() -> new IllegalArgumentException("no table with a column '" + heading + "' in view"));
+        List<String> rows = new java.util.ArrayList<>();
+        rows.add(Arrays.stream(t.getColumns()).map(TableColumn::getText).collect(Collectors.joining("\t")));
+        for (TableItem item : t.getItems()) {
+            List<String> cells = new java.util.ArrayList<>();
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                cells.add(item.getText(c));
+            }
+            rows.add(String.join("\t", cells));
+        }
+        return String.join("\n", rows);
+    }
+
+    private String tableSelect(List<String> args) {
+        Table t = WidgetFinder.tableWithColumn(window.shell(), args.get(0))
+                .orElseThrow(() -> new IllegalArgumentException("no table with a column '" + args.get(0) + "'"));
+        int row = Integer.parseInt(args.get(1));
+        t.setSelection(row);
+        t.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        return "selected " + t.getItem(row).getText(0);
+    }
+
+    private String choose(List<String> args) {
+        Group g = WidgetFinder.group(window.shell(), args.get(0))
+                .orElseThrow(() -> new IllegalArgumentException("no group '" + args.get(0) + "' in view"));
+        Combo c = WidgetFinder.first(g, Combo.class, x -> true)
+                .orElseThrow(() -> new IllegalArgumentException("no chooser in '" + args.get(0) + "'"));
+        int i = Arrays.asList(c.getItems()).indexOf(args.get(1));
+        if (i < 0) {
+            throw new IllegalArgumentException("'" + args.get(1) + "' is not among " + Arrays.toString(c.getItems()));
+        }
+        c.select(i);
+        c.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        settle(100);
+        return "chosen " + c.getText();
+    }
+
+    /** Types into the field after the label that starts with the given words, and presses Enter. */
+    private String field(List<String> args) {
+        Group g = WidgetFinder.group(window.shell(), args.get(0))
+                .orElseThrow(() -> new IllegalArgumentException("no group '" + args.get(0) + "' in view"));
+        List<Control> controls = WidgetFinder.visible(g);
+        for (int i = 0; i < controls.size() - 1; i++) {
+            if (controls.get(i) instanceof Label l && l.getText().startsWith(args.get(1))
+                    && controls.get(i + 1) instanceof Text t) {
+                t.setFocus();
+                t.setText(args.get(2));
+                t.notifyListeners(SWT.DefaultSelection, new org.eclipse.swt.widgets.Event());
+                settle(100);
+                return t.getText();
+            }
+        }
+        throw new IllegalArgumentException("no field '" + args.get(1) + "' in '" + args.get(0) + "'");
+    }
+
+    /** Each labelled field of a group as "label text = value". */
+    private String fields(String title) {
+        Group g = WidgetFinder.group(window.shell(), title)
+                .orElseThrow(() -> new IllegalArgumentException("no group '" + title + "' in view"));
+        List<Control> controls = WidgetFinder.visible(g);
+        List<String> out = new java.util.ArrayList<>();
+        for (int i = 0; i < controls.size() - 1; i++) {
+            if (controls.get(i) instanceof Label l && controls.get(i + 1) instanceof Text t) {
+                out.add(l.getText() + " = " + t.getText());
+            }
+        }
+        return String.join("\n", out);
+    }
+
+    private void settle(long ms) {
+        Display d = window.display();
+        long until = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(ms);
+        while (System.nanoTime() < until) {
+            if (!d.readAndDispatch()) {
+                sleep();
+            }
+        }
+    }
+
+    private static List<String> parts(String[] w) {
+        return Arrays.stream(rest(w, 1).split("\\s*\\|\\s*")).toList();
     }
 
     /** Opens the safety notice through the Help menu, reads what it says, and closes it again. */
@@ -127,12 +322,7 @@ final class WindowControl implements Function<String, String> {
         Display d = window.display();
         Shell shell = window.shell();
         shell.layout(true, true);
-        long until = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(SETTLE_MS);
-        while (System.nanoTime() < until) {
-            if (!d.readAndDispatch()) {
-                sleep();
-            }
-        }
+        settle(SETTLE_MS);
         Rectangle b = shell.getBounds();
         Image image = new Image(d, b.width, b.height);
         GC gc = new GC(d);

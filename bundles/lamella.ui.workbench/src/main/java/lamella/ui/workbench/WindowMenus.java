@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.List;
+import lamella.ui.api.Project;
 import lamella.ui.api.WorkbenchPanel;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Event;
@@ -12,13 +13,18 @@ import org.eclipse.swt.widgets.Menu;
 import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Shell;
 
-/** The menu bar: File, View and Help. Lists that change (panels, recent projects, arrangements) fill on opening. */
+/**
+ * The menu bar: File, Edit, View and Help. Lists that change (panels, recent projects, arrangements) fill on opening;
+ * Undo and Redo follow the project's history as it changes, so that their names and keys are always current.
+ */
 final class WindowMenus {
 
     private final WorkbenchWindow window;
     private final Shell shell;
     private Menu view;
     private Menu help;
+    private MenuItem undo;
+    private MenuItem redo;
 
     WindowMenus(WorkbenchWindow window) {
         this.window = window;
@@ -28,6 +34,7 @@ final class WindowMenus {
     void install() {
         Menu bar = new Menu(shell, SWT.BAR);
         file(bar);
+        edit(bar);
         view = cascade(bar, "&View");
         view.addListener(SWT.Show, e -> fillView());
         fillView();
@@ -35,6 +42,57 @@ final class WindowMenus {
         item(help, "&Laser and heater safety…", 0, () -> SafetyNotice.open(shell));
         item(help, "&About Lamella", 0, () -> AboutNotice.open(shell));
         shell.setMenuBar(bar);
+    }
+
+    /** Names Undo and Redo after the edits they would take back or make again, or disables them. */
+    void projectChanged() {
+        if (undo == null || undo.isDisposed()) {
+            return;
+        }
+        Project p = window.project();
+        undo.setText(label("&Undo", p.undoName()));
+        undo.setEnabled(p.undoName().isPresent());
+        redo.setText(label("&Redo", p.redoName()));
+        redo.setEnabled(p.redoName().isPresent());
+    }
+
+    /** The Edit menu's labels as a user reads them, with their state: "Undo remove layer 'film' (enabled)". */
+    List<String> editLabels() {
+        projectChanged();
+        return java.util.Arrays.stream(undo.getParent().getItems()).filter(i -> (i.getStyle() & SWT.SEPARATOR) == 0)
+                .map(i -> WidgetFinder.plain(i.getText()) + (i.isEnabled() ? "" : " (disabled)")).toList();
+    }
+
+    /** Chooses Undo or Redo as the menu would. */
+    void chooseEdit(boolean undoIt) {
+        MenuItem i = undoIt ? undo : redo;
+        if (i.isEnabled()) {
+            i.notifyListeners(SWT.Selection, new Event());
+        }
+    }
+
+    private static String label(String verb, java.util.Optional<String> name) {
+        return verb + name.map(n -> " " + n.replace("&", "&&")).orElse("");
+    }
+
+    private void edit(Menu bar) {
+        Menu edit = cascade(bar, "&Edit");
+        undo = new MenuItem(edit, SWT.PUSH);
+        undo.setAccelerator(SWT.MOD1 | 'Z');
+        undo.addListener(SWT.Selection, e -> window.project().undo());
+        redo = new MenuItem(edit, SWT.PUSH);
+        redo.setAccelerator(SWT.MOD1 | SWT.SHIFT | 'Z');
+        redo.addListener(SWT.Selection, e -> window.project().redo());
+        // Ctrl+Y is the other usual key for redo; a menu item takes one accelerator, so the window listens for it.
+        shell.getDisplay().addFilter(SWT.KeyDown, e -> {
+            boolean ctrlY = (e.stateMask & SWT.MODIFIER_MASK) == SWT.MOD1 && (e.keyCode == 'y' || e.keyCode == 'Y');
+            if (ctrlY && !shell.isDisposed() && e.widget instanceof org.eclipse.swt.widgets.Control c
+                    && c.getShell() == shell) {
+                e.doit = false;
+                window.project().redo();
+            }
+        });
+        projectChanged();
     }
 
     /** The View menu's item for a panel, as a user would find it. */

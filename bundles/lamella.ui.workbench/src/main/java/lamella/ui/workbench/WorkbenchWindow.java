@@ -272,6 +272,11 @@ final class WorkbenchWindow implements Workbench {
     }
 
     @Override
+    public boolean confirm(String title, String question, String action) {
+        return Dialogs.confirm(shell, title, question, action);
+    }
+
+    @Override
     public void show(String panelId) {
         if (!shelf.isLive(panelId)) {
             messages.warning("There is no panel '" + panelId + "' (its bundle is not installed or not started).");
@@ -333,6 +338,7 @@ final class WorkbenchWindow implements Workbench {
         if (!shell.isDisposed()) {
             shell.setText("Lamella — " + session.name() + (session.project().dirty() ? " •" : ""));
             status.showProject(session.project());
+            menus.projectChanged();
         }
     }
 
