@@ -67,7 +67,7 @@ class MaterialsCommandTest {
         Run r = run("show", "Si");
         assertEquals(Command.OK, r.status(), r.err());
         for (String s : List.of("silicon — Silicon", "Lamella shipped materials (shipped)", "v1; not reviewed",
-                "k_w_mk", "100 K: 884", "1000 K: 31.2", "uncertainty ±5 %", "Table A.1 (from memory)",
+                "k_w_mk", "100 K: 884", "1000 K: 31.2", "uncertainty ±5 %", "Table A.1 (6th ed., Wiley 2007",
                 "heat_capacity_j_m3k — derived", "at 300 K: 1658960")) {
             assertTrue(r.out().contains(s), "expected '" + s + "' in:\n" + r.out());
         }
