@@ -17,18 +17,23 @@ public final class Units {
             Map.entry("_s", "s"),
             Map.entry("_k", "K"),
             Map.entry("_deg", "°"),
+            Map.entry("_w", "W"),
             Map.entry("_k_per_w", "K/W"),
             Map.entry("_k_m_per_w", "K m/W"));
 
     private Units() {
     }
 
-    /** The unit of a key such as {@code pump_radius_m} or {@code conductance_below_w_m2k}; empty if none. */
+    /**
+     * The unit of a key such as {@code pump_radius_m} or {@code conductance_below_w_m2k} (a key that is its unit
+     * alone, such as {@code k_per_w}, counts too); empty if none.
+     */
     public static String ofKey(String key) {
         String best = "";
         int bestLength = 0;
+        String k = "_" + key;
         for (Map.Entry<String, String> e : SUFFIXES) {
-            if (key.endsWith(e.getKey()) && e.getKey().length() > bestLength) {
+            if (k.endsWith(e.getKey()) && e.getKey().length() > bestLength) {
                 best = e.getValue();
                 bestLength = e.getKey().length();
             }

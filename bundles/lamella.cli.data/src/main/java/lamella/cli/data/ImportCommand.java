@@ -4,13 +4,18 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
 import lamella.api.AtomicText;
+import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
+import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.data.DataImporter;
+import lamella.api.data.DatasetSettings;
 import lamella.api.data.Dataset;
 import lamella.api.data.SignalNames;
+import lamella.api.data.StatedSettings;
 import lamella.conditioning.ConditionedTable;
 import lamella.conditioning.Conditioner;
 import lamella.conditioning.ConditioningOptions;
@@ -27,6 +32,8 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 public final class ImportCommand implements Command {
 
     private final LiveImporters importers = new LiveImporters();
+    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeImporter")
@@ -36,6 +43,26 @@ public final class ImportCommand implements Command {
 
     void removeImporter(DataImporter i) {
         importers.remove(i);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeTechnique")
+    void addTechnique(Technique t) {
+        techniques.add(t);
+    }
+
+    void removeTechnique(Technique t) {
+        techniques.remove(t);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeGeometry")
+    void addGeometry(HeatingGeometry g) {
+        geometries.add(g);
+    }
+
+    void removeGeometry(HeatingGeometry g) {
+        geometries.remove(g);
     }
 
     @Override
@@ -89,9 +116,10 @@ public final class ImportCommand implements Command {
         Path file = io.resolve(request.file());
         ConditionedTable table;
         DataImporter importer;
+        Dataset data;
         try {
             importer = importers.choose(file, request.format());
-            Dataset data = read(importer, file);
+            data = read(importer, file);
             if (request.phaseRequested() && data.xColumn().equals(SignalNames.FREQUENCY_HZ)) {
                 throw new InputException(file, null, -1, "--detection-phase, --phase-as-recorded and --step-window"
                         + " are for TDTR delay data; this file is over frequency (use --reference for FDTR)");
@@ -128,7 +156,32 @@ public final class ImportCommand implements Command {
         for (String line : table.report().lines()) {
             io.err().println("  " + line);
         }
+        settings(data, io);
         return OK;
+    }
+
+    /**
+     * What the file states and where a fit dataset takes it, in the words of the workbench's import preview (the
+     * same mapping); with no case at hand, only the file's own statements count.
+     */
+    private void settings(Dataset data, CommandIO io) {
+        StatedSettings stated = StatedSettings.of(data);
+        DatasetSettings s = DatasetSettings.of(stated, data.xColumn(),
+                new DatasetSettings.Context(techniques, geometries, null, null), DatasetSettings.Choices.none());
+        if (stated.numbers().isEmpty() && stated.technique().isEmpty()) {
+            io.err().println("settings the file states: none; a fit dataset of this file takes the case's"
+                    + " measurement and geometry");
+            stated.unreadable().forEach(n -> io.err().println("  note: " + n));
+        } else {
+            io.err().println("settings the file states, as a fit dataset's blocks take them:");
+            s.settings().forEach(x -> io.err().println("  " + x.describe()));
+            s.notes().forEach(n -> io.err().println("  note: " + n));
+            s.problems().forEach(p -> io.err().println("  still needed: " + p));
+        }
+        if (!stated.other().isEmpty()) {
+            io.err().println("also in the header:");
+        }
+        stated.other().forEach((k, v) -> io.err().println("  " + k + ": " + v));
     }
 
     /** Reads with a plug-in, which may be faulty: anything but bad input is its defect, not the user's. */

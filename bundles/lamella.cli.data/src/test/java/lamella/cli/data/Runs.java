@@ -9,7 +9,12 @@ import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.data.DataImporter;
 import lamella.io.delimited.DelimitedImporter;
+import lamella.geometry.gaussian.GaussianBeams;
+import lamella.geometry.line.LineHeater;
 import lamella.io.exchange.ExchangeImporter;
+import lamella.technique.fdtr.FrequencyDomain;
+import lamella.technique.tdtr.TimeDomain;
+import lamella.technique.threeomega.ThreeOmega;
 
 /** Runs the data commands as Declarative Services would wire them, with the shipped importers, in memory. */
 final class Runs {
@@ -28,6 +33,8 @@ final class Runs {
     static ImportCommand importCommand() {
         ImportCommand c = new ImportCommand();
         shipped().forEach(c::addImporter);
+        List.of(new TimeDomain(), new FrequencyDomain(), new ThreeOmega()).forEach(c::addTechnique);
+        List.of(new GaussianBeams(), new LineHeater()).forEach(c::addGeometry);
         return c;
     }
 
