@@ -12,8 +12,10 @@ import lamella.api.Block;
  * @param signal      the signal column to fit, or null for the technique's usual one
  * @param geometry    the dataset's own geometry block, or null to use the case's
  * @param measurement the dataset's own measurement block, or null to use the case's
+ * @param rows        which of its rows are fitted ({@code x_range}, {@code exclude})
+ * @param weighting   its own {@code weights}, or null for the fit block's
  * @param path        JSON path, {@code fit.datasets[i]}
  */
 record DatasetSpec(int index, String given, Path file, String signal, Block geometry, Block measurement,
-                   String path) {
+                   RowSelection rows, FitSpec.Weighting weighting, String path) {
 }

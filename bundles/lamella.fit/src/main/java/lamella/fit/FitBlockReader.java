@@ -21,7 +21,8 @@ final class FitBlockReader {
 
     static final Set<String> FIT_KEYS = Set.of("datasets", "free", "uncertain", "weights", "multistart",
             "monte_carlo", "seed");
-    static final Set<String> DATASET_KEYS = Set.of("data", "signal", "measurement", "geometry");
+    static final Set<String> DATASET_KEYS = Set.of("data", "signal", "measurement", "geometry", "x_range", "exclude",
+            "weights");
     static final Set<String> REF_KEYS = Set.of("layer", "property", "geometry", "measurement", "dataset");
     static final Set<String> FREE_KEYS = union(REF_KEYS, Set.of("initial", "min", "max"));
     static final Set<String> UNCERTAIN_KEYS = union(REF_KEYS, Set.of("sigma", "sigma_relative"));
@@ -60,17 +61,7 @@ final class FitBlockReader {
             double v = value(base, datasets, ref, e.path());
             uncertain.add(new UncertainInput(ref, v, sigma(e, v), e.path()));
         }
-        FitSpec.Weighting weighting = FitSpec.Weighting.AUTO;
-        if (fit.has("weights")) {
-            String w = fit.requireString("weights");
-            weighting = switch (w) {
-                case "auto" -> FitSpec.Weighting.AUTO;
-                case "data" -> FitSpec.Weighting.DATA;
-                case "residuals" -> FitSpec.Weighting.RESIDUALS;
-                default -> throw InputException.at(fit.pathOf("weights"), "unknown weighting '" + w
-                        + "'; expected auto, data or residuals");
-            };
-        }
+        FitSpec.Weighting weighting = fit.has("weights") ? weighting(fit) : FitSpec.Weighting.AUTO;
         return new FitSpec(datasets, free, uncertain, weighting, count(fit, "multistart"), count(fit, "monte_carlo"),
                 fit.has("seed") ? (long) count(fit, "seed") : 1L);
     }
@@ -83,9 +74,52 @@ final class FitBlockReader {
             String data = d.requireString("data");
             String signal = d.has("signal") ? d.requireString("signal") : null;
             out.add(new DatasetSpec(out.size(), data, folder.resolve(data).normalize(), signal,
-                    optionalObject(d, "geometry"), optionalObject(d, "measurement"), d.path()));
+                    optionalObject(d, "geometry"), optionalObject(d, "measurement"), rows(d),
+                    d.has("weights") ? weighting(d) : null, d.path()));
         }
         return out;
+    }
+
+    private static FitSpec.Weighting weighting(Block b) throws InputException {
+        String w = b.requireString("weights");
+        return switch (w) {
+            case "auto" -> FitSpec.Weighting.AUTO;
+            case "data" -> FitSpec.Weighting.DATA;
+            case "residuals" -> FitSpec.Weighting.RESIDUALS;
+            default -> throw InputException.at(b.pathOf("weights"), "unknown weighting '" + w
+                    + "'; expected auto, data or residuals");
+        };
+    }
+
+    /** A dataset's {@code x_range} [from, to] and {@code exclude} [[from, to], …], x in the data's SI unit. */
+    private static RowSelection rows(Block d) throws InputException {
+        double[] range = d.has("x_range") ? range(d.get("x_range"), d.pathOf("x_range")) : null;
+        List<double[]> excluded = new ArrayList<>();
+        Object ex = d.get("exclude");
+        if (ex != null) {
+            if (!(ex instanceof List<?> list)) {
+                throw InputException.at(d.pathOf("exclude"), "expected a list of [from, to] ranges, such as"
+                        + " [[-1e-9, 1e-10]], got " + Block.describe(ex));
+            }
+            for (int i = 0; i < list.size(); i++) {
+                excluded.add(range(list.get(i), d.pathOf("exclude") + "[" + i + "]"));
+            }
+        }
+        return range == null && excluded.isEmpty() ? RowSelection.ALL : new RowSelection(
+                range == null ? Double.NEGATIVE_INFINITY : range[0],
+                range == null ? Double.POSITIVE_INFINITY : range[1], excluded);
+    }
+
+    private static double[] range(Object v, String path) throws InputException {
+        if (!(v instanceof List<?> l) || l.size() != 2 || !(l.get(0) instanceof Double a)
+                || !(l.get(1) instanceof Double b)) {
+            throw InputException.at(path, "expected [from, to]: two numbers in the data's x unit (s or Hz), got "
+                    + Block.describe(v));
+        }
+        if (!(a < b)) {
+            throw InputException.at(path, "from (" + a + ") must be less than to (" + b + ")");
+        }
+        return new double[] {a, b};
     }
 
     private static ParameterRef ref(Block e, List<DatasetSpec> datasets) throws InputException {

@@ -80,22 +80,32 @@ final class FitProblem {
                         + "; the file has " + String.join(", ", table.names()));
             }
         }
+        if (d.weighting() != null) {
+            weighting = d.weighting();
+        }
+        boolean[] keep = d.rows().rows(table, xColumn);
+        double[] x = RowSelection.select(table.column(xColumn), keep);
+        if (x.length == 0) {
+            throw InputException.at(d.path(), "no row of " + d.given() + " is left to fit: its " + table.rows()
+                    + " rows are all outside x_range, inside an exclude range, or marked excluded or outlier");
+        }
         double[] sigma = null;
         String sigmaColumn = "sigma_" + signal;
         if (weighting != FitSpec.Weighting.RESIDUALS && table.has(sigmaColumn)) {
-            sigma = table.column(sigmaColumn);
-            for (int i = 0; i < sigma.length; i++) {
-                if (!(sigma[i] > 0)) {
+            double[] all = table.column(sigmaColumn);
+            for (int i = 0; i < all.length; i++) {
+                if (keep[i] && !(all[i] > 0)) {
                     throw new InputException(d.file(), null, -1, "column '" + sigmaColumn + "', row " + (i + 1)
-                            + ": a standard deviation must be positive, got " + sigma[i]);
+                            + ": a standard deviation must be positive, got " + all[i]);
                 }
             }
+            sigma = RowSelection.select(all, keep);
         } else if (weighting == FitSpec.Weighting.DATA) {
             throw new InputException(d.file(), null, 1, "the fit asks for weights from the data, but the file has"
                     + " no column '" + sigmaColumn + "'");
         }
-        return new PreparedDataset(d, model, t.type(), xColumn, signal, table.column(xColumn), table.column(signal),
-                sigma);
+        return new PreparedDataset(d, model, t.type(), xColumn, signal, x,
+                RowSelection.select(table.column(signal), keep), sigma);
     }
 
     /** Fails early, with the case's words, when the model cannot be evaluated at the starting point. */
