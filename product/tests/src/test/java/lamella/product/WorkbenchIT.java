@@ -198,6 +198,17 @@ class WorkbenchIT {
     }
 
     @Test
+    void theStatusLineSaysWhatIsMissingAndWhere() throws Exception {
+        assertEquals("ok", ask("front setup"));
+        assertEquals("chosen ring", ask("choose Heating geometry | ring"));
+        String status = ask("status");
+        assertTrue(status.startsWith("Case invalid at geometry.ring_radius_m: "), status);
+        ask("screenshot " + SHOTS.resolve("ring-without-radius.png"));
+        ask("undo");
+        assertTrue(ask("status").startsWith("Case valid"), ask("status"));
+    }
+
+    @Test
     void theWorkbenchPaintsQuickly() {
         String ms = ask("first-paint-ms");
         System.out.println("workbench: first paint " + ms + " ms after the display was created");

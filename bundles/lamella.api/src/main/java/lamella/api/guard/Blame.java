@@ -1,5 +1,6 @@
 package lamella.api.guard;
 
+import java.util.concurrent.CancellationException;
 import java.util.function.Supplier;
 import lamella.api.ModelEvaluationException;
 
@@ -15,11 +16,15 @@ public record Blame(String subject, PluginOrigin origin) {
     /**
      * A {@link ModelEvaluationException} is a plug-in saying that its model cannot be evaluated: its message is kept
      * and the plug-in named after it. Anything else it throws is a fault in it. Linkage errors count: a plug-in built
-     * against another Lamella version fails with NoSuchMethodError or AbstractMethodError.
+     * against another Lamella version fails with NoSuchMethodError or AbstractMethodError. A
+     * {@link CancellationException} is no fault: the caller asked the work to stop, and it passes unchanged.
      */
-    public PluginFault fault(Throwable thrown) {
+    public RuntimeException fault(Throwable thrown) {
         if (thrown instanceof PluginFault already) {
             return already;
+        }
+        if (thrown instanceof CancellationException stop) {
+            return stop;
         }
         if (thrown instanceof ModelEvaluationException e) {
             return new PluginFault(e.getMessage() + " (" + this + ")", e);

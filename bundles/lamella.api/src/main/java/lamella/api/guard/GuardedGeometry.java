@@ -1,6 +1,7 @@
 package lamella.api.guard;
 
 import java.util.List;
+import java.util.concurrent.CancellationException;
 import lamella.api.GeometryModel;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
@@ -64,6 +65,11 @@ public final class GuardedGeometry implements HeatingGeometry {
             throw blame.failed("bind() returned null", null);
         }
         return (frequencyHz, out) -> {
+            if (Thread.currentThread().isInterrupted()) {
+                // The caller's thread was asked to stop: every geometry stops between frequencies, whether or not
+                // its own code looks at the interrupt.
+                throw new CancellationException("the model evaluation was cancelled");
+            }
             try {
                 model.at(frequencyHz, out);
             } catch (RuntimeException | LinkageError e) {

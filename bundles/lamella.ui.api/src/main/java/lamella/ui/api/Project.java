@@ -86,12 +86,31 @@ public final class Project {
         revalidate();
     }
 
-    /** Opens a case file. */
+    /**
+     * Opens a case file. A case with a problem opens too, to be mended in the workbench, with the problem in
+     * {@link #problem()}; only a file that is not a JSON object at all is refused, with the reader's words.
+     */
     public static Project open(Path file, CaseReader reader) throws IOException, InputException {
         Path abs = file.toAbsolutePath().normalize();
-        reader.read(abs);
-        JsonNode tree = JSON.readTree(Files.readString(abs, StandardCharsets.UTF_8));
-        return new Project((ObjectNode) tree, true, abs, abs.getParent(), reader);
+        InputException invalid = null;
+        try {
+            reader.read(abs);
+        } catch (InputException e) {
+            invalid = e;
+        }
+        JsonNode tree;
+        try {
+            tree = JSON.readTree(Files.readString(abs, StandardCharsets.UTF_8));
+        } catch (IOException e) {
+            if (invalid != null) {
+                throw invalid;
+            }
+            throw e;
+        }
+        if (!(tree instanceof ObjectNode o)) {
+            throw invalid != null ? invalid : new InputException(abs, null, -1, "a case file holds a JSON object");
+        }
+        return new Project(o, true, abs, abs.getParent(), reader);
     }
 
     /** A new, unsaved project from case-file text; relative data paths resolve against folder. */

@@ -43,7 +43,24 @@ public interface Workbench {
      * Runs work off the UI thread; onDone receives its result on the UI thread, unless it was cancelled or failed
      * (a failure goes to {@link #messages()} with the label).
      */
-    <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone);
+    default <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone) {
+        return start(label, work, onDone::accept);
+    }
+
+    /**
+     * Runs work off the UI thread and tells what became of it on the UI thread. {@link Task#cancel()} sets the
+     * work's {@link lamella.api.fit.Progress#cancelled()} and interrupts its thread, which is how the engine learns
+     * to stop ({@link java.util.concurrent.CancellationException}); a failure goes to {@link #messages()} in words,
+     * with the label, and to {@link WorkResult#failed}.
+     */
+    <T> Task start(String label, BackgroundWork<T> work, WorkResult<T> result);
+
+    /**
+     * Tells the window's status line what is wrong in a panel ("Signal" · "the model cannot be evaluated: …"), or
+     * that it is fine again (problem null), so that the status line never says more than is true.
+     */
+    default void showProblem(String where, String problem) {
+    }
 
     /** Brings a panel to the front, opening it if it is closed. */
     void show(String panelId);

@@ -19,6 +19,7 @@ import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
 import lamella.ui.api.Task;
 import lamella.ui.api.Workbench;
+import lamella.ui.api.WorkResult;
 import lamella.ui.charts.ChartCanvas;
 import lamella.ui.charts.PlotLook;
 import org.eclipse.swt.SWT;
@@ -183,7 +184,7 @@ final class FitView implements PanelView {
             return;
         }
         if (project.problem().isPresent()) {
-            status.show("Fix the case first: " + project.problem().get().getMessage(), StatusLine.Tone.PROBLEM);
+            status.show("Fix the case first: " + Words.problem(project.problem().get()), StatusLine.Tone.PROBLEM);
             return;
         }
         CaseDocument doc = project.current().orElseThrow();
@@ -193,39 +194,47 @@ final class FitView implements PanelView {
         bar.setSelection(0);
         status.show("Fitting…", StatusLine.Tone.PLAIN);
         long t0 = System.nanoTime();
-        running = workbench.background("Fit", p -> fitter.fit(doc, settings,
-                new ProgressRelay(p, root.getDisplay(), this::progress)), outcome -> {
-                    running = null;
-                    if (root.isDisposed()) {
-                        return;
+        running = workbench.start("Fit", p -> fitter.fit(doc, settings,
+                new ProgressRelay(p, root.getDisplay(), this::progress)), new WorkResult<FitOutcome>() {
+                    @Override
+                    public void done(FitOutcome outcome) {
+                        if (ended()) {
+                            bar.setSelection(BAR_STEPS);
+                            project.setLastFit(outcome);
+                            show(outcome);
+                            status.show(summary(outcome, (System.nanoTime() - t0) / 1e9), outcome.warnings()
+                                    .isEmpty() && outcome.converged() ? StatusLine.Tone.PLAIN
+                                    : StatusLine.Tone.CAUTION);
+                        }
                     }
-                    start.setEnabled(true);
-                    cancel.setEnabled(false);
-                    bar.setSelection(BAR_STEPS);
-                    project.setLastFit(outcome);
-                    show(outcome);
-                    status.show(summary(outcome, (System.nanoTime() - t0) / 1e9), outcome.warnings().isEmpty()
-                            && outcome.converged() ? StatusLine.Tone.PLAIN : StatusLine.Tone.CAUTION);
+
+                    @Override
+                    public void failed(String problem, Throwable cause) {
+                        if (ended()) {
+                            bar.setSelection(0);
+                            status.show("The fit failed: " + problem, StatusLine.Tone.PROBLEM);
+                        }
+                    }
+
+                    @Override
+                    public void stopped() {
+                        if (ended()) {
+                            bar.setSelection(0);
+                            status.show("Fit cancelled.", StatusLine.Tone.CAUTION);
+                        }
+                    }
                 });
-        // A failed fit reaches the Messages panel; the buttons come back when the task is over.
-        watch(running);
     }
 
-    private void watch(Task task) {
-        root.getDisplay().timerExec(200, () -> {
-            if (root.isDisposed() || task != running) {
-                return;
-            }
-            if (task.done()) {
-                running = null;
-                start.setEnabled(true);
-                cancel.setEnabled(false);
-                status.show("The fit stopped without a result; the Messages panel says why.",
-                        StatusLine.Tone.PROBLEM);
-                return;
-            }
-            watch(task);
-        });
+    /** The fit is over: the buttons come back; false when the panel is gone. */
+    private boolean ended() {
+        running = null;
+        if (root.isDisposed()) {
+            return false;
+        }
+        start.setEnabled(true);
+        cancel.setEnabled(false);
+        return true;
     }
 
     private void progress(String stage, double fraction) {

@@ -26,6 +26,8 @@ import org.jfree.data.xy.XYSeriesCollection;
  */
 final class SensitivityView implements PanelView {
 
+    static final String WHERE = "the Sensitivity panel";
+
     private final Workbench workbench;
     private final Project project;
     private final Composite root;
@@ -34,6 +36,7 @@ final class SensitivityView implements PanelView {
     private final ChartCanvas canvas;
     private final LatestOnly<Outcome<SensitivityTable>> work;
     private final Project.Listener listener = this::changed;
+    private String lastProblem;
     private SensitivityTable shown;
 
     SensitivityView(Composite parent, Workbench workbench) {
@@ -63,6 +66,7 @@ final class SensitivityView implements PanelView {
     public void close() {
         project.removeListener(listener);
         work.cancel();
+        workbench.showProblem(WHERE, null);
     }
 
     SensitivityTable shown() {
@@ -83,24 +87,64 @@ final class SensitivityView implements PanelView {
 
     private void recompute() {
         FitService fitter = workbench.fitter().orElse(null);
-        CaseDocument doc = project.current().orElse(null);
+        CaseDocument doc = project.problem().isPresent() ? null : project.current().orElse(null);
         if (fitter == null || doc == null) {
+            work.cancel();
+            canvas.setChart(null);
+            shown = null;
             status.show(fitter == null ? "No fitting service is live, so no sensitivities can be computed."
-                    : "The case has a problem: " + project.problem().map(Exception::getMessage).orElse(""),
-                    StatusLine.Tone.PROBLEM);
+                    : "No sensitivities while the case has a problem: " + project.problem().map(Words::problem)
+                    .orElse(""), StatusLine.Tone.PROBLEM);
             return;
         }
         int dataset = picker.selected();
-        status.show("Computing sensitivities…", StatusLine.Tone.PLAIN);
         work.submit(p -> {
             try {
                 return Outcome.of(fitter.sensitivity(doc, dataset, null));
             } catch (InputException e) {
                 return Outcome.failed(e.getMessage());
             } catch (ModelEvaluationException e) {
-                return Outcome.failed("the model cannot be evaluated: " + e.getMessage());
+                return Outcome.failed(e.getMessage());
             }
-        }, this::show);
+        }, new LatestOnly.View<>() {
+            @Override
+            public void done(Outcome<SensitivityTable> o) {
+                show(o);
+            }
+
+            @Override
+            public void problem(String problem) {
+                // Messages has it already, from the background work.
+                lastProblem = problem;
+                failed(problem);
+            }
+
+            @Override
+            public void stopped() {
+                status.show("Stopped: the sensitivities shown are for earlier values; change a value to compute"
+                        + " them again.", StatusLine.Tone.CAUTION);
+            }
+
+            @Override
+            public void slow() {
+                status.show("Computing sensitivities… the plot shown is for the earlier values (Stop, in the"
+                        + " status line, cancels).", StatusLine.Tone.CAUTION);
+            }
+        });
+    }
+
+    private void failed(String problem) {
+        if (root.isDisposed()) {
+            return;
+        }
+        canvas.setChart(null);
+        shown = null;
+        status.show("The sensitivities could not be computed: " + problem, StatusLine.Tone.PROBLEM);
+        if (!problem.equals(lastProblem)) {
+            workbench.messages().error("The sensitivities could not be computed: " + problem, null);
+            lastProblem = problem;
+        }
+        workbench.showProblem(WHERE, "the sensitivities could not be computed: " + problem);
     }
 
     private void show(Outcome<SensitivityTable> o) {
@@ -108,9 +152,11 @@ final class SensitivityView implements PanelView {
             return;
         }
         if (!o.ok()) {
-            status.show(o.problem(), StatusLine.Tone.PROBLEM);
+            failed(o.problem());
             return;
         }
+        lastProblem = null;
+        workbench.showProblem(WHERE, null);
         SensitivityTable t = o.value();
         shown = t;
         XYSeriesCollection set = new XYSeriesCollection();

@@ -121,34 +121,60 @@ final class SetupView implements PanelView {
                     : "a power is positive"), StatusLine.Tone.PROBLEM);
             return;
         }
-        CaseModel model = project.model().orElse(null);
+        CaseModel model = project.problem().isPresent() ? null : project.model().orElse(null);
         if (model == null) {
-            rise.show("The case has a problem: " + project.problem().map(Exception::getMessage).orElse(""),
-                    StatusLine.Tone.PROBLEM);
+            work.cancel();
+            rise.show("No estimate while the case has a problem: " + project.problem().map(Words::problem)
+                    .orElse(""), StatusLine.Tone.PROBLEM);
             return;
         }
         double watts = mw * 1e-3;
-        work.submit(p -> SteadyRise.perWatt(model, workbench.catalog()), o -> {
-            if (root.isDisposed()) {
-                return;
+        work.submit(p -> SteadyRise.perWatt(model, workbench.catalog()), new LatestOnly.View<>() {
+            @Override
+            public void done(Outcome<Double> o) {
+                showRise(o, mw, watts);
             }
-            if (!o.ok()) {
-                rise.show(o.problem(), StatusLine.Tone.CAUTION);
-                return;
+
+            @Override
+            public void problem(String problem) {
+                rise.show("The steady temperature rise could not be estimated: " + problem,
+                        StatusLine.Tone.PROBLEM);
             }
-            double k = o.value() * watts;
-            String text = "Predicted steady temperature rise: " + NumberText.format(k) + " K ("
-                    + NumberText.format(o.value()) + " K/W at 0 Hz × " + NumberText.format(mw) + " mW).";
-            if (k > SteadyRise.WARNING_K) {
-                rise.show(text + " That is large: properties at this temperature may differ from those in the"
-                        + " case; lower the power or model the heated sample.", StatusLine.Tone.PROBLEM);
-            } else if (k > SteadyRise.CAUTION_K) {
-                rise.show(text + " Consider whether the properties still hold at this temperature.",
+
+            @Override
+            public void stopped() {
+                rise.show("Stopped: no estimate for the present values; change a value to estimate again.",
                         StatusLine.Tone.CAUTION);
-            } else {
-                rise.show(text, StatusLine.Tone.PLAIN);
+            }
+
+            @Override
+            public void slow() {
+                rise.show("Estimating the steady temperature rise… (Stop, in the status line, cancels)",
+                        StatusLine.Tone.CAUTION);
             }
         });
+    }
+
+    private void showRise(Outcome<Double> o, double mw, double watts) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (!o.ok()) {
+            rise.show(o.problem(), StatusLine.Tone.CAUTION);
+            return;
+        }
+        double k = o.value() * watts;
+        String text = "Predicted steady temperature rise: " + NumberText.format(k) + " K ("
+                + NumberText.format(o.value()) + " K/W at 0 Hz × " + NumberText.format(mw) + " mW).";
+        if (k > SteadyRise.WARNING_K) {
+            rise.show(text + " That is large: properties at this temperature may differ from those in the"
+                    + " case; lower the power or model the heated sample.", StatusLine.Tone.PROBLEM);
+        } else if (k > SteadyRise.CAUTION_K) {
+            rise.show(text + " Consider whether the properties still hold at this temperature.",
+                    StatusLine.Tone.CAUTION);
+        } else {
+            rise.show(text, StatusLine.Tone.PLAIN);
+        }
     }
 
     /** A chooser of the service type and a field per parameter of one case block. */

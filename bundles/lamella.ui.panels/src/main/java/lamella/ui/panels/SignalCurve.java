@@ -79,7 +79,7 @@ record SignalCurve(String xColumn, String technique, String signal, List<String>
         } catch (InputException e) {
             return Outcome.failed(e.getMessage());
         } catch (ModelEvaluationException e) {
-            return Outcome.failed("the model cannot be evaluated: " + e.getMessage());
+            return Outcome.failed(e.getMessage());
         }
     }
 

@@ -28,6 +28,8 @@ import org.jfree.data.xy.XYSeriesCollection;
  */
 final class SignalView implements PanelView {
 
+    static final String WHERE = "the Signal panel";
+
     private final Workbench workbench;
     private final Project project;
     private final Composite root;
@@ -38,7 +40,9 @@ final class SignalView implements PanelView {
     private final LatestOnly<Outcome<SignalCurve>> work;
     private final DataFiles files = new DataFiles();
     private final Project.Listener listener = this::changed;
+    private String lastProblem;
     private XYSeries model;
+    private XYLineAndShapeRenderer renderer;
     private String shownKey;
 
     SignalView(Composite parent, Workbench workbench) {
@@ -73,6 +77,7 @@ final class SignalView implements PanelView {
     public void close() {
         project.removeListener(listener);
         work.cancel();
+        workbench.showProblem(WHERE, null);
     }
 
     ChartCanvas canvas() {
@@ -112,8 +117,14 @@ final class SignalView implements PanelView {
     }
 
     private void recompute() {
-        project.problem().ifPresent(p -> status.show("The case as edited has a problem; showing the last valid"
-                + " version. " + p.getMessage(), StatusLine.Tone.PROBLEM));
+        if (project.problem().isPresent()) {
+            work.cancel();
+            clearModel();
+            workbench.showProblem(WHERE, null);
+            status.show("No model line while the case has a problem: " + Words.problem(project.problem().get()),
+                    StatusLine.Tone.PROBLEM);
+            return;
+        }
         CaseDocument doc = project.current().orElse(null);
         if (doc == null) {
             return;
@@ -122,7 +133,59 @@ final class SignalView implements PanelView {
         String signal = signalCombo.getSelectionIndex() < 0 ? null : signalCombo.getText();
         long started = System.nanoTime();
         work.submit(progress -> SignalCurve.compute(doc, dataset, signal, workbench.catalog(),
-                workbench.importers(), files), outcome -> show(outcome, started));
+                workbench.importers(), files), new LatestOnly.View<>() {
+                    @Override
+                    public void done(Outcome<SignalCurve> outcome) {
+                        show(outcome, started);
+                    }
+
+                    @Override
+                    public void problem(String problem) {
+                        // Messages has it already, from the background work.
+                        lastProblem = problem;
+                        failed(problem);
+                    }
+
+                    @Override
+                    public void stopped() {
+                        markStale();
+                        status.show("Stopped: the model line is for earlier values; change a value to compute it"
+                                + " again.", StatusLine.Tone.CAUTION);
+                    }
+
+                    @Override
+                    public void slow() {
+                        markStale();
+                        status.show("Computing the model… the grey line is for the earlier values (Stop, in the"
+                                + " status line, cancels).", StatusLine.Tone.CAUTION);
+                    }
+                });
+    }
+
+    /** The model could not be computed: no line is better than a line that belongs to other values. */
+    private void failed(String problem) {
+        if (root.isDisposed()) {
+            return;
+        }
+        clearModel();
+        status.show("The model could not be computed: " + problem, StatusLine.Tone.PROBLEM);
+        if (!problem.equals(lastProblem)) {
+            workbench.messages().error("The model signal could not be computed: " + problem, null);
+            lastProblem = problem;
+        }
+        workbench.showProblem(WHERE, "the model could not be computed: " + problem);
+    }
+
+    private void clearModel() {
+        if (model != null) {
+            model.clear();
+        }
+    }
+
+    private void markStale() {
+        if (renderer != null) {
+            renderer.setSeriesPaint(1, PlotLook.REFERENCE);
+        }
     }
 
     private void show(Outcome<SignalCurve> outcome, long started) {
@@ -130,8 +193,13 @@ final class SignalView implements PanelView {
             return;
         }
         if (!outcome.ok()) {
-            status.show(outcome.problem(), StatusLine.Tone.PROBLEM);
+            failed(outcome.problem());
             return;
+        }
+        lastProblem = null;
+        workbench.showProblem(WHERE, null);
+        if (renderer != null) {
+            renderer.setSeriesPaint(1, PlotLook.MODEL);
         }
         SignalCurve c = outcome.value();
         List<String> items = List.of(signalCombo.getItems());
@@ -151,12 +219,9 @@ final class SignalView implements PanelView {
             model.fireSeriesChanged();
         }
         long ms = (System.nanoTime() - started) / 1_000_000;
-        String problem = project.problem().map(p -> "  The case as edited has a problem; showing the last valid"
-                + " version. " + p.getMessage()).orElse("");
         status.show(c.technique().toUpperCase() + " model of " + c.modelX().length + " points"
                 + (c.dataName().isEmpty() ? "" : " over " + c.dataX().length + " data points of " + c.dataName())
-                + ", computed in " + ms + " ms." + problem,
-                problem.isEmpty() ? StatusLine.Tone.PLAIN : StatusLine.Tone.PROBLEM);
+                + ", computed in " + ms + " ms.", StatusLine.Tone.PLAIN);
     }
 
     private JFreeChart chart(SignalCurve c) {
@@ -172,6 +237,7 @@ final class SignalView implements PanelView {
         set.addSeries(data);
         set.addSeries(model);
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
+        renderer = r;
         r.setSeriesLinesVisible(0, false);
         r.setSeriesShapesVisible(0, true);
         r.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));

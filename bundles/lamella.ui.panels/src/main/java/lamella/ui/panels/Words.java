@@ -58,6 +58,12 @@ final class Words {
         return InputNames.key(key);
     }
 
+    /** A case problem as the panels say it: where in the case (its JSON path), then what is wrong. */
+    static String problem(lamella.api.InputException e) {
+        String where = e.path() == null || e.path().isEmpty() ? "" : e.path() + ": ";
+        return where + e.problem();
+    }
+
     private static String withUnit(String column) {
         return column + " (" + unitOrNone(column) + ")";
     }

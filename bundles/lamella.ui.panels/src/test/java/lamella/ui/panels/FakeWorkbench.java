@@ -8,12 +8,16 @@ import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Consumer;
 import lamella.api.CaseFormat;
 import lamella.api.HeatingGeometry;
 import lamella.api.ModelCatalog;
 import lamella.api.Technique;
+import lamella.api.guard.LiveModels;
+import lamella.api.guard.PluginOrigin;
 import lamella.api.data.DataImporter;
 import lamella.api.fit.FitService;
 import lamella.api.fit.Progress;
@@ -35,10 +39,12 @@ import lamella.technique.sstr.SteadyState;
 import lamella.technique.tdtr.TimeDomain;
 import lamella.technique.threeomega.ThreeOmega;
 import lamella.ui.api.BackgroundWork;
+import lamella.ui.api.CaseReader;
 import lamella.ui.api.Messages;
 import lamella.ui.api.Project;
 import lamella.ui.api.Task;
 import lamella.ui.api.Workbench;
+import lamella.ui.api.WorkResult;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 
@@ -58,7 +64,7 @@ final class FakeWorkbench implements Workbench {
     private final Fitter fitter;
     private final MaterialCatalog materials;
     private final Project project;
-    private final ExecutorService pool = Executors.newFixedThreadPool(2);
+    private final ExecutorService pool = Executors.newCachedThreadPool();
     private final FakeMessages messages = new FakeMessages();
 
     FakeWorkbench(Display display, Shell shell) throws Exception {
@@ -68,7 +74,14 @@ final class FakeWorkbench implements Workbench {
                 new EllipticBeams());
         List<Technique> t = List.of(new FrequencyDomain(), new TimeDomain(), new SteadyState(), new ThreeOmega());
         Engine engine = new Engine();
-        catalog = new ModelCatalog(g, t, engine);
+        // Behind guards, as the window holds them: a plug-in's failure is named, and an interrupt stops any geometry.
+        LiveModels live = new LiveModels();
+        PluginOrigin here = new PluginOrigin("lamella.ui.panels.tests", "0");
+        g.forEach(x -> live.add(x, here));
+        live.add(TroubleGeometries.slow(), here);
+        live.add(TroubleGeometries.broken(), here);
+        t.forEach(x -> live.add(x, here));
+        catalog = live.catalog(engine);
         fitter = new Fitter(engine, g, t);
         if (Files.isDirectory(SHIPPED_MATERIALS)) {
             MaterialLibrary shipped = ShippedLibraryForTests.read(SHIPPED_MATERIALS);
@@ -77,7 +90,7 @@ final class FakeWorkbench implements Workbench {
         } else {
             materials = null;
         }
-        project = Project.open(DEMO, reader::read);
+        project = Project.open(DEMO, CaseReader.withModels(reader::read, () -> catalog));
     }
 
     void shutdown() {
@@ -138,10 +151,17 @@ final class FakeWorkbench implements Workbench {
         return List.of(new DelimitedImporter());
     }
 
+    /** Like the window's: cancelling interrupts the work's thread and tells the caller it stopped. */
     @Override
-    public <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone) {
+    public <T> Task start(String label, BackgroundWork<T> work, WorkResult<T> result) {
         AtomicBoolean cancelled = new AtomicBoolean();
         AtomicBoolean done = new AtomicBoolean();
+        AtomicBoolean told = new AtomicBoolean();
+        Consumer<Runnable> tell = r -> {
+            if (told.compareAndSet(false, true) && !display.isDisposed()) {
+                display.asyncExec(r);
+            }
+        };
         Progress progress = new Progress() {
             @Override
             public void update(String stage, int d, int total) {
@@ -152,33 +172,59 @@ final class FakeWorkbench implements Workbench {
                 return cancelled.get();
             }
         };
-        pool.submit(() -> {
+        started.incrementAndGet();
+        Future<?> f = pool.submit(() -> {
             try {
-                T result = work.run(progress);
-                display.asyncExec(() -> {
-                    done.set(true);
-                    if (!cancelled.get()) {
-                        onDone.accept(result);
-                    }
-                });
+                T value = work.run(progress);
+                done.set(true);
+                tell.accept(() -> result.done(value));
             } catch (Exception | Error e) {
                 done.set(true);
-                if (!cancelled.get()) {
+                if (cancelled.get() || e instanceof java.util.concurrent.CancellationException) {
+                    tell.accept(result::stopped);
+                } else {
                     messages.error(label + " failed", e);
+                    tell.accept(() -> result.failed(String.valueOf(e.getMessage()), e));
                 }
             }
         });
-        return new Task() {
+        Task task = new Task() {
             @Override
             public void cancel() {
                 cancelled.set(true);
+                f.cancel(true);
+                tell.accept(result::stopped);
             }
 
             @Override
             public boolean done() {
-                return done.get();
+                return done.get() || cancelled.get();
             }
         };
+        tasks.add(task);
+        return task;
+    }
+
+    private final List<Task> tasks = new CopyOnWriteArrayList<>();
+
+    /** Stops all work, as the status line's Stop button does. */
+    void stopAll() {
+        tasks.forEach(Task::cancel);
+    }
+
+    /** How many pieces of background work were started. */
+    final AtomicInteger started = new AtomicInteger();
+
+    /** What the panels told the status line, by where. */
+    final java.util.Map<String, String> problems = new java.util.concurrent.ConcurrentHashMap<>();
+
+    @Override
+    public void showProblem(String where, String problem) {
+        if (problem == null) {
+            problems.remove(where);
+        } else {
+            problems.put(where, problem);
+        }
     }
 
     @Override

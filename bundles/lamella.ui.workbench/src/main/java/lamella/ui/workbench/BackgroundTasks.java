@@ -4,62 +4,51 @@ import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.Semaphore;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.function.Consumer;
 import lamella.api.fit.Progress;
 import lamella.ui.api.BackgroundWork;
 import lamella.ui.api.Messages;
 import lamella.ui.api.Task;
+import lamella.ui.api.WorkResult;
 import org.eclipse.swt.widgets.Display;
 
 /**
- * Model and fit work off the UI thread: two daemon workers (the machines this runs on have few cores, and the UI
- * keeps one), results and failures handed back to the UI thread.
+ * Model and fit work off the UI thread. At most two pieces of work compute at once (the machines this runs on have
+ * few cores, and the UI keeps one). Cancelling sets the work's flag and interrupts its thread, and frees its place at
+ * once: work that does not stop promptly (a plug-in that ignores the interrupt) never holds up the next request.
+ * Results, failures and stops are handed back on the UI thread.
  */
 final class BackgroundTasks {
 
-    private static final int WORKERS = 2;
+    private static final int AT_ONCE = 2;
 
-    private final ExecutorService workers;
+    private final ExecutorService threads;
+    private final Semaphore places = new Semaphore(AT_ONCE, true);
     private final Display display;
     private final Messages messages;
     private final Runnable onChange;
-    private final Set<Running> running = ConcurrentHashMap.newKeySet();
+    private final Set<Running<?>> running = ConcurrentHashMap.newKeySet();
 
     BackgroundTasks(Display display, Messages messages, Runnable onChange) {
         this.display = display;
         this.messages = messages;
         this.onChange = onChange;
         AtomicInteger n = new AtomicInteger();
-        this.workers = Executors.newFixedThreadPool(WORKERS, r -> {
+        this.threads = Executors.newCachedThreadPool(r -> {
             Thread t = new Thread(r, "lamella-background-" + n.incrementAndGet());
             t.setDaemon(true);
             return t;
         });
     }
 
-    <T> Task submit(String label, BackgroundWork<T> work, Consumer<T> onDone) {
-        Running task = new Running(label);
+    <T> Task submit(String label, BackgroundWork<T> work, WorkResult<T> result) {
+        Running<T> task = new Running<>(label, work, result);
         running.add(task);
+        task.future = threads.submit(task::run);
         changed();
-        workers.execute(() -> {
-            try {
-                T result = work.run(task);
-                onUi(() -> {
-                    if (!task.cancelled()) {
-                        onDone.accept(result);
-                    }
-                });
-            } catch (Exception | LinkageError e) {
-                if (!task.cancelled()) {
-                    messages.error(label + " failed", e);
-                }
-            } finally {
-                task.done = true;
-                running.remove(task);
-                changed();
-            }
-        });
         return task;
     }
 
@@ -68,14 +57,23 @@ final class BackgroundTasks {
         if (running.isEmpty()) {
             return "";
         }
-        Running first = running.iterator().next();
+        Running<?> first = running.iterator().next();
         String more = running.size() > 1 ? " (+" + (running.size() - 1) + " more)" : "";
         return first.describe() + more;
     }
 
+    boolean busy() {
+        return !running.isEmpty();
+    }
+
+    /** Stops every piece of work under way, as the status line's Stop button does. */
+    void cancelAll() {
+        running.forEach(Running::cancel);
+    }
+
     void shutdown() {
         running.forEach(Running::cancel);
-        workers.shutdownNow();
+        threads.shutdownNow();
     }
 
     private void changed() {
@@ -93,16 +91,76 @@ final class BackgroundTasks {
     }
 
     /** A task as seen from both sides: the work reports progress and checks cancellation; the UI cancels. */
-    private final class Running implements Task, Progress {
+    private final class Running<T> implements Task, Progress {
         private final String label;
+        private final BackgroundWork<T> work;
+        private final WorkResult<T> result;
+        private final AtomicBoolean told = new AtomicBoolean();
+        private boolean placeHeld;
+        private volatile Future<?> future;
         private volatile boolean cancelled;
         private volatile boolean done;
         private volatile String stage = "";
         private volatile int count;
         private volatile int total;
 
-        Running(String label) {
+        Running(String label, BackgroundWork<T> work, WorkResult<T> result) {
             this.label = label;
+            this.work = work;
+            this.result = result;
+        }
+
+        void run() {
+            try {
+                places.acquire();
+                synchronized (this) {
+                    if (cancelled) {
+                        places.release();
+                        return;
+                    }
+                    placeHeld = true;
+                }
+                T value = work.run(this);
+                finish(() -> {
+                    if (cancelled) {
+                        result.stopped();
+                    } else {
+                        result.done(value);
+                    }
+                });
+            } catch (Exception | LinkageError e) {
+                if (cancelled || Failures.isCancellation(e)) {
+                    finish(result::stopped);
+                } else {
+                    String words = Failures.words(e);
+                    messages.error(label + " failed: " + words, e);
+                    finish(() -> result.failed(words, e));
+                }
+            } finally {
+                Thread.interrupted();
+            }
+        }
+
+        private void finish(Runnable tell) {
+            release();
+            done = true;
+            running.remove(this);
+            tell(tell);
+            changed();
+        }
+
+        /** The result, the failure or the stop is told once. */
+        private void tell(Runnable r) {
+            if (told.compareAndSet(false, true)) {
+                onUi(r);
+            }
+        }
+
+        private synchronized void release() {
+            if (placeHeld) {
+                placeHeld = false;
+                places.release();
+            }
         }
 
         @Override
@@ -120,12 +178,24 @@ final class BackgroundTasks {
 
         @Override
         public void cancel() {
+            if (done || cancelled) {
+                return;
+            }
             cancelled = true;
+            Future<?> f = future;
+            if (f != null) {
+                f.cancel(true);
+            }
+            // The place is free now; the thread, if its work ignores the interrupt, ends when that work does.
+            release();
+            running.remove(this);
+            tell(result::stopped);
+            changed();
         }
 
         @Override
         public boolean done() {
-            return done;
+            return done || cancelled;
         }
 
         String describe() {

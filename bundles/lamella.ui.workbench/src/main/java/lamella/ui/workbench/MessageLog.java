@@ -84,6 +84,6 @@ final class MessageLog implements Messages {
         }
         StringWriter trace = new StringWriter();
         cause.printStackTrace(new PrintWriter(trace));
-        return sb.append('\n').append(trace).toString();
+        return sb.append("\nDetails for a bug report:\n").append(trace).toString();
     }
 }

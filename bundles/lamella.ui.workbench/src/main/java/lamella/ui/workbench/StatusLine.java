@@ -1,50 +1,78 @@
 package lamella.ui.workbench;
 
+import java.util.Map;
+import lamella.api.InputException;
 import lamella.ui.api.Project;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 
-/** The line along the bottom: whether the case is valid (what is wrong, in red, if not) and the work running. */
+/**
+ * The line along the bottom: whether the case is valid, and if not what is wrong and where (its JSON path); what
+ * the panels could not compute and why; the work running, with a button that stops it.
+ */
 final class StatusLine {
 
     private final Composite bar;
     private final Label validity;
     private final Label work;
+    private final Button stop;
 
-    StatusLine(Composite parent) {
+    StatusLine(Composite parent, Runnable onStop) {
         bar = new Composite(parent, SWT.NONE);
-        GridLayout layout = new GridLayout(2, false);
-        layout.marginHeight = 3;
+        GridLayout layout = new GridLayout(3, false);
+        layout.marginHeight = 2;
         layout.marginWidth = 8;
         bar.setLayout(layout);
         bar.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         validity = new Label(bar, SWT.NONE);
-        validity.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridData v = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        v.widthHint = 200;
+        validity.setLayoutData(v);
         work = new Label(bar, SWT.RIGHT);
         GridData w = new GridData(SWT.END, SWT.CENTER, false, false);
-        w.widthHint = 420;
+        w.widthHint = 360;
         work.setLayoutData(w);
+        stop = new Button(bar, SWT.PUSH);
+        stop.setText("Stop");
+        stop.setToolTipText("Stops every computation under way (model curves, sensitivities, fits)");
+        stop.setEnabled(false);
+        stop.addListener(SWT.Selection, e -> onStop.run());
     }
 
-    void showProject(Project p) {
+    /** The case's state, then the first panel problem, if any. */
+    void showProject(Project p, Map<String, String> panelProblems) {
         if (bar.isDisposed()) {
             return;
         }
         String state = p.dirty() ? "unsaved changes" : p.file().isPresent() ? "saved" : "not saved yet";
+        String text;
+        boolean bad;
         if (p.problem().isPresent()) {
-            validity.setForeground(bar.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-            validity.setText("Case invalid: " + oneLine(p.problem().get().getMessage()) + "   (" + state + ")");
+            InputException e = p.problem().get();
+            String where = e.path() == null || e.path().isEmpty() ? "" : " at " + e.path();
+            text = "Case invalid" + where + ": " + oneLine(e.problem());
+            bad = true;
         } else {
-            validity.setForeground(bar.getDisplay().getSystemColor(SWT.COLOR_WIDGET_FOREGROUND));
             String model = p.current().map(d -> d.geometry().get("type") + " heating, "
                     + d.measurement().get("type") + " measurement, " + d.stack().layers().size() + " layers")
                     .orElse("");
-            validity.setText("Case valid: " + model + "   (" + state + ")");
+            text = "Case valid: " + model;
+            bad = false;
+            for (Map.Entry<String, String> problem : panelProblems.entrySet()) {
+                text = "Case valid, but " + problem.getKey() + ": " + oneLine(problem.getValue());
+                bad = true;
+                break;
+            }
         }
-        validity.setToolTipText(p.problem().map(Throwable::getMessage).orElse(null));
+        validity.setForeground(bar.getDisplay().getSystemColor(bad ? SWT.COLOR_DARK_RED
+                : SWT.COLOR_WIDGET_FOREGROUND));
+        validity.setText((text + "   (" + state + ")").replace("&", "&&"));
+        validity.setToolTipText(p.problem().map(Throwable::getMessage)
+                .orElse(panelProblems.isEmpty() ? null : String.join("\n", panelProblems.values())));
         bar.layout();
     }
 
@@ -53,11 +81,18 @@ final class StatusLine {
             return;
         }
         work.setText(summary.isEmpty() ? "No background work" : "Running: " + summary);
+        stop.setEnabled(!summary.isEmpty());
         bar.layout();
     }
 
     String text() {
-        return validity.getText() + " | " + work.getText();
+        return validity.getText().replace("&&", "&") + " | " + work.getText();
+    }
+
+    void pressStop() {
+        if (stop.isEnabled()) {
+            stop.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        }
     }
 
     private static String oneLine(String s) {

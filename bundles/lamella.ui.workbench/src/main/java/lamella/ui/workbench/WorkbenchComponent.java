@@ -9,6 +9,8 @@ import java.util.function.Function;
 import lamella.api.CaseFormat;
 import lamella.api.HeatingGeometry;
 import lamella.api.ModelCatalog;
+import lamella.api.guard.LiveModels;
+import lamella.api.guard.PluginOrigin;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.data.DataImporter;
@@ -17,7 +19,9 @@ import lamella.api.fit.ReportWriter;
 import lamella.api.material.MaterialCatalog;
 import lamella.ui.api.WorkbenchPanel;
 import org.eclipse.swt.widgets.Display;
+import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceReference;
 import org.osgi.framework.ServiceRegistration;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
@@ -36,8 +40,7 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 @Component(service = Runnable.class, immediate = true, property = "lamella.role=workbench")
 public final class WorkbenchComponent implements Runnable, LiveServices {
 
-    private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
-    private final List<Technique> techniques = new CopyOnWriteArrayList<>();
+    private final LiveModels models = new LiveModels();
     private final List<DataImporter> importers = new CopyOnWriteArrayList<>();
     private final List<WorkbenchPanel> panels = new CopyOnWriteArrayList<>();
 
@@ -114,7 +117,7 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
 
     @Override
     public ModelCatalog catalog() {
-        return new ModelCatalog(geometries, techniques, kernels);
+        return models.catalog(kernels);
     }
 
     @Override
@@ -144,22 +147,31 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
 
     // ------------------------------------------------------------------ references
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void addGeometry(HeatingGeometry g) {
-        geometries.add(g);
+    /** Every geometry behind a guard, so that a faulty plug-in fails one computation with its bundle's name. */
+    @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeGeometry")
+    void addGeometry(ServiceReference<HeatingGeometry> reference, HeatingGeometry g) {
+        models.add(g, origin(reference));
     }
 
     void removeGeometry(HeatingGeometry g) {
-        geometries.remove(g);
+        models.remove(g);
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void addTechnique(Technique t) {
-        techniques.add(t);
+    @Reference(service = Technique.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeTechnique")
+    void addTechnique(ServiceReference<Technique> reference, Technique t) {
+        models.add(t, origin(reference));
     }
 
     void removeTechnique(Technique t) {
-        techniques.remove(t);
+        models.remove(t);
+    }
+
+    private static PluginOrigin origin(ServiceReference<?> reference) {
+        Bundle bundle = reference.getBundle();
+        return bundle == null ? new PluginOrigin("(unregistered)", "?")
+                : new PluginOrigin(bundle.getSymbolicName(), bundle.getVersion().toString());
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)

@@ -3,7 +3,8 @@ package lamella.ui.workbench;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.function.Consumer;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import lamella.api.CaseFormat;
 import lamella.api.ModelCatalog;
 import lamella.api.data.DataImporter;
@@ -11,9 +12,11 @@ import lamella.api.fit.FitService;
 import lamella.api.fit.ReportWriter;
 import lamella.api.material.MaterialCatalog;
 import lamella.ui.api.BackgroundWork;
+import lamella.ui.api.CaseReader;
 import lamella.ui.api.Messages;
 import lamella.ui.api.Project;
 import lamella.ui.api.Task;
+import lamella.ui.api.WorkResult;
 import lamella.ui.api.Workbench;
 import lamella.ui.api.WorkbenchPanel;
 import org.eclipse.swt.SWT;
@@ -47,6 +50,7 @@ final class WorkbenchWindow implements Workbench {
     private final DataDrop drop;
     private final WindowMenus menus;
     private final Project.Listener projectListener = change -> projectChanged();
+    private final Map<String, String> panelProblems = new LinkedHashMap<>();
     private long firstPaintNanos;
 
     WorkbenchWindow(Display display, LiveServices services, MessageLog messages, UserFolder user, Path home) {
@@ -67,7 +71,7 @@ final class WorkbenchWindow implements Workbench {
         fill.marginHeight = 4;
         host.setLayout(fill);
         host.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        status = new StatusLine(shell);
+        status = new StatusLine(shell, () -> tasks().cancelAll());
         Composite parking = new Composite(shell, SWT.NONE);
         GridData parked = new GridData();
         parked.exclude = true;
@@ -86,7 +90,8 @@ final class WorkbenchWindow implements Workbench {
             }
         });
         tasks = new BackgroundTasks(display, messages, () -> status.showWork(tasks().summary()));
-        session = new ProjectSession(shell, services.caseFormat()::read, user, home, messages, this::projectReplaced);
+        session = new ProjectSession(shell, CaseReader.withModels(services.caseFormat()::read, services::catalog),
+                user, home, messages, this::projectReplaced);
         drop = new DataDrop(this);
         menus = new WindowMenus(this);
         host.addListener(SWT.Paint, e -> {
@@ -267,8 +272,17 @@ final class WorkbenchWindow implements Workbench {
     }
 
     @Override
-    public <T> Task background(String label, BackgroundWork<T> work, Consumer<T> onDone) {
-        return tasks.submit(label, work, onDone);
+    public <T> Task start(String label, BackgroundWork<T> work, WorkResult<T> result) {
+        return tasks.submit(label, work, result);
+    }
+
+    @Override
+    public void showProblem(String where, String problem) {
+        boolean changed = problem == null ? panelProblems.remove(where) != null
+                : !problem.equals(panelProblems.put(where, problem));
+        if (changed) {
+            projectChanged();
+        }
     }
 
     @Override
@@ -327,6 +341,7 @@ final class WorkbenchWindow implements Workbench {
 
     private void projectReplaced(Project p) {
         p.addListener(projectListener);
+        panelProblems.clear();
         // Panels hold listeners on the project they were opened with, so they reopen with the new one.
         if (shell.getMenuBar() != null) {
             layout.edit(shelf::releaseAll);
@@ -337,7 +352,7 @@ final class WorkbenchWindow implements Workbench {
     private void projectChanged() {
         if (!shell.isDisposed()) {
             shell.setText("Lamella — " + session.name() + (session.project().dirty() ? " •" : ""));
-            status.showProject(session.project());
+            status.showProject(session.project(), panelProblems);
             menus.projectChanged();
         }
     }
