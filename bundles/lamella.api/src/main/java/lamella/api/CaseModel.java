@@ -1,6 +1,7 @@
 package lamella.api;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -12,9 +13,21 @@ import java.util.Map;
  */
 public final class CaseModel {
 
-    /** Layer keys a parameter may name. {@code k_in_plane_w_mk} sets both in-plane directions. */
-    public static final List<String> LAYER_KEYS = List.of("thickness_m", "k_through_w_mk", "k_in_plane_w_mk",
-            "k_in_plane_x_w_mk", "k_in_plane_y_w_mk", "heat_capacity_j_m3k", "conductance_below_w_m2k");
+    /** How every output names a conductivity stated once. */
+    public static final String ISOTROPIC = "isotropic Λ";
+
+    /**
+     * Layer keys a parameter may name. {@code k_w_mk} is the isotropic Λ (every direction at once);
+     * {@code k_through_w_mk} is Λz with the in-plane directions that follow it (see {@link Layer.Tie});
+     * {@code k_in_plane_w_mk} sets both in-plane directions.
+     */
+    public static final List<String> LAYER_KEYS = List.of("thickness_m", "k_w_mk", "k_through_w_mk",
+            "k_in_plane_w_mk", "k_in_plane_x_w_mk", "k_in_plane_y_w_mk", "heat_capacity_j_m3k",
+            "conductance_below_w_m2k");
+
+    /** The layer keys that name a conductivity. */
+    public static final List<String> CONDUCTIVITY_KEYS = List.of("k_w_mk", "k_through_w_mk", "k_in_plane_w_mk",
+            "k_in_plane_x_w_mk", "k_in_plane_y_w_mk");
 
     private final Stack stack;
     private final Block geometry;
@@ -50,6 +63,7 @@ public final class CaseModel {
                 Layer l = layer(p, at);
                 double v = switch (p.key()) {
                     case "thickness_m" -> l.thickness();
+                    case "k_w_mk" -> isotropic(l, at);
                     case "k_through_w_mk" -> l.kThrough();
                     case "k_in_plane_w_mk" -> inPlane(l, at);
                     case "k_in_plane_x_w_mk" -> l.kInPlaneX();
@@ -81,28 +95,24 @@ public final class CaseModel {
         switch (p.scope()) {
             case LAYER: {
                 Layer l = layer(p, p.toString());
-                Layer changed = switch (p.key()) {
-                    case "thickness_m" -> l.withThickness(value);
-                    case "k_through_w_mk" -> new Layer(l.name(), l.thickness(), value, l.kInPlaneX(), l.kInPlaneY(),
-                            l.heatCapacity(), l.conductanceBelow());
-                    case "k_in_plane_w_mk" -> new Layer(l.name(), l.thickness(), l.kThrough(), value, value,
-                            l.heatCapacity(), l.conductanceBelow());
-                    case "k_in_plane_x_w_mk" -> new Layer(l.name(), l.thickness(), l.kThrough(), value, l.kInPlaneY(),
-                            l.heatCapacity(), l.conductanceBelow());
-                    case "k_in_plane_y_w_mk" -> new Layer(l.name(), l.thickness(), l.kThrough(), l.kInPlaneX(), value,
-                            l.heatCapacity(), l.conductanceBelow());
-                    case "heat_capacity_j_m3k" -> new Layer(l.name(), l.thickness(), l.kThrough(), l.kInPlaneX(),
-                            l.kInPlaneY(), value, l.conductanceBelow());
-                    case "conductance_below_w_m2k" -> l.withConductanceBelow(value);
-                    default -> throw unknownLayerKey(p, p.toString());
-                };
-                List<Layer> layers = new ArrayList<>(stack.layers());
-                layers.set(layers.indexOf(l), changed);
+                Layer changed;
                 try {
-                    return new CaseModel(new Stack(layers, stack.bottom()), geometry, measurement);
+                    changed = switch (p.key()) {
+                        case "thickness_m" -> l.withThickness(value);
+                        case "k_w_mk" -> l.withIsotropic(value);
+                        case "k_through_w_mk" -> l.withThroughPlane(value);
+                        case "k_in_plane_w_mk" -> l.withInPlane(value);
+                        case "k_in_plane_x_w_mk" -> l.withInPlaneX(value);
+                        case "k_in_plane_y_w_mk" -> l.withInPlaneY(value);
+                        case "heat_capacity_j_m3k" -> l.withHeatCapacity(value);
+                        case "conductance_below_w_m2k" -> l.withConductanceBelow(value);
+                        default -> throw unknownLayerKey(p, p.toString());
+                    };
                 } catch (IllegalArgumentException e) {
-                    throw InputException.at(p.toString(), e.getMessage());
+                    throw InputException.at(p.toString(), "layer '" + l.name() + "' cannot take " + p.key() + " = "
+                            + value + ": " + e.getMessage());
                 }
+                return withLayer(l, changed, p);
             }
             case GEOMETRY:
                 return new CaseModel(stack, replaced(geometry, p.key(), value), measurement);
@@ -111,19 +121,81 @@ public final class CaseModel {
         }
     }
 
-    /** Every numeric input this model has: finite layer values and the numbers of its geometry block. */
+    /**
+     * The same values, with every in-plane direction that one of the given paths names stated apart from Λz: where
+     * a fit or a study names the in-plane conductivity itself, {@code k_through_w_mk} moves Λz alone, whatever the
+     * order of the paths.
+     */
+    public CaseModel apartFor(Collection<ParameterRef> named) {
+        List<Layer> layers = new ArrayList<>(stack.layers());
+        for (ParameterRef p : named) {
+            if (p.scope() != ParameterRef.Scope.LAYER) {
+                continue;
+            }
+            boolean x = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_x_w_mk");
+            boolean y = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_y_w_mk");
+            for (int i = 0; i < layers.size(); i++) {
+                if (layers.get(i).name().equals(p.layer()) && (x || y)) {
+                    layers.set(i, layers.get(i).apart(x, y));
+                }
+            }
+        }
+        return new CaseModel(new Stack(layers, stack.bottom()), geometry, measurement);
+    }
+
+    /**
+     * What a path moves in this case, in words for every output's labels: "isotropic Λ" for a conductivity stated
+     * once, "through-plane Λz" where Λz is stated apart, "in-plane Λr"; empty where the key says it all.
+     */
+    public String quantity(ParameterRef p) {
+        if (p.scope() != ParameterRef.Scope.LAYER) {
+            return "";
+        }
+        Layer.Tie tie = stack.layer(p.layer()).map(Layer::tie).orElse(Layer.Tie.APART);
+        return switch (p.key()) {
+            case "k_w_mk" -> ISOTROPIC;
+            case "k_through_w_mk" -> switch (tie) {
+                case ISOTROPIC -> ISOTROPIC;
+                case X_FOLLOWS -> "Λz with Λx";
+                case Y_FOLLOWS -> "Λz with Λy";
+                case APART -> "through-plane Λz";
+            };
+            case "k_in_plane_w_mk" -> "in-plane Λr";
+            case "k_in_plane_x_w_mk" -> "in-plane Λx";
+            case "k_in_plane_y_w_mk" -> "in-plane Λy";
+            default -> "";
+        };
+    }
+
+    /** The label of a path in every output: the path, and what it moves where the key alone does not say. */
+    public String label(ParameterRef p) {
+        return ParameterRef.label(p, quantity(p));
+    }
+
+    /**
+     * Every numeric input this model has, one per quantity the case states: finite layer values (a layer stated
+     * isotropic has one conductivity, {@code k_w_mk}) and the numbers of its geometry block.
+     */
     public List<ParameterRef> numericInputs() {
         List<ParameterRef> out = new ArrayList<>();
         for (Layer l : stack.layers()) {
             if (!l.isSemiInfinite()) {
                 out.add(ParameterRef.layer(l.name(), "thickness_m"));
             }
-            out.add(ParameterRef.layer(l.name(), "k_through_w_mk"));
-            if (l.isInPlaneIsotropic()) {
-                out.add(ParameterRef.layer(l.name(), "k_in_plane_w_mk"));
+            if (l.tie() == Layer.Tie.ISOTROPIC) {
+                out.add(ParameterRef.layer(l.name(), "k_w_mk"));
             } else {
-                out.add(ParameterRef.layer(l.name(), "k_in_plane_x_w_mk"));
-                out.add(ParameterRef.layer(l.name(), "k_in_plane_y_w_mk"));
+                out.add(ParameterRef.layer(l.name(), "k_through_w_mk"));
+                if (l.tie() == Layer.Tie.APART && l.isInPlaneIsotropic()) {
+                    out.add(ParameterRef.layer(l.name(), "k_in_plane_w_mk"));
+                } else {
+                    if (!l.tie().x()) {
+                        out.add(ParameterRef.layer(l.name(), "k_in_plane_x_w_mk"));
+                    }
+                    if (!l.tie().y()) {
+                        out.add(ParameterRef.layer(l.name(), "k_in_plane_y_w_mk"));
+                    }
+                }
             }
             out.add(ParameterRef.layer(l.name(), "heat_capacity_j_m3k"));
             if (!l.hasPerfectContactBelow()) {
@@ -136,6 +208,16 @@ public final class CaseModel {
             }
         }
         return out;
+    }
+
+    private CaseModel withLayer(Layer old, Layer changed, ParameterRef p) throws InputException {
+        List<Layer> layers = new ArrayList<>(stack.layers());
+        layers.set(layers.indexOf(old), changed);
+        try {
+            return new CaseModel(new Stack(layers, stack.bottom()), geometry, measurement);
+        } catch (IllegalArgumentException e) {
+            throw InputException.at(p.toString(), e.getMessage());
+        }
     }
 
     private Layer layer(ParameterRef p, String at) throws InputException {
@@ -153,6 +235,15 @@ public final class CaseModel {
                     + " k_in_plane_y_w_mk");
         }
         return l.kInPlaneX();
+    }
+
+    private static double isotropic(Layer l, String at) throws InputException {
+        if (!l.isIsotropic()) {
+            throw InputException.at(at, "layer '" + l.name() + "' conducts differently through the plane (Λz "
+                    + l.kThrough() + " W/(m K)) and along it (Λx " + l.kInPlaneX() + ", Λy " + l.kInPlaneY()
+                    + " W/(m K)), so it has no one isotropic Λ; name k_through_w_mk and k_in_plane_w_mk instead");
+        }
+        return l.kThrough();
     }
 
     private static InputException unknownLayerKey(ParameterRef p, String at) {

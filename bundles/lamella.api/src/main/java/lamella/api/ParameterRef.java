@@ -46,6 +46,16 @@ public record ParameterRef(Scope scope, String layer, String key, int dataset) {
         return Units.ofKey(key);
     }
 
+    /**
+     * How outputs name a path: the path, then what it moves in words where its key alone does not say, such as
+     * {@code film.k_through_w_mk (isotropic Λ)}.
+     *
+     * @param quantity the words, from {@link CaseModel#quantity}; empty for none
+     */
+    public static String label(ParameterRef p, String quantity) {
+        return quantity == null || quantity.isEmpty() ? p.toString() : p + " (" + quantity + ")";
+    }
+
     @Override
     public String toString() {
         String prefix = dataset >= 0 ? "datasets[" + dataset + "]." : "";

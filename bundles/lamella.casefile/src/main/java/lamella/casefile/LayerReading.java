@@ -26,6 +26,8 @@ final class LayerReading {
     static final String TEMPERATURE = "temperature_k";
     static final String C_AXIS = "c_axis";
     static final double DEFAULT_TEMPERATURE_K = 300.0;
+    private static final String DEFAULT_SOURCE = "default";
+    private static final String LIBRARY_SOURCE = "library ";
 
     private final Block l;
     private final Map<String, Integer> lines;
@@ -35,6 +37,8 @@ final class LayerReading {
     private final double temperature;
     private final String temperaturePath;
     private final Optional<CAxis> cAxis;
+    /** Where the conductivity read last came from: a case key, a library quantity, or the default rule. */
+    private String source = DEFAULT_SOURCE;
 
     /** Where the c axis of a uniaxial crystal points in the sample's frame (z normal to the surface). */
     enum CAxis {
@@ -125,8 +129,11 @@ final class LayerReading {
                     + (last ? " (the bottom is " + bottom.caseName() + ")" : ""));
         }
         double kz = conductivity(CaseFileReader.K_THROUGH, Direction.Z);
+        String zSource = source;
         double kx = inPlane(CaseFileReader.K_IN_PLANE_X, Direction.X, kz);
+        boolean xFollows = follows(zSource);
         double ky = inPlane(CaseFileReader.K_IN_PLANE_Y, Direction.Y, kz);
+        boolean yFollows = follows(zSource);
         double c;
         if (l.has(CaseFileReader.HEAT_CAPACITY) || material.isEmpty()) {
             c = explicit(CaseFileReader.HEAT_CAPACITY, "the volumetric heat capacity in J/(m³ K)");
@@ -143,7 +150,15 @@ final class LayerReading {
         } else if (!last) {
             fallback(CaseFileReader.CONDUCTANCE, g, "perfect contact with the next layer");
         }
-        return new Layer(name, thickness, kz, kx, ky, c, g);
+        return new Layer(name, thickness, kz, kx, ky, c, g, Layer.Tie.of(xFollows, yFollows));
+    }
+
+    /**
+     * Whether the direction just read is one quantity with Λz: it took Λz's value by default, or the same library
+     * value as Λz (an isotropic entry's k_w_mk, a uniaxial entry's value for both). A key written for it is its own.
+     */
+    private boolean follows(String zSource) {
+        return source.equals(DEFAULT_SOURCE) || (source.startsWith(LIBRARY_SOURCE) && source.equals(zSource));
     }
 
     private enum Direction {
@@ -167,6 +182,7 @@ final class LayerReading {
         if (l.has(CaseFileReader.K_IN_PLANE)) {
             double v = CaseFileReader.positive(l, CaseFileReader.K_IN_PLANE, "the in-plane thermal conductivity");
             record(key, v, ValueOrigin.Kind.EXPLICIT, line(CaseFileReader.K_IN_PLANE), CaseFileReader.K_IN_PLANE);
+            source = "case " + CaseFileReader.K_IN_PLANE;
             return v;
         }
         if (material.isPresent()) {
@@ -224,17 +240,20 @@ final class LayerReading {
         }
         origins.add(new ValueOrigin(l.pathOf(key), name, key, v.value(), ValueOrigin.Kind.LIBRARY, line(MATERIAL),
                 how, Optional.of(v)));
+        source = LIBRARY_SOURCE + q.key();
         return v.value();
     }
 
     private double explicit(String key, String what) throws InputException {
         double v = CaseFileReader.positive(l, key, what);
         record(key, v, ValueOrigin.Kind.EXPLICIT, line(key), "");
+        source = "case " + key;
         return v;
     }
 
     private void fallback(String key, double v, String rule) {
         record(key, v, ValueOrigin.Kind.DEFAULT, -1, rule);
+        source = DEFAULT_SOURCE;
     }
 
     private void record(String key, double v, ValueOrigin.Kind kind, int line, String how) {

@@ -16,7 +16,8 @@ import lamella.api.fit.MonteCarloSummary;
 
 /**
  * The result file of {@code lamella fit}: every free parameter (as {@code layer}/{@code geometry}/{@code measurement}
- * with {@code property}, and as its one-line {@code parameter} path), value, total σ and noise σ, correlations,
+ * with {@code property}, as its one-line {@code parameter} path, and with {@code quantity} saying what a conductivity
+ * path moved), value, total σ and noise σ, correlations,
  * per-dataset reduced χ² and residuals, the uncertainty budget and Monte Carlo statistics. SI units; a value that is
  * not finite (an unidentifiable σ) is written as null.
  */
@@ -36,7 +37,7 @@ final class FitResultJson {
         ArrayNode params = root.putArray("parameters");
         for (FittedParameter p : o.parameters()) {
             ObjectNode n = params.addObject();
-            reference(n, p.ref());
+            reference(n, p.ref(), p.quantity());
             number(n, "value", p.value());
             number(n, "sigma", p.sigma());
             number(n, "sigma_noise", p.sigmaNoise());
@@ -79,7 +80,7 @@ final class FitResultJson {
                 n.put("source", "noise");
             } else {
                 n.put("source", b.source().toString());
-                reference(n.putObject("input"), b.source());
+                reference(n.putObject("input"), b.source(), b.quantity());
                 number(n, "input_sigma", b.inputSigma());
             }
             ObjectNode contributions = n.putObject("contributions");
@@ -108,7 +109,8 @@ final class FitResultJson {
         }
     }
 
-    static void reference(ObjectNode n, ParameterRef r) {
+    /** The path, its parts, and what it moved in words ("isotropic Λ") where the key alone does not say. */
+    static void reference(ObjectNode n, ParameterRef r, String quantity) {
         n.put("parameter", r.toString());
         switch (r.scope()) {
             case LAYER -> n.put("layer", r.layer());
@@ -116,6 +118,9 @@ final class FitResultJson {
             case MEASUREMENT -> n.put("measurement", r.key());
         }
         n.put("property", r.key());
+        if (!quantity.isEmpty()) {
+            n.put("quantity", quantity);
+        }
         if (r.dataset() >= 0) {
             n.put("dataset", r.dataset());
         }

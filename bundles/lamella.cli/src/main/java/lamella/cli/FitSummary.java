@@ -18,7 +18,7 @@ final class FitSummary {
         TextTable values = new TextTable("parameter", "value", "± σ (total)", "σ (noise)", "unit", "note");
         for (FittedParameter p : o.parameters()) {
             String note = !p.identifiable() ? "NOT IDENTIFIABLE" : p.atBound() ? "AT BOUND" : "";
-            values.add(p.ref().toString(), num(p.value()), num(p.sigma()) + relative(p), num(p.sigmaNoise()),
+            values.add(p.label(), num(p.value()), num(p.sigma()) + relative(p), num(p.sigmaNoise()),
                     p.ref().unit(), note);
         }
         sb.append("Fitted values (1σ)\n").append(values.render("  "));
@@ -32,7 +32,7 @@ final class FitSummary {
             String[] header = new String[o.parameters().size() + 1];
             header[0] = "source of uncertainty (1σ)";
             for (int a = 0; a < o.parameters().size(); a++) {
-                header[a + 1] = o.parameters().get(a).ref().toString();
+                header[a + 1] = o.parameters().get(a).label();
             }
             TextTable budget = new TextTable(header);
             for (BudgetLine b : o.budget()) {
@@ -57,7 +57,7 @@ final class FitSummary {
         TextTable t = new TextTable("parameter", "median", "16 %", "84 %", "2.5 %", "97.5 %", "σ MC / σ linear");
         for (int a = 0; a < o.parameters().size(); a++) {
             double[] p = mc.percentiles()[a];
-            t.add(o.parameters().get(a).ref().toString(), num(p[2]), num(p[1]), num(p[3]), num(p[0]), num(p[4]),
+            t.add(o.parameters().get(a).label(), num(p[2]), num(p[1]), num(p[3]), num(p[0]), num(p[4]),
                     String.format(Locale.ROOT, "%.2f", mc.stdOverLinearised()[a]));
         }
         return "\nMonte Carlo: " + (mc.samples() - mc.failed()) + " of " + mc.samples() + " refits converged\n"

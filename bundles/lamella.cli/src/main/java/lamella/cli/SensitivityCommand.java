@@ -49,8 +49,10 @@ public final class SensitivityCommand implements Command {
                 resolved, inputs with small |S| are not, and inputs whose curves have the same shape cannot be told
                 apart. Without --dataset the case's measurement is used; with it, that fit dataset at its data's x
                 values. The signal defaults to the one usually fitted (tdtr: ratio, fdtr: phase_deg). Writes CSV (x
-                column, then one column per input, named by its path such as film.k_through_w_mk) to --out or
-                standard output, and a ranking by the largest |S| to standard error.
+                column, then one column per input, named by its path such as film.thickness_m; a conductivity also
+                says what it moves, such as "film.k_w_mk (isotropic Λ)" or "film.k_through_w_mk (through-plane Λz)")
+                to --out or standard output, and a ranking by the largest |S| to standard error. A conductivity
+                stated once (one value, or one isotropic library value) is one input, perturbed in every direction.
                 """;
     }
 
@@ -93,7 +95,9 @@ public final class SensitivityCommand implements Command {
 
     static String csv(SensitivityTable t) {
         StringBuilder sb = new StringBuilder(t.xColumn());
-        t.parameters().forEach(p -> sb.append(',').append(p));
+        for (int j = 0; j < t.parameters().size(); j++) {
+            sb.append(',').append(t.label(j));
+        }
         sb.append('\n');
         for (int i = 0; i < t.x().length; i++) {
             sb.append(SignalCsv.number(t.x()[i]));
@@ -117,7 +121,7 @@ public final class SensitivityCommand implements Command {
         order.sort(Comparator.comparingDouble(j -> -peak[j]));
         TextTable table = new TextTable("input", t.phaseLike() ? "largest |dφ/d ln p| (°)" : "largest |S|");
         for (int j : order) {
-            table.add(t.parameters().get(j).toString(), String.format(Locale.ROOT, "%.3g", peak[j]));
+            table.add(t.label(j), String.format(Locale.ROOT, "%.3g", peak[j]));
         }
         return "Sensitivity of " + t.signal() + " over " + t.xColumn() + "\n" + table.render("  ");
     }

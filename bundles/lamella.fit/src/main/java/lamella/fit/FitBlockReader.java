@@ -49,7 +49,7 @@ final class FitBlockReader {
             if (!seen.add(ref)) {
                 throw InputException.at(e.path(), ref + " is listed twice");
             }
-            free.add(freeInput(e, ref, value(base, datasets, ref, e.path())));
+            free.add(freeInput(e, ref, base, datasets));
         }
         List<UncertainInput> uncertain = new ArrayList<>();
         for (Block e : objects(fit, "uncertain", false)) {
@@ -61,6 +61,7 @@ final class FitBlockReader {
             double v = value(base, datasets, ref, e.path());
             uncertain.add(new UncertainInput(ref, v, sigma(e, v), e.path()));
         }
+        checkDirectionsNamedOnce(free, uncertain);
         FitSpec.Weighting weighting = fit.has("weights") ? weighting(fit) : FitSpec.Weighting.AUTO;
         return new FitSpec(datasets, free, uncertain, weighting, count(fit, "multistart"), count(fit, "monte_carlo"),
                 fit.has("seed") ? (long) count(fit, "seed") : 1L);
@@ -184,8 +185,69 @@ final class FitBlockReader {
         return base.value(ref, at);
     }
 
-    private static FreeInput freeInput(Block e, ParameterRef ref, double current) throws InputException {
-        double initial = e.has("initial") ? finite(e, "initial") : current;
+    /**
+     * The isotropic Λ moves every direction, and Λr both in-plane ones: naming a direction through two paths of one
+     * layer would leave its value to the order of the list, so it is refused.
+     */
+    private static void checkDirectionsNamedOnce(List<FreeInput> free, List<UncertainInput> uncertain)
+            throws InputException {
+        List<ParameterRef> refs = new ArrayList<>();
+        List<String> paths = new ArrayList<>();
+        free.forEach(f -> {
+            refs.add(f.ref());
+            paths.add(f.path());
+        });
+        uncertain.forEach(u -> {
+            refs.add(u.ref());
+            paths.add(u.path());
+        });
+        for (int b = 0; b < refs.size(); b++) {
+            for (int a = 0; a < b; a++) {
+                ParameterRef first = refs.get(a);
+                ParameterRef second = refs.get(b);
+                if (first.scope() == ParameterRef.Scope.LAYER && second.scope() == ParameterRef.Scope.LAYER
+                        && first.layer().equals(second.layer()) && overlap(first.key(), second.key())) {
+                    throw InputException.at(paths.get(b), second + " and " + first + " (" + paths.get(a)
+                            + ") both move " + shared(first.key(), second.key()) + " of layer '" + first.layer()
+                            + "'; name each direction once: k_w_mk alone for an isotropic Λ, or k_through_w_mk with"
+                            + " k_in_plane_w_mk (or its x and y parts)");
+                }
+            }
+        }
+    }
+
+    private static boolean overlap(String a, String b) {
+        boolean aK = CaseModel.CONDUCTIVITY_KEYS.contains(a);
+        boolean bK = CaseModel.CONDUCTIVITY_KEYS.contains(b);
+        if (!aK || !bK) {
+            return false;
+        }
+        if (a.equals("k_w_mk") || b.equals("k_w_mk")) {
+            return true;
+        }
+        return (a.equals("k_in_plane_w_mk") && b.startsWith("k_in_plane_"))
+                || (b.equals("k_in_plane_w_mk") && a.startsWith("k_in_plane_"));
+    }
+
+    private static String shared(String a, String b) {
+        return a.equals("k_w_mk") || b.equals("k_w_mk") ? "the conductivity" : "an in-plane conductivity";
+    }
+
+    /**
+     * A free input from its entry. Its current value is the default start; an isotropic Λ fitted on a layer whose
+     * directions differ has no current value and needs {@code initial} (the fit then makes the layer isotropic).
+     */
+    private static FreeInput freeInput(Block e, ParameterRef ref, CaseModel base, List<DatasetSpec> datasets)
+            throws InputException {
+        boolean startGiven = e.has("initial");
+        double initial;
+        if (startGiven && ref.scope() == ParameterRef.Scope.LAYER && ref.key().equals("k_w_mk")) {
+            base.value(ParameterRef.layer(ref.layer(), "k_through_w_mk"), e.path());
+            initial = finite(e, "initial");
+        } else {
+            double current = value(base, datasets, ref, e.path());
+            initial = startGiven ? finite(e, "initial") : current;
+        }
         double min = e.has("min") ? finite(e, "min") : Double.NEGATIVE_INFINITY;
         double max = e.has("max") ? finite(e, "max") : Double.POSITIVE_INFINITY;
         if (min >= max) {

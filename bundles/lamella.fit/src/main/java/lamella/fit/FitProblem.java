@@ -39,9 +39,12 @@ final class FitProblem {
     }
 
     static FitProblem of(CaseDocument doc, FitSpec spec, ModelCatalog catalog) throws InputException {
+        List<ParameterRef> named = new ArrayList<>();
+        spec.free().forEach(f -> named.add(f.ref()));
+        spec.uncertain().forEach(u -> named.add(u.ref()));
         List<PreparedDataset> prepared = new ArrayList<>();
         for (DatasetSpec d : spec.datasets()) {
-            prepared.add(prepare(doc, d, catalog, spec.weighting()));
+            prepared.add(prepare(doc, d, catalog, spec.weighting(), named));
         }
         FitProblem p = new FitProblem(prepared, spec, catalog);
         for (FreeInput f : spec.free()) {
@@ -58,10 +61,11 @@ final class FitProblem {
     }
 
     private static PreparedDataset prepare(CaseDocument doc, DatasetSpec d, ModelCatalog catalog,
-                                           FitSpec.Weighting weighting) throws InputException {
+                                           FitSpec.Weighting weighting, List<ParameterRef> named)
+            throws InputException {
         Block geometry = d.geometry() != null ? d.geometry() : doc.geometry();
         Block measurement = d.measurement() != null ? d.measurement() : doc.measurement();
-        CaseModel model = new CaseModel(doc.stack(), geometry, measurement);
+        CaseModel model = new CaseModel(doc.stack(), geometry, measurement).apartFor(named);
         Simulation sim = model.simulation(catalog);
         Technique t = sim.technique();
         String signal = d.signal() != null ? d.signal() : Signals.usual(t.type()).orElseThrow(() ->
@@ -119,6 +123,11 @@ final class FitProblem {
                         + e.getMessage());
             }
         }
+    }
+
+    /** What a path of this fit moves, in words for its labels (the stack is shared by every dataset). */
+    String quantity(ParameterRef ref) {
+        return datasets.get(0).model.quantity(ref);
     }
 
     int points() {

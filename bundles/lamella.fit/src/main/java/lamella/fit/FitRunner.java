@@ -78,7 +78,7 @@ final class FitRunner {
         for (int a = 0; a < p; a++) {
             noiseNatural[a] = sigmaU[a] * problem.free.get(a).dPdU(u[a]);
         }
-        budget.add(new BudgetLine(null, 0, noiseNatural));
+        budget.add(new BudgetLine(null, "", 0, noiseNatural));
         double[] totalVar = new double[p];
         for (int a = 0; a < p; a++) {
             totalVar[a] = noiseNatural[a] * noiseNatural[a];
@@ -90,7 +90,7 @@ final class FitRunner {
                 totalVar[a] += c[a] * c[a];
             }
             UncertainInput in = problem.uncertain.get(k);
-            budget.add(new BudgetLine(in.ref(), in.sigma(), c));
+            budget.add(new BudgetLine(in.ref(), problem.quantity(in.ref()), in.sigma(), c));
         }
         for (int a = 0; a < p; a++) {
             FreeInput f = problem.free.get(a);
@@ -101,14 +101,15 @@ final class FitRunner {
             boolean identifiable = !singular && relative <= IDENTIFIABLE_LIMIT;
             double value = f.toP(u[a]);
             double total = singular ? Double.POSITIVE_INFINITY : Math.sqrt(totalVar[a]);
-            fitted.add(new FittedParameter(f.ref(), f.initial(), value, total,
-                    singular ? Double.POSITIVE_INFINITY : noiseNatural[a], atBound, identifiable));
+            FittedParameter fp = new FittedParameter(f.ref(), problem.quantity(f.ref()), f.initial(), value, total,
+                    singular ? Double.POSITIVE_INFINITY : noiseNatural[a], atBound, identifiable);
+            fitted.add(fp);
             if (atBound) {
-                warnings.add(f.ref() + " ended on a bound of its range; it is not a minimum there and its σ is not"
+                warnings.add(fp.label() + " ended on a bound of its range; it is not a minimum there and its σ is not"
                         + " meaningful — widen the range or fix the input");
             }
             if (!identifiable) {
-                warnings.add(f.ref() + " is not identifiable from these data"
+                warnings.add(fp.label() + " is not identifiable from these data"
                         + (singular ? " (the data cannot tell it apart from the other free inputs)"
                         : String.format(Locale.ROOT, ": ±%.0f %% (1σ)", 100 * relative))
                         + "; fix it at a known value, or add data sensitive to it (see `lamella sensitivity`)");
@@ -119,7 +120,7 @@ final class FitRunner {
             for (int b = a + 1; b < p; b++) {
                 if (Math.abs(correlation[a][b]) > CORRELATION_WARNING) {
                     warnings.add(String.format(Locale.ROOT, "%s and %s are correlated by %.3f: the data determine"
-                            + " mainly a combination of the two", problem.free.get(a).ref(), problem.free.get(b).ref(),
+                            + " mainly a combination of the two", fitted.get(a).label(), fitted.get(b).label(),
                             correlation[a][b]));
                 }
             }

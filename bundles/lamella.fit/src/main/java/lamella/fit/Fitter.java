@@ -124,7 +124,7 @@ public final class Fitter implements FitService {
             PreparedDataset d = problem.datasets.get(dataset);
             SensitivityTable t = Sensitivities.of(d.model, catalog, d.xColumn, d.x, signal != null ? signal : d.signal);
             return new SensitivityTable(t.xColumn(), t.x(), t.signal(), t.phaseLike(),
-                    t.parameters().stream().map(r -> named(r, d.spec)).toList(), t.values());
+                    t.parameters().stream().map(r -> named(r, d.spec)).toList(), t.quantities(), t.values());
         } catch (InputException e) {
             throw doc.locate(e);
         }

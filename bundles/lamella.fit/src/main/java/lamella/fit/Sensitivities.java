@@ -10,7 +10,8 @@ import lamella.api.fit.SensitivityTable;
 
 /**
  * S = ∂ln|s|/∂ln p — or ∂φ/∂ln p in degrees for a phase — of one signal over x, for every numeric input, by central
- * differences of ±0.1 % in p (common practice, no source).
+ * differences of ±0.1 % in p (common practice, no source). A conductivity stated once is perturbed in every
+ * direction at once, as the fit moves it.
  */
 final class Sensitivities {
 
@@ -37,6 +38,8 @@ final class Sensitivities {
             }
             values[j] = s;
         }
-        return new SensitivityTable(xColumn, x.clone(), signal, phase, new ArrayList<>(refs), values);
+        List<String> quantities = new ArrayList<>();
+        refs.forEach(r -> quantities.add(model.quantity(r)));
+        return new SensitivityTable(xColumn, x.clone(), signal, phase, refs, quantities, values);
     }
 }

@@ -112,7 +112,7 @@ class FitTest {
         FitOutcome o = Synthetic.fitter().fit(doc, FitSettings.defaults(), Progress.NONE);
         FittedParameter inPlane = o.parameters().get(1);
         assertFalse(inPlane.identifiable(), inPlane.toString());
-        assertTrue(o.warnings().stream().anyMatch(w -> w.startsWith("film.k_in_plane_w_mk is not identifiable")),
+        assertTrue(o.warnings().stream().anyMatch(w -> w.startsWith("film.k_in_plane_w_mk (in-plane Λr) is not identifiable")),
                 o.warnings().toString());
         assertTrue(o.parameters().get(0).identifiable(), "the through-plane conductivity still is");
     }

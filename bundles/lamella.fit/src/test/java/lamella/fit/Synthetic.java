@@ -16,6 +16,7 @@ import lamella.casefile.CaseFileReader;
 import lamella.engine.Engine;
 import lamella.geometry.gaussian.GaussianBeams;
 import lamella.geometry.line.LineHeater;
+import lamella.geometry.point.PointSource;
 import lamella.technique.fdtr.FrequencyDomain;
 import lamella.technique.sstr.SteadyState;
 import lamella.technique.tdtr.TimeDomain;
@@ -28,7 +29,7 @@ import lamella.technique.threeomega.ThreeOmega;
  */
 final class Synthetic {
 
-    static final List<HeatingGeometry> GEOMETRIES = List.of(new GaussianBeams(), new LineHeater());
+    static final List<HeatingGeometry> GEOMETRIES = List.of(new GaussianBeams(), new LineHeater(), new PointSource());
     static final List<Technique> TECHNIQUES = List.of(new FrequencyDomain(), new TimeDomain(), new SteadyState(),
             new ThreeOmega());
     static final ModelCatalog CATALOG = new ModelCatalog(GEOMETRIES, TECHNIQUES, new Engine());

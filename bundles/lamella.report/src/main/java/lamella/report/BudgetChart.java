@@ -32,11 +32,11 @@ final class BudgetChart {
         List<FittedParameter> ps = o.parameters();
         for (BudgetLine line : o.budget()) {
             for (int p = 0; p < ps.size(); p++) {
-                bars.addValue(percentOfValue(o, line.contributions()[p], p), line.label(), ps.get(p).ref().toString());
+                bars.addValue(percentOfValue(o, line.contributions()[p], p), line.label(), ps.get(p).label());
             }
         }
         for (int p = 0; p < ps.size(); p++) {
-            bars.addValue(percentOfValue(o, ps.get(p).sigma(), p), Budget.TOTAL, ps.get(p).ref().toString());
+            bars.addValue(percentOfValue(o, ps.get(p).sigma(), p), Budget.TOTAL, ps.get(p).label());
         }
         BarRenderer renderer = new BarRenderer();
         renderer.setBarPainter(new StandardBarPainter());

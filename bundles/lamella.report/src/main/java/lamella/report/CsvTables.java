@@ -12,7 +12,8 @@ import lamella.api.fit.MonteCarloSummary;
 /**
  * The numbers of a report as comma-separated tables: a header row, full precision, a point as decimal mark, and
  * units either in the header (by the case-file suffix convention, such as {@code frequency_hz}) or, where rows
- * differ in unit, in a unit column beside the value.
+ * differ in unit, in a unit column beside the value. Parameters are named by their paths; parameters.csv says in its
+ * quantity column what a conductivity path moved ("isotropic Λ").
  */
 final class CsvTables {
 
@@ -20,10 +21,10 @@ final class CsvTables {
     }
 
     static String parameters(FitOutcome o) {
-        Csv csv = new Csv("parameter", "unit", "initial", "value", "sigma_total", "sigma_noise", "at_bound",
-                "identifiable");
+        Csv csv = new Csv("parameter", "quantity", "unit", "initial", "value", "sigma_total", "sigma_noise",
+                "at_bound", "identifiable");
         for (FittedParameter p : o.parameters()) {
-            csv.row(p.ref().toString(), p.ref().unit(), number(p.initial()), number(p.value()), number(p.sigma()),
+            csv.row(p.ref().toString(), p.quantity(), p.ref().unit(), number(p.initial()), number(p.value()), number(p.sigma()),
                     number(p.sigmaNoise()), Boolean.toString(p.atBound()), Boolean.toString(p.identifiable()));
         }
         return csv.text();

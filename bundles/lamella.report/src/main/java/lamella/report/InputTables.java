@@ -36,9 +36,13 @@ final class InputTables {
             boolean last = i == layers.size() - 1;
             h.raw("<tr><th scope=\"row\">").text(l.name()).raw("</th>");
             cell(h, free, l, l.isSemiInfinite() ? "semi-infinite" : Numbers.plain(l.thickness()), "thickness_m");
-            cell(h, free, l, Numbers.plain(l.kThrough()), "k_through_w_mk");
-            cell(h, free, l, Numbers.plain(l.kInPlaneX()), "k_in_plane_x_w_mk", "k_in_plane_w_mk");
-            cell(h, free, l, Numbers.plain(l.kInPlaneY()), "k_in_plane_y_w_mk", "k_in_plane_w_mk");
+            boolean throughX = l.tie().x();
+            boolean throughY = l.tie().y();
+            cell(h, free, l, Numbers.plain(l.kThrough()), "k_through_w_mk", "k_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneX()), "k_in_plane_x_w_mk", "k_in_plane_w_mk", "k_w_mk",
+                    throughX ? "k_through_w_mk" : "k_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneY()), "k_in_plane_y_w_mk", "k_in_plane_w_mk", "k_w_mk",
+                    throughY ? "k_through_w_mk" : "k_w_mk");
             cell(h, free, l, Numbers.plain(l.heatCapacity()), "heat_capacity_j_m3k");
             String g = last ? "—" : l.hasPerfectContactBelow() ? "perfect contact" : Numbers.plain(l.conductanceBelow());
             cell(h, free, l, g, "conductance_below_w_m2k");

@@ -87,6 +87,7 @@ final class ResultJson {
         for (FittedParameter p : o.parameters()) {
             ObjectNode n = params.addObject();
             n.put("name", p.ref().toString());
+            quantity(n, p.quantity());
             n.put("unit", p.ref().unit());
             number(n, "initial", p.initial());
             number(n, "value", p.value());
@@ -118,6 +119,7 @@ final class ResultJson {
         for (BudgetLine line : o.budget()) {
             ObjectNode n = budget.addObject();
             n.put("source", line.source() == null ? null : line.source().toString());
+            quantity(n, line.quantity());
             number(n, "input_sigma", line.inputSigma());
             n.put("input_unit", Budget.inputUnit(line));
             n.set("contributions", numbers(line.contributions()));
@@ -148,8 +150,12 @@ final class ResultJson {
         n.put("phase_like", t.phaseLike());
         n.set("x", numbers(t.x()));
         ObjectNode values = n.putObject("values");
+        ObjectNode quantities = n.putObject("quantities");
         for (int p = 0; p < t.parameters().size(); p++) {
             values.set(t.parameters().get(p).toString(), numbers(t.values()[p]));
+            if (!t.quantities().get(p).isEmpty()) {
+                quantities.put(t.parameters().get(p).toString(), t.quantities().get(p));
+            }
         }
         return n;
     }
@@ -179,6 +185,13 @@ final class ResultJson {
             return MAPPER.getNodeFactory().booleanNode(flag);
         }
         return MAPPER.getNodeFactory().textNode(String.valueOf(v));
+    }
+
+    /** What a conductivity path moved ("isotropic Λ"), where its key alone does not say. */
+    private static void quantity(ObjectNode n, String quantity) {
+        if (!quantity.isEmpty()) {
+            n.put("quantity", quantity);
+        }
     }
 
     private static void number(ObjectNode n, String key, double v) {

@@ -24,7 +24,7 @@ final class ResultTables {
         for (int i = 0; i < o.parameters().size(); i++) {
             FittedParameter p = o.parameters().get(i);
             String unit = p.ref().unit();
-            h.raw("<tr><th scope=\"row\">").text(p.ref().toString()).raw("</th>");
+            h.raw("<tr><th scope=\"row\">").text(p.label()).raw("</th>");
             h.raw("<td class=\"value\">").text(withUnit(Numbers.withSigma(p.value(), p.sigma()), unit)).raw("</td>");
             h.raw("<td>").text(withUnit(Numbers.plain(p.sigmaNoise()), unit)).raw("</td>");
             h.raw("<td>").text(Numbers.percent(Budget.relativeToValue(o, p.sigma(), i)))
@@ -57,12 +57,12 @@ final class ResultTables {
     /** Cells tinted by |r|, blue for positive and red for negative, so that strong pairs stand out at a glance. */
     static void correlation(Html h, FitOutcome o) {
         List<String> header = new ArrayList<>(List.of("r (" + ColumnWords.DIMENSIONLESS + ")"));
-        o.parameters().forEach(p -> header.add(p.ref().toString()));
+        o.parameters().forEach(p -> header.add(p.label()));
         h.raw("<table class=\"matrix\"><thead>");
         h.headRow(header);
         h.raw("</thead><tbody>\n");
         for (int i = 0; i < o.parameters().size(); i++) {
-            h.raw("<tr><th scope=\"row\">").text(o.parameters().get(i).ref().toString()).raw("</th>");
+            h.raw("<tr><th scope=\"row\">").text(o.parameters().get(i).label()).raw("</th>");
             for (int j = 0; j < o.parameters().size(); j++) {
                 double r = o.correlation()[i][j];
                 String tint = i == j || !Double.isFinite(r) ? ""
@@ -77,7 +77,7 @@ final class ResultTables {
 
     static void budget(Html h, FitOutcome o) {
         List<String> header = new ArrayList<>(List.of("source", "input 1σ"));
-        o.parameters().forEach(p -> header.add("contribution to σ of " + p.ref()));
+        o.parameters().forEach(p -> header.add("contribution to σ of " + p.label()));
         h.raw("<table class=\"results budget\"><thead>");
         h.headRow(header);
         h.raw("</thead><tbody>\n");
@@ -111,7 +111,7 @@ final class ResultTables {
         h.raw("</thead><tbody>\n");
         for (int p = 0; p < o.parameters().size(); p++) {
             String unit = o.parameters().get(p).ref().unit();
-            List<String> cells = new ArrayList<>(List.of(o.parameters().get(p).ref().toString(),
+            List<String> cells = new ArrayList<>(List.of(o.parameters().get(p).label(),
                     unit.isEmpty() ? "—" : unit, Numbers.plain(mc.mean()[p]), Numbers.plain(mc.std()[p])));
             for (double v : mc.percentiles()[p]) {
                 cells.add(Numbers.plain(v));

@@ -24,7 +24,7 @@ final class SensitivityChart {
         XYSeriesCollection curves = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int p = 0; p < t.parameters().size(); p++) {
-            XYSeries s = new XYSeries(t.parameters().get(p).toString(), false, true);
+            XYSeries s = new XYSeries(t.label(p), false, true);
             for (int i = 0; i < t.x().length; i++) {
                 s.add(t.x()[i], t.values()[p][i]);
             }

@@ -84,7 +84,8 @@ class FitReportWriterTest {
         assertSvgText("dataset-1-fit.svg", "pump–probe delay (s)", "ratio −V_in/V_out (dimensionless)");
         assertSvgText("dataset-1-residuals.svg", "pump–probe delay (s)",
                 "normalised residual (data − model)/σ (dimensionless)");
-        assertSvgText("sensitivity-0.svg", "∂φ/∂ln p (°)", "film.k_through_w_mk", "transducer.thickness_m");
+        assertSvgText("sensitivity-0.svg", "∂φ/∂ln p (°)", "film.k_through_w_mk (through-plane Λz)",
+                "transducer.thickness_m");
         assertSvgText("sensitivity-1.svg", "S = ∂ln(signal)/∂ln p (dimensionless)", "pump–probe delay (s)");
         assertSvgText("budget.svg", "1σ contribution relative to the fitted value (%)", "noise of the data",
                 "transducer.thickness_m", "total");
@@ -93,7 +94,7 @@ class FitReportWriterTest {
     @Test
     void thePageNamesEveryParameterWithValueAndUnitAndShowsTheWarning() throws IOException {
         String html = Files.readString(page);
-        assertTrue(html.contains("film.k_through_w_mk"));
+        assertTrue(html.contains("film.k_through_w_mk (through-plane Λz)"), "says which conductivity it was");
         // values and units are joined by no-break spaces (U+00A0) so that a unit never wraps
         assertTrue(html.contains("1.400 ± 0.070\u00a0W/(m\u00a0K)"), "film conductivity with σ and unit");
         assertTrue(html.contains("(1.20 ± 0.15) × 10⁸\u00a0W/(m²\u00a0K)"), "boundary conductance with σ and unit");
@@ -139,7 +140,7 @@ class FitReportWriterTest {
 
     @Test
     void theCsvFilesStartWithTheirHeaders() throws IOException {
-        assertEquals("parameter,unit,initial,value,sigma_total,sigma_noise,at_bound,identifiable",
+        assertEquals("parameter,quantity,unit,initial,value,sigma_total,sigma_noise,at_bound,identifiable",
                 firstLine("parameters.csv"));
         assertEquals("parameter,film.k_through_w_mk,transducer.conductance_below_w_m2k,geometry.pump_radius_m",
                 firstLine("correlation.csv"));
@@ -154,7 +155,7 @@ class FitReportWriterTest {
         assertEquals(1 + SyntheticFit.PHASE_POINTS, lines("dataset-0-fit.csv").size());
         assertEquals(1 + SyntheticFit.RATIO_POINTS, lines("dataset-1-fit.csv").size());
         assertEquals(1 + 3 * 3 + 3, lines("budget.csv").size(), "three sources by three parameters, three totals");
-        assertEquals("film.k_through_w_mk,W/(m K),1.000000000000e+00,1.400000000000e+00,7.000000000000e-02,"
+        assertEquals("film.k_through_w_mk,through-plane Λz,W/(m K),1.000000000000e+00,1.400000000000e+00,7.000000000000e-02,"
                 + "3.100000000000e-02,false,true", lines("parameters.csv").get(1));
     }
 
@@ -167,6 +168,9 @@ class FitReportWriterTest {
         assertTrue(json.at("/case/stack/layers/2/thickness_m").isNull(), "no thickness for a semi-infinite layer");
         assertEquals(6.0e-6, json.at("/case/geometry/pump_radius_m").asDouble());
         assertEquals("film.k_through_w_mk", json.at("/fit/parameters/0/name").asText());
+        assertEquals("through-plane Λz", json.at("/fit/parameters/0/quantity").asText());
+        assertTrue(json.at("/fit/parameters/1/quantity").isMissingNode(), "a boundary conductance needs no words");
+        assertEquals("through-plane Λz", json.at("/sensitivities/0/quantities/film.k_through_w_mk").asText());
         assertEquals(1.2e8, json.at("/fit/parameters/1/value").asDouble());
         assertEquals(SyntheticFit.WARNING, json.at("/fit/warnings/0").asText());
         assertEquals(SyntheticFit.RATIO_POINTS, json.at("/fit/datasets/1/model").size());

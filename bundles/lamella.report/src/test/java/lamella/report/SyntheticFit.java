@@ -61,14 +61,14 @@ final class SyntheticFit {
 
     static FitOutcome outcome() {
         List<FittedParameter> parameters = List.of(
-                new FittedParameter(FILM_K, 1.0, 1.4, 0.07, 0.031, false, true),
-                new FittedParameter(TRANSDUCER_G, 1.0e8, 1.2e8, 1.5e7, 8.0e6, false, true),
-                new FittedParameter(PUMP_RADIUS, 6.0e-6, 6.0e-6, 2.5e-7, 1.0e-7, true, true));
+                new FittedParameter(FILM_K, "through-plane Λz", 1.0, 1.4, 0.07, 0.031, false, true),
+                new FittedParameter(TRANSDUCER_G, "", 1.0e8, 1.2e8, 1.5e7, 8.0e6, false, true),
+                new FittedParameter(PUMP_RADIUS, "", 6.0e-6, 6.0e-6, 2.5e-7, 1.0e-7, true, true));
         double[][] correlation = {{1, 0.93, -0.2}, {0.93, 1, -0.1}, {-0.2, -0.1, 1}};
         List<BudgetLine> budget = List.of(
-                new BudgetLine(null, 0, new double[]{0.031, 8.0e6, 1.0e-7}),
-                new BudgetLine(TRANSDUCER_D, 2.0e-9, new double[]{0.055, 1.1e7, 2.0e-7}),
-                new BudgetLine(TRANSDUCER_C, 7.0e4, new double[]{0.03, 6.0e6, 1.1e-7}));
+                new BudgetLine(null, "", 0, new double[]{0.031, 8.0e6, 1.0e-7}),
+                new BudgetLine(TRANSDUCER_D, "", 2.0e-9, new double[]{0.055, 1.1e7, 2.0e-7}),
+                new BudgetLine(TRANSDUCER_C, "", 7.0e4, new double[]{0.03, 6.0e6, 1.1e-7}));
         MonteCarloSummary mc = new MonteCarloSummary(200, 3, new double[]{1.41, 1.21e8, 6.01e-6},
                 new double[]{0.075, 1.6e7, 2.6e-7},
                 new double[][]{{1.26, 1.33, 1.41, 1.48, 1.56}, {0.9e8, 1.05e8, 1.21e8, 1.37e8, 1.52e8},
@@ -80,12 +80,13 @@ final class SyntheticFit {
 
     static List<SensitivityTable> sensitivities() {
         List<ParameterRef> refs = List.of(FILM_K, TRANSDUCER_G, PUMP_RADIUS, TRANSDUCER_D);
+        List<String> quantities = List.of("through-plane Λz", "", "", "");
         DatasetFit phase = phaseDataset();
         DatasetFit ratio = ratioDataset();
         return List.of(
-                new SensitivityTable(phase.xColumn(), phase.x(), phase.signal(), true, refs,
+                new SensitivityTable(phase.xColumn(), phase.x(), phase.signal(), true, refs, quantities,
                         curves(phase.x(), 1e4, new double[]{-4, 2.5, 1.2, -0.8})),
-                new SensitivityTable(ratio.xColumn(), ratio.x(), ratio.signal(), false, refs,
+                new SensitivityTable(ratio.xColumn(), ratio.x(), ratio.signal(), false, refs, quantities,
                         curves(ratio.x(), 1e-10, new double[]{0.6, -0.3, 0.2, -0.45})));
     }
 

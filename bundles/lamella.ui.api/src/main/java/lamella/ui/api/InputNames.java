@@ -9,6 +9,7 @@ public final class InputNames {
 
     private static final Map<String, String> LAYER_KEYS = Map.of(
             "thickness_m", "thickness",
+            "k_w_mk", "isotropic Λ",
             "k_through_w_mk", "Λ through",
             "k_in_plane_w_mk", "Λ in-plane",
             "k_in_plane_x_w_mk", "Λ in-plane x",

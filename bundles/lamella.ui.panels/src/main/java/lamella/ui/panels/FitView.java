@@ -275,7 +275,7 @@ final class FitView implements PanelView {
             DisplayUnit u = DisplayUnit.of(p.ref());
             String note = p.atBound() ? "ended on a bound: σ not meaningful"
                     : !p.identifiable() ? "not determined by the data" : "";
-            rows.add(new String[] {Words.parameter(p.ref()), NumberText.format(u.shown(p.value())),
+            rows.add(new String[] {Words.parameter(p.ref(), p.quantity()), NumberText.format(u.shown(p.value())),
                     "± " + NumberText.format(u.shown(p.sigma())), NumberText.format(u.shown(p.sigmaNoise())),
                     u.unit(), note});
         }
@@ -286,7 +286,7 @@ final class FitView implements PanelView {
         for (int i = 0; i < ps.size(); i++) {
             ch[i + 1] = "(" + (i + 1) + ")";
             String[] r = new String[ps.size() + 1];
-            r[0] = "(" + (i + 1) + ") " + Words.parameter(ps.get(i).ref());
+            r[0] = "(" + (i + 1) + ") " + Words.parameter(ps.get(i).ref(), ps.get(i).quantity());
             for (int j = 0; j < ps.size(); j++) {
                 r[j + 1] = String.format(java.util.Locale.ROOT, "%+.3f", o.correlation()[i][j]).replace('-', '−');
             }
@@ -302,7 +302,7 @@ final class FitView implements PanelView {
         List<String[]> brows = new ArrayList<>();
         for (BudgetLine b : o.budget()) {
             String[] r = new String[ps.size() + 2];
-            r[0] = b.source() == null ? b.label() : Words.parameter(b.source());
+            r[0] = b.source() == null ? b.label() : Words.parameter(b.source(), b.quantity());
             r[1] = b.source() == null ? "—" : inputSigma(b.source(), b.inputSigma());
             for (int i = 0; i < ps.size(); i++) {
                 r[i + 2] = NumberText.format(DisplayUnit.of(ps.get(i).ref()).shown(b.contributions()[i]));

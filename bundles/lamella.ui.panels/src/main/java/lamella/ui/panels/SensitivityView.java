@@ -162,7 +162,7 @@ final class SensitivityView implements PanelView {
         XYSeriesCollection set = new XYSeriesCollection();
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         for (int p = 0; p < t.parameters().size(); p++) {
-            XYSeries s = new XYSeries(Words.parameter(t.parameters().get(p)), false, true);
+            XYSeries s = new XYSeries(Words.parameter(t.parameters().get(p), t.quantities().get(p)), false, true);
             for (int i = 0; i < t.x().length; i++) {
                 s.add(t.x()[i], t.values()[p][i], false);
             }

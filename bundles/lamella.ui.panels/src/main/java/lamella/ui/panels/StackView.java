@@ -323,12 +323,17 @@ final class StackView implements PanelView {
             selectedLabel.setText("Click a value to edit it and to set its role in a fit.");
             return;
         }
-        selectedLabel.setText("Role in a fit of " + Words.parameter(ref) + ":");
+        selectedLabel.setText("Role in a fit of " + named(ref) + ":");
         Project.Role role = project.role(ref);
         roleCombo.select(role.ordinal());
         double s = project.relativeSigma(ref);
         sigmaText.setText(Double.isNaN(s) ? "" : NumberText.format(100 * s));
         selectedLabel.getParent().layout(true);
+    }
+
+    /** The selected value's name, saying when a conductivity stated once moves every direction. */
+    private String named(ParameterRef ref) {
+        return Words.parameter(ref, project.model().map(m -> m.quantity(ref)).orElse(""));
     }
 
     private void applyRole() {
@@ -340,7 +345,7 @@ final class StackView implements PanelView {
             case 2 -> {
                 Double pct = NumberText.parse(sigmaText.getText());
                 if (pct == null || !(pct > 0)) {
-                    status.show("σ of " + Words.parameter(selected) + ": "
+                    status.show("σ of " + named(selected) + ": "
                             + (pct == null ? NumberText.notANumber(sigmaText.getText()) : "a σ is positive")
                             + "; give it in % of the value, such as 3", StatusLine.Tone.PROBLEM);
                     return;

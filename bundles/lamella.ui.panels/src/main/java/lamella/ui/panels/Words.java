@@ -53,6 +53,18 @@ final class Words {
         return InputNames.of(ref);
     }
 
+    /**
+     * The same, with what the path moves where its key alone does not say: "film · Λ through (isotropic Λ)" for a
+     * conductivity stated once.
+     *
+     * @param quantity from {@link lamella.api.CaseModel#quantity}, or empty
+     */
+    static String parameter(ParameterRef ref, String quantity) {
+        String name = parameter(ref);
+        boolean said = quantity.isEmpty() || ref.key().equals("k_w_mk");
+        return said ? name : name + " (" + quantity + ")";
+    }
+
     /** A case-file key in words, without its unit suffix: {@code pump_radius_m} → "pump radius". */
     static String key(String key) {
         return InputNames.key(key);

@@ -27,7 +27,7 @@ class FitPanelTest {
                     .filter(p -> p.ref().equals(ParameterRef.layer("film", "k_through_w_mk"))).findFirst().orElseThrow();
             boolean found = false;
             for (int i = 0; i < v.results().getItemCount(); i++) {
-                if (v.results().getItem(i).getText(0).equals("film · Λ through")) {
+                if (v.results().getItem(i).getText(0).equals("film · Λ through (isotropic Λ)")) {
                     assertEquals(NumberText.format(film.value()), v.results().getItem(i).getText(1));
                     assertEquals("W/(m K)", v.results().getItem(i).getText(4));
                     found = true;
