@@ -2,6 +2,7 @@ package lamella.launcher;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -13,8 +14,8 @@ import org.osgi.framework.launch.Framework;
 
 /**
  * A running Lamella runtime: an embedded Felix on a runtime folder ({@code lib/}, {@code bundle/}, {@code plugins/},
- * {@code conf/}) with every shipped bundle started and FileInstall watching the plugins folder. Tests start it the
- * same way the launcher does.
+ * {@code conf/}) with the shipped bundles of its {@link RuntimeScope} started and FileInstall watching the plugins
+ * folder. Tests start it the same way the launcher does.
  */
 public final class FelixRuntime implements AutoCloseable {
 
@@ -37,11 +38,21 @@ public final class FelixRuntime implements AutoCloseable {
     }
 
     /**
-     * Starts the runtime in {@code home}.
+     * Starts the runtime in {@code home} with every shipped bundle, as the workbench has it.
      *
      * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
      */
     public static FelixRuntime start(Path home, Map<String, String> overrides) throws IOException, BundleException {
+        return start(home, overrides, RuntimeScope.WORKBENCH);
+    }
+
+    /**
+     * Starts the runtime in {@code home} with the shipped bundles the scope needs.
+     *
+     * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
+     */
+    public static FelixRuntime start(Path home, Map<String, String> overrides, RuntimeScope scope)
+            throws IOException, BundleException {
         StorageArea storage = StorageArea.create();
         Felix framework = null;
         try {
@@ -49,14 +60,22 @@ public final class FelixRuntime implements AutoCloseable {
                     storage.folder());
             Path pluginsDir = Path.of(properties.get(RuntimeProperties.PLUGINS_DIR));
             List<Path> pluginsAtLaunch = ShippedBundles.jarsIn(pluginsDir);
-            List<Path> shipped = ShippedBundles.jarsIn(home.resolve("bundle"));
+            List<Path> shipped = new ArrayList<>(ShippedBundles.jarsIn(home.resolve("bundle")));
+            List<Path> desktop = ShippedBundles.jarsIn(home.resolve("bundle/" + ShippedBundles.DESKTOP_FOLDER));
+            List<Path> installedOnly = List.of();
+            if (scope == RuntimeScope.WORKBENCH) {
+                shipped.addAll(desktop);
+            } else {
+                installedOnly = desktop;
+            }
 
             Map<String, Object> config = new HashMap<>(properties);
             config.put(FelixConstants.LOG_LOGGER_PROP, new StandardErrorLog());
             framework = new Felix(config);
             framework.start();
             // Started once the framework runs, so that a bundle that cannot start says why here.
-            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped);
+            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped,
+                    installedOnly);
             return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems));
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {

@@ -38,7 +38,8 @@ public final class Main {
         String[] commandLine = args.length == 0 ? new String[] {"help"} : args;
         FelixRuntime runtime;
         try {
-            runtime = FelixRuntime.start(home(), Map.of());
+            RuntimeScope scope = workbench ? RuntimeScope.WORKBENCH : RuntimeScope.COMMANDS;
+            runtime = FelixRuntime.start(home(), Map.of(), scope);
         } catch (Exception e) {
             System.err.println("lamella: could not start the runtime: " + e.getMessage());
             return FAILED;

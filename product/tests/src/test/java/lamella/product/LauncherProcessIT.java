@@ -87,6 +87,23 @@ class LauncherProcessIT {
         }
     }
 
+    /** A command leaves the desktop bundles unstarted, but a plugin that imports their packages still goes live. */
+    @Test
+    void aPluginThatNeedsTheDesktopStillLoadsForACommand() throws Exception {
+        Path panel = home.resolve("plugins/lab-panel.jar");
+        TestBundles.write(panel, "lamella.test.panel", Map.of("Import-Package",
+                "org.eclipse.swt.widgets,lamella.ui.api"));
+        try {
+            Run run = launch("help");
+
+            assertEquals(0, run.status(), run.err());
+            assertEquals("", run.err());
+            assertTrue(run.out().startsWith("usage: lamella COMMAND"), run.out());
+        } finally {
+            Files.delete(panel);
+        }
+    }
+
     @Test
     void frameworkPropertiesGivenWithDashDReachTheRuntime() throws Exception {
         Path elsewhere = Files.createDirectories(userDir.resolve("other-plugins"));
