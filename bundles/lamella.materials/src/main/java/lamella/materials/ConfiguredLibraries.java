@@ -14,8 +14,8 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Deactivate;
 
 /**
- * The facility and user libraries named by the runtime's configuration, each read once at start and offered as a
- * {@link MaterialLibrary}. A folder that is named but missing is offered as an empty library with a finding, so the
+ * The facility and user libraries named by the runtime's configuration, each offered as a {@link MaterialLibrary} at
+ * start and read once, when first asked for. A folder that is named but missing is offered as an empty library with a finding, so the
  * problem shows wherever libraries are listed instead of disappearing.
  */
 @Component(immediate = true, service = {})
@@ -33,10 +33,11 @@ public final class ConfiguredLibraries {
     void activate(BundleContext context) {
         Path base = Path.of(Optional.ofNullable(context.getProperty(WORKING_DIRECTORY))
                 .orElse(System.getProperty("user.dir")));
-        folder(context.getProperty(FACILITY), base).ifPresent(f -> registrations.add(
-                LibraryExtender.register(context, LibraryFolder.read(f, LibraryTier.FACILITY))));
+        folder(context.getProperty(FACILITY), base).ifPresent(f -> registrations.add(LibraryExtender.register(context,
+                LibraryTier.FACILITY, () -> LibraryFolder.read(f, LibraryTier.FACILITY))));
         userFolder(context.getProperty(USER), base, Path.of(System.getProperty("user.home"))).ifPresent(f ->
-                registrations.add(LibraryExtender.register(context, LibraryFolder.read(f, LibraryTier.USER))));
+                registrations.add(LibraryExtender.register(context, LibraryTier.USER,
+                        () -> LibraryFolder.read(f, LibraryTier.USER))));
     }
 
     @Deactivate

@@ -7,6 +7,7 @@ import java.util.Dictionary;
 import java.util.Enumeration;
 import java.util.Hashtable;
 import java.util.List;
+import java.util.function.Supplier;
 import lamella.api.material.LibraryTier;
 import lamella.api.material.MaterialLibrary;
 import org.osgi.framework.Bundle;
@@ -21,13 +22,13 @@ import org.osgi.util.tracker.BundleTracker;
 /**
  * Finds library bundles: a bundle whose manifest has {@value #HEADER} (the folder holding its library, such as
  * {@code materials/}) gets a {@link MaterialLibrary} service of the shipped tier while it is active. A library is data
- * only; no code is needed per library. Immediate, so that libraries are live before the first command runs.
+ * only; no code is needed per library. Immediate, so that libraries are live before the first command runs; each is
+ * read when first asked for, so that a command naming no material never reads one.
  */
 @Component(immediate = true, service = {})
 public final class LibraryExtender {
 
     static final String HEADER = "Lamella-Material-Library";
-    static final String LIBRARY_ID = "lamella.material.library.id";
     static final String LIBRARY_TIER = "lamella.material.library.tier";
 
     private BundleTracker<ServiceRegistration<MaterialLibrary>> tracker;
@@ -41,7 +42,7 @@ public final class LibraryExtender {
                 if (folder == null) {
                     return null;
                 }
-                return register(context, read(bundle, folder.trim()));
+                return register(context, LibraryTier.SHIPPED, () -> read(bundle, folder.trim()));
             }
 
             @Override
@@ -57,11 +58,12 @@ public final class LibraryExtender {
         tracker.close();
     }
 
-    static ServiceRegistration<MaterialLibrary> register(BundleContext context, ReadLibrary library) {
+    /** Registers a library that {@code reader} reads when the library is first asked for. */
+    static ServiceRegistration<MaterialLibrary> register(BundleContext context, LibraryTier tier,
+                                                         Supplier<ReadLibrary> reader) {
         Dictionary<String, Object> properties = new Hashtable<>();
-        properties.put(LIBRARY_ID, library.info().id());
-        properties.put(LIBRARY_TIER, library.info().tier().label());
-        return context.registerService(MaterialLibrary.class, library, properties);
+        properties.put(LIBRARY_TIER, tier.label());
+        return context.registerService(MaterialLibrary.class, new DeferredLibrary(reader), properties);
     }
 
     static ReadLibrary read(Bundle bundle, String folder) {
