@@ -17,11 +17,12 @@ public final class ComplexColumns {
         return List.of("re_" + s, "im_" + s, "amplitude_" + s, "phase_deg");
     }
 
-    /** Samples h at factor·x for every x. */
+    /** Samples h at factor·x for every x, stopping between frequencies when the thread is interrupted. */
     public static double[][] sample(double[] x, double factor, FrequencyResponse h) {
         double[][] v = new double[4][x.length];
         double[] z = new double[2];
         for (int i = 0; i < x.length; i++) {
+            EvaluationCancelledException.checkpoint();
             h.at(factor * x[i], z);
             v[0][i] = z[0];
             v[1][i] = z[1];

@@ -1,6 +1,8 @@
 package lamella.engine;
 
 import java.util.Arrays;
+import lamella.api.EvaluationCancelledException;
+import lamella.api.ModelEvaluationException;
 
 /**
  * Globally adaptive Gauss–Kronrod quadrature (10-point Gauss, 21-point Kronrod) of a complex integrand over a finite
@@ -9,8 +11,14 @@ import java.util.Arrays;
  * nodes and weights are those of QUADPACK's qk21 (Piessens, de Doncker-Kapenga, Überhuber & Kahaner, QUADPACK,
  * Springer 1983).
  *
- * <p>One instance is a reusable workspace for one thread; nothing is allocated per evaluation once the panel
- * arrays have grown to the size a problem needs.
+ * <p>Bounded and cancellable: an integral may use at most {@link #MAX_PANELS} panels (each refinement evaluates two
+ * halves, so at most 42 × {@value #MAX_PANELS} integrand evaluations, a few seconds of work) and then fails with a {@link ModelEvaluationException} saying where the integrand was
+ * hardest; the worst panel is found from a heap, so each refinement costs O(log n). Before every panel the
+ * thread's interrupt flag is checked: an interrupted evaluation ends with {@link EvaluationCancelledException}
+ * within one panel's work (21 integrand evaluations) and leaves the flag set.
+ *
+ * <p>One instance is a reusable workspace for one thread; nothing is allocated per integrand evaluation, and the
+ * panel arrays are kept for the next integral once they have grown to the size a problem needs.
  */
 public final class SpectralQuadrature {
 
@@ -43,7 +51,17 @@ public final class SpectralQuadrature {
      */
     public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-6;
 
-    private static final int MAX_PANELS = 200_000;
+    /** Number of abscissae of one panel. */
+    public static final int NODES_PER_PANEL = 21;
+
+    /** The most panels one integral may use: at most 4.2 million integrand evaluations. */
+    public static final int MAX_PANELS = 100_000;
+
+    /**
+     * Where the panels' values cancel, rounding leaves about this fraction of the sum of their magnitudes: no
+     * tolerance below it can be met, so none is asked for (QUADPACK's round-off test in another form).
+     */
+    private static final double ROUNDING = 50 * Math.ulp(1.0);
 
     private final double[] f = new double[2];
     private double[] lo = new double[64];
@@ -51,6 +69,9 @@ public final class SpectralQuadrature {
     private double[] re = new double[64];
     private double[] im = new double[64];
     private double[] err = new double[64];
+    /** Panel indices as a max-heap on err. */
+    private int[] heap = new int[64];
+    private int heapSize;
     private int panels;
     private int evaluations;
 
@@ -68,94 +89,168 @@ public final class SpectralQuadrature {
      * @param relTol  relative tolerance on |∫|
      * @param absTol  absolute tolerance, for integrals that may vanish
      * @param out     receives (re, im) of the integral
-     * @throws ArithmeticException when the integrand is not finite or the tolerance cannot be met
+     * @throws ModelEvaluationException when the integrand is not finite or the tolerance cannot be met within
+     *                                  {@link #MAX_PANELS} panels
+     * @throws EvaluationCancelledException when the thread is interrupted
      */
     public void integrate(ComplexIntegrand fn, double a, double b, double[] breaks, double minPanelWidth,
                           double relTol, double absTol, double[] out) {
         panels = 0;
+        heapSize = 0;
         evaluations = 0;
-        double prev = a;
-        if (breaks != null) {
-            double[] sorted = breaks.clone();
-            Arrays.sort(sorted);
-            for (double x : sorted) {
-                if (x > prev * (1 + 1e-12) && x < b * (1 - 1e-12) && x > a) {
-                    addSplit(fn, prev, x, minPanelWidth);
-                    prev = x;
-                }
-            }
+        double[] edges = initialEdges(a, b, breaks, minPanelWidth);
+        ensureCapacity(edges.length - 1);
+        for (int p = 0; p + 1 < edges.length; p++) {
+            evaluatePanel(fn, edges[p], edges[p + 1], panels);
+            push(panels++);
         }
-        addSplit(fn, prev, b, minPanelWidth);
+        double sr = 0;
+        double si = 0;
+        double se = 0;
+        double magnitude = 0;
+        for (int p = 0; p < panels; p++) {
+            sr += re[p];
+            si += im[p];
+            se += err[p];
+            magnitude += Math.hypot(re[p], im[p]);
+        }
         while (true) {
-            double sr = 0;
-            double si = 0;
-            double se = 0;
-            int worst = 0;
-            for (int p = 0; p < panels; p++) {
-                sr += re[p];
-                si += im[p];
-                se += err[p];
-                if (err[p] > err[worst]) {
-                    worst = p;
-                }
-            }
             if (!Double.isFinite(sr) || !Double.isFinite(si)) {
-                throw new ArithmeticException("the spectral integrand is not finite");
+                throw new ModelEvaluationException("the spectral integrand is not finite" + nearWorst());
             }
-            double tol = Math.max(absTol, relTol * Math.sqrt(sr * sr + si * si));
+            double tol = Math.max(Math.max(absTol, relTol * Math.hypot(sr, si)), ROUNDING * magnitude);
             if (se <= tol) {
-                out[0] = sr;
-                out[1] = si;
-                return;
+                // the running sums drift by rounding: decide on exact ones
+                sr = 0;
+                si = 0;
+                se = 0;
+                magnitude = 0;
+                for (int p = 0; p < panels; p++) {
+                    sr += re[p];
+                    si += im[p];
+                    se += err[p];
+                    magnitude += Math.hypot(re[p], im[p]);
+                }
+                tol = Math.max(Math.max(absTol, relTol * Math.hypot(sr, si)), ROUNDING * magnitude);
+                if (se <= tol) {
+                    out[0] = sr;
+                    out[1] = si;
+                    return;
+                }
             }
             if (panels >= MAX_PANELS) {
-                throw new ArithmeticException("the spectral integral did not converge within " + MAX_PANELS
-                        + " panels (error estimate " + se + ", tolerance " + tol + ")");
+                throw new ModelEvaluationException("the spectral integral over [" + a + ", " + b + "] did not reach"
+                        + " its tolerance within " + MAX_PANELS + " panels (error estimate " + (float) se
+                        + " against " + (float) tol + ")" + nearWorst());
             }
+            int worst = pop();
             double l = lo[worst];
             double h = hi[worst];
             double mid = 0.5 * (l + h);
             if (!(mid > l && mid < h)) {
-                throw new ArithmeticException("the spectral integral cannot be refined further near " + mid);
+                throw new ModelEvaluationException("the spectral integral cannot be refined further near " + mid);
             }
-            evaluatePanel(fn, l, mid, worst);
+            sr -= re[worst];
+            si -= im[worst];
+            se -= err[worst];
+            magnitude -= Math.hypot(re[worst], im[worst]);
             ensureCapacity(panels + 1);
-            evaluatePanel(fn, mid, h, panels++);
+            evaluatePanel(fn, l, mid, worst);
+            evaluatePanel(fn, mid, h, panels);
+            int added = panels;
+            sr += re[worst] + re[added];
+            si += im[worst] + im[added];
+            se += err[worst] + err[added];
+            magnitude += Math.hypot(re[worst], im[worst]) + Math.hypot(re[added], im[added]);
+            push(worst);
+            push(panels++);
         }
     }
 
-    private void addSplit(ComplexIntegrand fn, double a, double b, double minPanelWidth) {
-        int pieces = 1;
-        if (minPanelWidth > 0) {
-            double count = Math.ceil((b - a) / minPanelWidth);
-            if (count > MAX_PANELS) {
-                throw new ArithmeticException("the spectral integral needs more than " + MAX_PANELS + " panels");
+    /**
+     * The edges of the panels an integral starts from, in order: a, the break points inside (a, b), b, each
+     * stretch cut into equal panels no wider than minPanelWidth. Every abscissa the first pass evaluates follows
+     * from these by {@link #node}, so a caller can compute what it needs there once, before many integrals.
+     */
+    public static double[] initialEdges(double a, double b, double[] breaks, double minPanelWidth) {
+        double[] stops;
+        if (breaks == null) {
+            stops = new double[] {a, b};
+        } else {
+            double[] sorted = breaks.clone();
+            Arrays.sort(sorted);
+            stops = new double[sorted.length + 2];
+            int n = 0;
+            stops[n++] = a;
+            for (double x : sorted) {
+                if (x > stops[n - 1] * (1 + 1e-12) && x < b * (1 - 1e-12) && x > a) {
+                    stops[n++] = x;
+                }
             }
-            pieces = Math.max(1, (int) count);
+            stops[n++] = b;
+            stops = Arrays.copyOf(stops, n);
         }
-        ensureCapacity(panels + pieces);
-        double w = (b - a) / pieces;
-        for (int i = 0; i < pieces; i++) {
-            double l = a + i * w;
-            double h = i == pieces - 1 ? b : a + (i + 1) * w;
-            evaluatePanel(fn, l, h, panels++);
+        int total = 0;
+        int[] pieces = new int[stops.length - 1];
+        for (int s = 0; s < pieces.length; s++) {
+            pieces[s] = 1;
+            if (minPanelWidth > 0) {
+                double count = Math.ceil((stops[s + 1] - stops[s]) / minPanelWidth);
+                if (count > MAX_PANELS) {
+                    throw new ModelEvaluationException("the spectral integral over [" + a + ", " + b + "] would"
+                            + " start from more than " + MAX_PANELS + " panels of width " + minPanelWidth);
+                }
+                pieces[s] = Math.max(1, (int) count);
+            }
+            total += pieces[s];
+            if (total > MAX_PANELS) {
+                throw new ModelEvaluationException("the spectral integral over [" + a + ", " + b + "] would start"
+                        + " from more than " + MAX_PANELS + " panels");
+            }
         }
+        double[] edges = new double[total + 1];
+        int e = 0;
+        for (int s = 0; s < pieces.length; s++) {
+            double w = (stops[s + 1] - stops[s]) / pieces[s];
+            for (int i = 0; i < pieces[s]; i++) {
+                edges[e++] = stops[s] + i * w;
+            }
+        }
+        edges[e] = b;
+        return edges;
+    }
+
+    /** The j-th abscissa (0 ≤ j < 21) that a panel [a, b] evaluates. */
+    public static double node(double a, double b, int j) {
+        double c = 0.5 * (a + b);
+        if (j == 20) {
+            return c;
+        }
+        double dx = 0.5 * (b - a) * XGK[j >> 1];
+        return (j & 1) == 0 ? c - dx : c + dx;
+    }
+
+    private String nearWorst() {
+        if (panels == 0) {
+            return "";
+        }
+        int w = heap[0];
+        return "; the integrand is hardest near " + (float) (0.5 * (lo[w] + hi[w]));
     }
 
     private void evaluatePanel(ComplexIntegrand fn, double a, double b, int slot) {
-        double c = 0.5 * (a + b);
+        EvaluationCancelledException.checkpoint();
         double hw = 0.5 * (b - a);
-        fn.value(c, f);
+        fn.value(node(a, b, 20), f);
         double kr = WGK[10] * f[0];
         double ki = WGK[10] * f[1];
         double gr = 0;
         double gi = 0;
         for (int j = 0; j < 10; j++) {
-            double dx = hw * XGK[j];
-            fn.value(c - dx, f);
+            fn.value(node(a, b, 2 * j), f);
             double r1 = f[0];
             double i1 = f[1];
-            fn.value(c + dx, f);
+            fn.value(node(a, b, 2 * j + 1), f);
             double r2 = f[0] + r1;
             double i2 = f[1] + i1;
             kr += WGK[j] * r2;
@@ -165,7 +260,7 @@ public final class SpectralQuadrature {
                 gi += WG[j >> 1] * i2;
             }
         }
-        evaluations += 21;
+        evaluations += NODES_PER_PANEL;
         lo[slot] = a;
         hi[slot] = b;
         re[slot] = kr * hw;
@@ -173,6 +268,45 @@ public final class SpectralQuadrature {
         double er = (kr - gr) * hw;
         double ei = (ki - gi) * hw;
         err[slot] = Math.sqrt(er * er + ei * ei);
+    }
+
+    private void push(int panel) {
+        int i = heapSize++;
+        heap[i] = panel;
+        while (i > 0) {
+            int parent = (i - 1) >> 1;
+            if (err[heap[parent]] >= err[heap[i]]) {
+                break;
+            }
+            int t = heap[parent];
+            heap[parent] = heap[i];
+            heap[i] = t;
+            i = parent;
+        }
+    }
+
+    private int pop() {
+        int top = heap[0];
+        heap[0] = heap[--heapSize];
+        int i = 0;
+        while (true) {
+            int l = 2 * i + 1;
+            int r = l + 1;
+            int largest = i;
+            if (l < heapSize && err[heap[l]] > err[heap[largest]]) {
+                largest = l;
+            }
+            if (r < heapSize && err[heap[r]] > err[heap[largest]]) {
+                largest = r;
+            }
+            if (largest == i) {
+                return top;
+            }
+            int t = heap[largest];
+            heap[largest] = heap[i];
+            heap[i] = t;
+            i = largest;
+        }
     }
 
     private void ensureCapacity(int needed) {
@@ -185,5 +319,6 @@ public final class SpectralQuadrature {
         re = Arrays.copyOf(re, size);
         im = Arrays.copyOf(im, size);
         err = Arrays.copyOf(err, size);
+        heap = Arrays.copyOf(heap, size);
     }
 }

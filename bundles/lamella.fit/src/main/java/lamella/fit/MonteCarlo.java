@@ -4,11 +4,11 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.SplittableRandom;
-import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import lamella.api.EvaluationCancelledException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.fit.MonteCarloSummary;
 import lamella.api.fit.Progress;
@@ -17,9 +17,16 @@ import lamella.api.fit.Progress;
  * Monte Carlo uncertainty: N synthetic measurements — the best-fit model plus Gaussian noise of each point's σ —
  * each fitted with every uncertain input drawn from its Gaussian (a parametric bootstrap, as in Yang, Ziade & Schmidt,
  * Rev. Sci. Instrum. 87, 014901, 2016). Refits run in parallel; sample s draws from its own generator seeded by
- * (seed, s), so the result does not depend on the number of threads.
+ * (seed, s), so the result does not depend on the number of threads. Interrupting the calling thread ends it with
+ * EvaluationCancelledException; the workers stop at their next refit or model evaluation.
  */
 final class MonteCarlo {
+
+    /**
+     * Worker tasks that share the samples: each takes the next sample until none is left, so the pool holds a few
+     * tasks however many samples are asked for, and an interrupt stops them between refits.
+     */
+    private static final int WORKERS = 64;
 
     private final FitProblem problem;
     private final Solver solver;
@@ -39,36 +46,41 @@ final class MonteCarlo {
     MonteCarloSummary run(int samples, long seed, double[] uBest, double[] unc, double[] model, double[] sigma,
                           double[] linearSigmaU) {
         int p = uBest.length;
+        AtomicInteger next = new AtomicInteger();
         AtomicInteger done = new AtomicInteger();
-        List<Future<double[]>> futures = new ArrayList<>();
-        for (int s = 0; s < samples; s++) {
-            final int sample = s;
-            futures.add(pool.submit(() -> {
-                double[] r = refit(sample, seed, uBest, unc, model, sigma);
-                progress.update("Monte Carlo", done.incrementAndGet(), samples);
-                return r;
+        double[][] results = new double[samples][];
+        List<Future<?>> workers = new ArrayList<>();
+        for (int w = 0; w < Math.min(samples, WORKERS); w++) {
+            workers.add(pool.submit(() -> {
+                for (int s = next.getAndIncrement(); s < samples; s = next.getAndIncrement()) {
+                    EvaluationCancelledException.checkpoint();
+                    results[s] = refit(s, seed, uBest, unc, model, sigma);
+                    progress.update("Monte Carlo", done.incrementAndGet(), samples);
+                }
             }));
+        }
+        for (Future<?> f : workers) {
+            try {
+                f.get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                workers.forEach(x -> x.cancel(true));
+                throw new EvaluationCancelledException();
+            } catch (ExecutionException e) {
+                workers.forEach(x -> x.cancel(true));
+                if (e.getCause() instanceof RuntimeException r) {
+                    throw r;
+                }
+                throw new ModelEvaluationException("Monte Carlo: a refit failed: " + e.getCause(), e.getCause());
+            }
         }
         List<double[]> ok = new ArrayList<>();
         int failed = 0;
-        for (Future<double[]> f : futures) {
-            try {
-                double[] r = f.get();
-                if (r == null) {
-                    failed++;
-                } else {
-                    ok.add(r);
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                futures.forEach(x -> x.cancel(true));
-                throw new CancellationException("interrupted");
-            } catch (ExecutionException e) {
-                if (e.getCause() instanceof CancellationException c) {
-                    futures.forEach(x -> x.cancel(true));
-                    throw c;
-                }
+        for (double[] r : results) {
+            if (r == null) {
                 failed++;
+            } else {
+                ok.add(r);
             }
         }
         if (ok.size() < 2) {

@@ -7,6 +7,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import lamella.api.EvaluationCancelledException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.fit.Progress;
 import org.apache.commons.math3.exception.ConvergenceException;
@@ -95,6 +96,7 @@ final class Solver {
         if (progress.cancelled()) {
             throw new CancellationException("the fit was cancelled");
         }
+        EvaluationCancelledException.checkpoint();
         evaluations.incrementAndGet();
         double[] m = problem.model(problem.values(u, uncertainValues));
         for (int i = 0; i < m.length; i++) {

@@ -1,5 +1,6 @@
 package lamella.technique.tdtr;
 
+import lamella.api.EvaluationCancelledException;
 import lamella.api.FrequencyResponse;
 import lamella.api.ModelEvaluationException;
 
@@ -72,6 +73,7 @@ final class Chebyshev {
     }
 
     private static void g(FrequencyResponse h, double s, double[] out) {
+        EvaluationCancelledException.checkpoint();
         double f = Math.exp(s);
         h.at(f, out);
         double r = Math.sqrt(f);

@@ -1,10 +1,14 @@
 package lamella.technique.tdtr;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.concurrent.atomic.AtomicReference;
 import lamella.api.BottomBoundary;
+import lamella.api.EvaluationCancelledException;
 import lamella.api.FrequencyResponse;
 import lamella.api.Layer;
 import lamella.api.Stack;
@@ -138,5 +142,37 @@ class PulseTrainSumTest {
         double[][] s = PulseTrainSum.converged(F_MOD, F_REP).evaluate(new double[] {-2e-11, -1e-11}, HALF_SPACE);
         assertTrue(s[0][0] > 0 && s[0][1] > 0);
         assertEquals(s[1][0], s[1][1], 1e-3 * Math.abs(s[1][0]), "the out-of-phase signal is continuous");
+    }
+
+    /**
+     * The cancellation contract: a lock-in sum over a slow response that never looks at the interrupt itself (each
+     * evaluation busy for a millisecond) still ends promptly once its thread is interrupted, between evaluations.
+     */
+    @Test
+    void anInterruptedSumEndsBetweenEvaluations() throws Exception {
+        FrequencyResponse slow = (f, out) -> {
+            long until = System.nanoTime() + 1_000_000;
+            while (System.nanoTime() < until) {
+                Thread.onSpinWait();
+            }
+            HALF_SPACE.at(f, out);
+        };
+        AtomicReference<Throwable> ended = new AtomicReference<>();
+        Thread worker = new Thread(() -> {
+            try {
+                for (int round = 0; round < 1000; round++) {
+                    PulseTrainSum.withCutoff(F_MOD, F_REP, PulseTrainSum.DEFAULT_CUTOFF, false).evaluate(DELAYS, slow);
+                }
+            } catch (RuntimeException e) {
+                ended.set(e);
+            }
+        });
+        worker.start();
+        Thread.sleep(300);
+        assertTrue(worker.isAlive(), "still summing when interrupted");
+        worker.interrupt();
+        worker.join(2000);
+        assertFalse(worker.isAlive(), "ended within two seconds of the interrupt");
+        assertInstanceOf(EvaluationCancelledException.class, ended.get());
     }
 }

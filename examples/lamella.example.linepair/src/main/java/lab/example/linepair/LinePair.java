@@ -123,7 +123,7 @@ public final class LinePair implements HeatingGeometry {
                 out[1] += piece[1];
                 upper *= 2;
             }
-        } catch (ArithmeticException e) {
+        } catch (ModelEvaluationException e) {
             throw new ModelEvaluationException("geometry '" + TYPE + "' at " + frequencyHz + " Hz: " + e.getMessage(),
                     e);
         }
