@@ -9,8 +9,8 @@ import java.util.Map;
  *
  * @param file        where it was read from (relative data paths resolve against its folder)
  * @param stack       the layered sample
- * @param geometry    the {@code geometry} block, with its {@code type}
- * @param measurement the {@code measurement} block, with its {@code type}
+ * @param geometry    the {@code geometry} block, with its {@code type}; empty when every fit dataset has its own
+ * @param measurement the {@code measurement} block, with its {@code type}; empty when every fit dataset has its own
  * @param root        the whole document, for blocks other bundles define (such as {@code fit})
  * @param lines       the 1-based line of every JSON path's key (or list element), for error messages
  */
@@ -19,6 +19,11 @@ public record CaseDocument(Path file, Stack stack, Block geometry, Block measure
 
     public CaseDocument {
         lines = Map.copyOf(lines);
+    }
+
+    /** Whether the case states a top-level block of this name itself ({@code geometry}, {@code measurement}). */
+    public boolean states(String block) {
+        return root.get(block) instanceof Block;
     }
 
     /** The problem located in this file, at the line of its JSON path (or of the nearest enclosing path). */

@@ -46,6 +46,13 @@ public final class ModelCatalog {
 
     /** Builds the simulation a case describes, or says precisely what in the case is wrong. */
     public Simulation simulation(Stack stack, Block geometryBlock, Block measurementBlock) throws InputException {
+        for (Block b : List.of(geometryBlock, measurementBlock)) {
+            if (b.values().isEmpty()) {
+                throw InputException.at(b.path(), "missing; the case states its " + b.path() + " only in each dataset"
+                        + " of its fit block, and this needs the case's own (fit, or sensitivity --dataset N, use the"
+                        + " datasets')");
+            }
+        }
         String gType = geometryBlock.requireString("type");
         HeatingGeometry g = geometry(gType).orElseThrow(() -> unknown(geometryBlock.pathOf("type"), "geometry",
                 gType, geometries.stream().map(HeatingGeometry::type).toList()));

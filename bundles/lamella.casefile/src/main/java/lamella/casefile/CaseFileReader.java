@@ -96,8 +96,8 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             List<ValueOrigin> origins = new ArrayList<>();
             Stack stack = stack(object(root, "stack"), temperature,
                     root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins);
-            Block geometry = object(root, "geometry");
-            Block measurement = object(root, "measurement");
+            Block geometry = block(root, "geometry");
+            Block measurement = block(root, "measurement");
             return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines), origins);
         } catch (InputException e) {
             throw new CaseDocument(file, null, null, null, root, lines).locate(e);
@@ -156,6 +156,26 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             throw InputException.at(b.pathOf(key), "expected a positive number (" + what + "), got " + d);
         }
         return d;
+    }
+
+    /**
+     * The case's geometry or measurement block. A fit whose every dataset has its own needs none: it is then an
+     * empty block at its path, and whatever needs the case's own says so there.
+     */
+    private static Block block(Block root, String key) throws InputException {
+        if (root.get(key) == null && everyDatasetHasOwn(root, key)) {
+            return new Block(key, Map.of());
+        }
+        if (root.get(key) == null) {
+            throw InputException.at(key, "missing; expected an object naming its type (or one in every dataset of"
+                    + " the fit block)");
+        }
+        return object(root, key);
+    }
+
+    private static boolean everyDatasetHasOwn(Block root, String key) {
+        return root.get("fit") instanceof Block fit && fit.get("datasets") instanceof List<?> list && !list.isEmpty()
+                && list.stream().allMatch(d -> d instanceof Block b && b.get(key) instanceof Block);
     }
 
     private static Block object(Block parent, String key) throws InputException {

@@ -53,8 +53,12 @@ final class InputTables {
                 .raw("<span class=\"free-key\">Shaded</span>")
                 .text(" values are fitted; the case file's starting value is shown here, the result above.")
                 .raw("</p>\n");
-        block(h, "Geometry", doc.geometry());
-        block(h, "Measurement", doc.measurement());
+        if (doc.states("geometry")) {
+            block(h, "Geometry", doc.geometry());
+        }
+        if (doc.states("measurement")) {
+            block(h, "Measurement", doc.measurement());
+        }
         if (doc.root().get("fit") instanceof Block fit) {
             block(h, "Fit settings", fit);
         }

@@ -25,7 +25,9 @@ public interface CaseReader {
             CaseDocument doc = reader.read(file);
             ModelCatalog models = catalog.get();
             try {
-                models.simulation(doc.stack(), doc.geometry(), doc.measurement());
+                if (doc.states("geometry") && doc.states("measurement")) {
+                    models.simulation(doc.stack(), doc.geometry(), doc.measurement());
+                }
                 if (doc.root().get("fit") instanceof Block fit && fit.get("datasets") instanceof List<?> list) {
                     for (Object o : list) {
                         if (o instanceof Block d) {
