@@ -269,6 +269,21 @@ public final class Project {
         });
     }
 
+    /**
+     * Sets any value of a layer or block — a number, a list such as {@code frequencies_hz}, or, with null, no value
+     * (the key is removed, for its default) — as one step, merged with the step before when the keys are equal.
+     */
+    public void put(ParameterRef ref, JsonNode value, Object mergeKey) {
+        edit((value == null ? "clear " : "change ") + InputNames.of(ref), mergeKey, d -> {
+            ObjectNode holder = holder(d, ref);
+            if (value == null) {
+                holder.remove(ref.key());
+            } else {
+                holder.set(ref.key(), value.deepCopy());
+            }
+        });
+    }
+
     /** Removes a key from a layer (to fall back on its default or its material's value). */
     public void clearLayerKey(String layer, String key) {
         edit("clear " + InputNames.of(ParameterRef.layer(layer, key)), d -> layerNode(d, layer).remove(key));

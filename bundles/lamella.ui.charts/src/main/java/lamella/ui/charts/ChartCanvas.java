@@ -29,6 +29,8 @@ import org.jfree.chart.plot.Pannable;
 import org.jfree.chart.plot.PlotRenderingInfo;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.plot.Zoomable;
+import org.jfree.chart.title.LegendTitle;
+import org.jfree.chart.ui.RectangleEdge;
 
 /**
  * A JFreeChart drawn into an SWT canvas, redrawn when the chart changes or the canvas is resized. The wheel or a
@@ -41,6 +43,8 @@ public final class ChartCanvas extends Composite {
     private static final int MIN_EXPORT_HEIGHT = 500;
     private static final double WHEEL_ZOOM = 0.8;
     private static final int DRAG_THRESHOLD = 4;
+    /** Below this many pixels in either direction nothing is drawn but the background. */
+    static final int SMALLEST = 60;
     private static final String HINT = "wheel or drag: zoom · right- or shift-drag: pan · double-click: reset ·"
             + " right-click: export";
 
@@ -158,12 +162,35 @@ public final class ChartCanvas extends Composite {
         BufferedImage img = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
+            if (width < SMALLEST || height < SMALLEST) {
+                // Too small for axes and a plot: JFreeChart would lay out negative sizes. Leave it blank.
+                g.setColor(java.awt.Color.WHITE);
+                g.fillRect(0, 0, width, height);
+                return img;
+            }
+            placeLegend(width, height);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             chart.draw(g, new Rectangle2D.Double(0, 0, width, height), info);
         } finally {
             g.dispose();
         }
         return img;
+    }
+
+    /** A long legend goes beside a wide plot, so that it does not squeeze the plot's height; else below it. */
+    private void placeLegend(int width, int height) {
+        LegendTitle legend = chart.getLegend();
+        if (legend == null) {
+            return;
+        }
+        int items = chart.getPlot().getLegendItems() == null ? 0 : chart.getPlot().getLegendItems().getItemCount();
+        RectangleEdge edge = items > 4 && width > 1.6 * height && width > 700 ? RectangleEdge.RIGHT
+                : RectangleEdge.BOTTOM;
+        if (legend.getPosition() != edge) {
+            legend.setNotify(false);
+            legend.setPosition(edge);
+            legend.setNotify(true);
+        }
     }
 
     private Rectangle2D dataArea() {

@@ -23,7 +23,7 @@ public final class FitPanel implements WorkbenchPanel {
 
     @Override
     public Area preferredArea() {
-        return Area.RIGHT;
+        return Area.LEFT;
     }
 
     @Override

@@ -6,8 +6,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import lamella.api.CaseDocument;
-import lamella.api.ParameterRef;
-import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FitService;
@@ -49,6 +47,7 @@ import org.jfree.data.xy.XYSeriesCollection;
 final class FitView implements PanelView {
 
     private static final int BAR_STEPS = 1000;
+    private static final int SIDE_BY_SIDE_PX = 1500;
 
     private final Workbench workbench;
     private final Project project;
@@ -100,7 +99,8 @@ final class FitView implements PanelView {
         results = table(tables, 90);
         heading(tables, "Correlation of the fitted values (dimensionless)");
         correlation = table(tables, 80);
-        heading(tables, "Uncertainty budget: 1σ each source contributes to each fitted value");
+        heading(tables, "Uncertainty budget: 1σ from each source for fitted value (1), (2), …, its share of the"
+                + " variance in %, and the total");
         budget = table(tables, 120);
         Composite right = new Composite(sash, SWT.NONE);
         right.setLayout(new GridLayout(2, false));
@@ -115,6 +115,13 @@ final class FitView implements PanelView {
         cgd.heightHint = 300;
         residuals.setLayoutData(cgd);
         sash.setWeights(new int[] {55, 45});
+        // Tables and residuals side by side where there is room for both, else the residuals below the tables.
+        root.addListener(SWT.Resize, e -> {
+            int orientation = root.getClientArea().width >= SIDE_BY_SIDE_PX ? SWT.HORIZONTAL : SWT.VERTICAL;
+            if (sash.getOrientation() != orientation) {
+                sash.setOrientation(orientation);
+            }
+        });
         project.addListener(listener);
         project.lastFit().ifPresent(this::show);
         if (project.lastFit().isEmpty()) {
@@ -139,6 +146,10 @@ final class FitView implements PanelView {
         return results;
     }
 
+    Table budget() {
+        return budget;
+    }
+
     Button startButton() {
         return start;
     }
@@ -155,8 +166,11 @@ final class FitView implements PanelView {
     }
 
     private static void heading(Composite parent, String text) {
-        Label l = new Label(parent, SWT.NONE);
+        Label l = new Label(parent, SWT.WRAP);
         l.setText(text);
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        gd.widthHint = 200;
+        l.setLayoutData(gd);
     }
 
     private static Table table(Composite parent, int height) {
@@ -270,16 +284,8 @@ final class FitView implements PanelView {
     private void show(FitOutcome o) {
         shown = o;
         List<FittedParameter> ps = o.parameters();
-        List<String[]> rows = new ArrayList<>();
-        for (FittedParameter p : ps) {
-            DisplayUnit u = DisplayUnit.of(p.ref());
-            String note = p.atBound() ? "ended on a bound: σ not meaningful"
-                    : !p.identifiable() ? "not determined by the data" : "";
-            rows.add(new String[] {Words.parameter(p.ref(), p.quantity()), NumberText.format(u.shown(p.value())),
-                    "± " + NumberText.format(u.shown(p.sigma())), NumberText.format(u.shown(p.sigmaNoise())),
-                    u.unit(), note});
-        }
-        Tables.fill(results, new String[] {"parameter", "value", "± σ total", "σ noise", "unit", "note"}, rows);
+        FitTables values = FitTables.results(o);
+        Tables.fill(results, values.headings(), values.rows());
         List<String[]> corr = new ArrayList<>();
         String[] ch = new String[ps.size() + 1];
         ch[0] = "parameter";
@@ -293,34 +299,14 @@ final class FitView implements PanelView {
             corr.add(r);
         }
         Tables.fill(correlation, ch, corr);
-        String[] bh = new String[ps.size() + 2];
-        bh[0] = "source";
-        bh[1] = "input σ";
-        for (int i = 0; i < ps.size(); i++) {
-            bh[i + 2] = "→ (" + (i + 1) + ") (" + DisplayUnit.of(ps.get(i).ref()).unit() + ")";
-        }
-        List<String[]> brows = new ArrayList<>();
-        for (BudgetLine b : o.budget()) {
-            String[] r = new String[ps.size() + 2];
-            r[0] = b.source() == null ? b.label() : Words.parameter(b.source(), b.quantity());
-            r[1] = b.source() == null ? "—" : inputSigma(b.source(), b.inputSigma());
-            for (int i = 0; i < ps.size(); i++) {
-                r[i + 2] = NumberText.format(DisplayUnit.of(ps.get(i).ref()).shown(b.contributions()[i]));
-            }
-            brows.add(r);
-        }
-        Tables.fill(budget, bh, brows);
+        FitTables shares = FitTables.budget(o);
+        Tables.fill(budget, shares.headings(), shares.rows());
         residualPick.setItems(o.datasets().stream().map(d -> "dataset " + (d.index() + 1) + ": "
                 + Path.of(d.source()).getFileName() + " (" + d.signal() + ")").toArray(String[]::new));
         residualPick.select(0);
         drawResiduals();
         report.setEnabled(workbench.reports().isPresent());
         root.layout(true, true);
-    }
-
-    private static String inputSigma(ParameterRef ref, double sigma) {
-        DisplayUnit u = DisplayUnit.of(ref);
-        return NumberText.format(u.shown(sigma)) + " " + u.unit();
     }
 
     private void drawResiduals() {

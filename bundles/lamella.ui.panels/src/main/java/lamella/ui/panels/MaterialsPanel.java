@@ -23,7 +23,7 @@ public final class MaterialsPanel implements WorkbenchPanel {
 
     @Override
     public Area preferredArea() {
-        return Area.RIGHT;
+        return Area.LEFT;
     }
 
     @Override

@@ -173,8 +173,9 @@ final class SensitivityView implements PanelView {
         String technique = project.model().map(m -> m.measurement().get("type")).map(String::valueOf).orElse("");
         XYPlot plot = new XYPlot(set, PlotLook.xAxis(Words.x(t.xColumn(), technique),
                 SignalCurve.logarithmic(t.xColumn()), t.x()), PlotLook.linear(Words.sensitivity(t.phaseLike())), r);
-        canvas.setChart(PlotLook.chart("Sensitivity of " + Words.signal(t.signal()), plot, true));
-        status.show(t.parameters().size() + " inputs over " + t.x().length + " points of x; larger |S| means the"
-                + " signal tells more about the input.", StatusLine.Tone.PLAIN);
+        canvas.setChart(PlotLook.chart(null, plot, true));
+        status.show("Sensitivity of the " + Words.signal(t.signal()) + " to " + t.parameters().size()
+                + " inputs over " + t.x().length + " points of x; larger |S| means the signal tells more about the"
+                + " input.", StatusLine.Tone.PLAIN);
     }
 }

@@ -1,7 +1,6 @@
 package lamella.ui.panels;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
 import java.util.List;
@@ -11,7 +10,6 @@ import lamella.api.HeatingGeometry;
 import lamella.api.ParameterRef;
 import lamella.api.ParameterSpec;
 import lamella.api.Technique;
-import lamella.api.Units;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
 import lamella.ui.api.Workbench;
@@ -103,6 +101,15 @@ final class SetupView implements PanelView {
         return rise.text();
     }
 
+    /** A field of the technique's or the geometry's block, by its case-file key, for tests. */
+    QuantityField field(String block, String key) {
+        return (block.equals("geometry") ? geometry : technique).field(key);
+    }
+
+    String problemText(String block) {
+        return (block.equals("geometry") ? geometry : technique).problem.text();
+    }
+
     private void refresh() {
         if (root.isDisposed()) {
             return;
@@ -187,7 +194,7 @@ final class SetupView implements PanelView {
         private final Label about;
         private final Composite fields;
         private final StatusLine problem;
-        private final List<Text> texts = new ArrayList<>();
+        private final List<QuantityField> inputs = new ArrayList<>();
         private String shownType;
 
         BlockEditor(Composite parent, String title, String block, List<String> types,
@@ -210,7 +217,7 @@ final class SetupView implements PanelView {
             about.setLayoutData(agd);
             fields = new Composite(g, SWT.NONE);
             fields.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1));
-            GridLayout fl = new GridLayout(2, false);
+            GridLayout fl = new GridLayout(3, false);
             fl.marginWidth = 0;
             fields.setLayout(fl);
             problem = new StatusLine(g, 2);
@@ -222,12 +229,19 @@ final class SetupView implements PanelView {
                 build(t);
             }
             List<ParameterSpec> ps = specs.apply(t);
+            for (int i = 0; i < ps.size() && i < inputs.size(); i++) {
+                inputs.get(i).show(values.path(ps.get(i).key()));
+            }
+        }
+
+        QuantityField field(String key) {
+            List<ParameterSpec> ps = specs.apply(shownType);
             for (int i = 0; i < ps.size(); i++) {
-                Text text = texts.get(i);
-                if (!text.isFocusControl()) {
-                    text.setText(display(values.path(ps.get(i).key())));
+                if (ps.get(i).key().equals(key)) {
+                    return inputs.get(i);
                 }
             }
+            throw new IllegalArgumentException("no field " + key);
         }
 
         private void build(String t) {
@@ -237,79 +251,14 @@ final class SetupView implements PanelView {
             for (Control c : fields.getChildren()) {
                 c.dispose();
             }
-            texts.clear();
-            for (ParameterSpec s : specs.apply(t)) {
-                Label l = new Label(fields, SWT.NONE);
-                String unit = Units.ofKey(s.key());
-                l.setText(Words.key(s.key()) + (unit.isEmpty() ? "" : " (" + unit + ")")
-                        + (s.required() ? "" : ", optional") + ":");
-                l.setToolTipText(s.description() + " — case-file key " + s.key());
-                Text text = new Text(fields, SWT.BORDER);
-                GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
-                gd.widthHint = 160;
-                text.setLayoutData(gd);
-                text.setToolTipText(s.description());
-                text.setMessage(s.required() ? s.constraint().wording()
-                        : Double.isNaN(s.defaultValue()) ? "none" : "default " + NumberText.format(s.defaultValue()));
-                text.addListener(SWT.DefaultSelection, e -> commit(s, text.getText()));
-                text.addListener(SWT.FocusOut, e -> commit(s, text.getText()));
-                texts.add(text);
-            }
-        }
-
-        private String display(JsonNode v) {
-            if (v.isNumber()) {
-                return NumberText.format(v.asDouble());
-            }
-            if (v.isArray()) {
-                List<String> parts = new ArrayList<>();
-                v.forEach(n -> parts.add(NumberText.format(n.asDouble())));
-                return String.join(", ", parts);
-            }
-            return "";
-        }
-
-        private void commit(ParameterSpec s, String text) {
-            ObjectNode b = (ObjectNode) project.tree().path(block);
-            if (text.trim().equals(display(b.path(s.key())))) {
-                return;
-            }
-            String label = Words.key(s.key()) + " (" + Units.ofKey(s.key()) + ")";
-            if (text.isBlank()) {
-                if (s.required()) {
-                    problem.show(label + " is required: " + s.constraint().wording(), StatusLine.Tone.PROBLEM);
-                    return;
-                }
-                b.remove(s.key());
-                problem.show("", StatusLine.Tone.PLAIN);
-                project.setBlock(block, b);
-                return;
-            }
-            if (s.kind() == ParameterSpec.Kind.NUMBER_LIST) {
-                ArrayNode list = b.putArray(s.key());
-                for (String part : text.split("[,;\\s]+")) {
-                    Double v = NumberText.parse(part);
-                    if (v == null || !s.constraint().admits(v)) {
-                        problem.show(label + ": " + (v == null ? NumberText.notANumber(part)
-                                : NumberText.format(v) + " is not " + s.constraint().wording())
-                                + "; separate values with commas", StatusLine.Tone.PROBLEM);
-                        return;
-                    }
-                    list.add(v);
-                }
-                problem.show("", StatusLine.Tone.PLAIN);
-                project.setBlock(block, b);
-                return;
-            }
-            Double v = NumberText.parse(text);
-            if (v == null || !s.constraint().admits(v)) {
-                problem.show(label + ": " + (v == null ? NumberText.notANumber(text)
-                        : NumberText.format(v) + " is not " + s.constraint().wording()), StatusLine.Tone.PROBLEM);
-                return;
-            }
+            inputs.clear();
             problem.show("", StatusLine.Tone.PLAIN);
-            project.set(block.equals("geometry") ? ParameterRef.geometry(s.key())
-                    : ParameterRef.measurement(s.key()), v);
+            for (ParameterSpec s : specs.apply(t)) {
+                ParameterRef ref = block.equals("geometry") ? ParameterRef.geometry(s.key())
+                        : ParameterRef.measurement(s.key());
+                inputs.add(new QuantityField(fields, s, block + "." + s.key(),
+                        (value, visit) -> project.put(ref, value, visit), problem));
+            }
         }
 
         /**

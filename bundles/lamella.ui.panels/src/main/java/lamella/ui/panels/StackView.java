@@ -5,7 +5,9 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import lamella.api.CaseModel;
 import lamella.api.Layer;
 import lamella.api.ParameterRef;
@@ -24,6 +26,8 @@ import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Menu;
+import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
@@ -38,7 +42,7 @@ final class StackView implements PanelView {
     private static final int NAME = 0;
     private static final int MATERIAL = 1;
     private static final int FIRST_VALUE = 2;
-    private static final String EXPLICIT = "(explicit values)";
+    private static final String EXPLICIT = "(own values)";
     private static final String[] ROLES = {"fixed", "free", "uncertain ± σ"};
 
     private final Workbench workbench;
@@ -52,6 +56,9 @@ final class StackView implements PanelView {
     private final Text sigmaText;
     private final CrossSection drawing;
     private final Project.Listener listener = c -> refresh();
+    /** The unit chosen for each value column, kept for the session. */
+    private static final Map<Integer, DisplayUnit> CHOSEN_UNITS = new ConcurrentHashMap<>();
+    private final DisplayUnit[] units = new DisplayUnit[LayerColumn.VALUES.size()];
     private List<String> names = List.of();
     private ParameterRef selected;
     private boolean projectProblemShown;
@@ -61,34 +68,44 @@ final class StackView implements PanelView {
         this.project = workbench.project();
         root = new Composite(parent, SWT.NONE);
         root.setLayout(new GridLayout(1, false));
-        SashForm sash = new SashForm(root, SWT.HORIZONTAL);
+        // The table on top across the whole width, so that every column stays in view; the drawing below it.
+        SashForm sash = new SashForm(root, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         Composite left = new Composite(sash, SWT.NONE);
-        left.setLayout(new GridLayout(2, false));
-        table = new Table(left, SWT.BORDER | SWT.FULL_SELECTION | SWT.SINGLE);
+        left.setLayout(new GridLayout(1, false));
+        table = new Table(left, SWT.BORDER | SWT.FULL_SELECTION | SWT.SINGLE | SWT.H_SCROLL | SWT.V_SCROLL);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         GridData tgd = new GridData(SWT.FILL, SWT.FILL, true, true);
-        tgd.heightHint = 150;
+        tgd.heightHint = 120;
         table.setLayoutData(tgd);
-        column("layer", 90);
-        column("material", 120);
-        for (LayerColumn c : LayerColumn.VALUES) {
-            column(c.heading(), 110);
+        column("layer", 80);
+        column("material", 90);
+        for (int c = 0; c < LayerColumn.VALUES.size(); c++) {
+            units[c] = CHOSEN_UNITS.getOrDefault(c, LayerColumn.VALUES.get(c).unit());
+            TableColumn tc = column(heading(c), 80);
+            int index = c;
+            tc.setToolTipText(LayerColumn.VALUES.get(c).meaning() + "; click to choose the unit (the case file stays"
+                    + " in SI)");
+            tc.addListener(SWT.Selection, e -> chooseUnit(index));
         }
         editor = new TableEditor(table);
         editor.grabHorizontal = true;
         table.addListener(SWT.MouseDown, e -> clicked(new Point(e.x, e.y)));
         Composite buttons = new Composite(left, SWT.NONE);
-        buttons.setLayout(new GridLayout(1, true));
-        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, false, false));
+        GridLayout bl = new GridLayout(4, false);
+        bl.marginWidth = 0;
+        buttons.setLayout(bl);
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         button(buttons, "Add layer", this::addLayer);
         button(buttons, "Remove layer", this::removeLayer);
         button(buttons, "Move up", () -> move(-1));
         button(buttons, "Move down", () -> move(1));
         Composite strip = new Composite(left, SWT.NONE);
-        strip.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
-        strip.setLayout(new GridLayout(5, false));
+        strip.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridLayout sl0 = new GridLayout(5, false);
+        sl0.marginWidth = 0;
+        strip.setLayout(sl0);
         selectedLabel = new Label(strip, SWT.NONE);
         selectedLabel.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         roleCombo = new Combo(strip, SWT.READ_ONLY);
@@ -100,9 +117,9 @@ final class StackView implements PanelView {
         sgd.widthHint = 60;
         sigmaText.setLayoutData(sgd);
         button(strip, "Set role", this::applyRole);
-        status = new StatusLine(left, 2);
+        status = new StatusLine(left, 1);
         drawing = new CrossSection(sash);
-        sash.setWeights(new int[] {72, 28});
+        sash.setWeights(new int[] {62, 38});
         select(null);
         project.addListener(listener);
         refresh();
@@ -126,11 +143,53 @@ final class StackView implements PanelView {
         return status.text();
     }
 
-    private void column(String heading, int width) {
+    private TableColumn column(String heading, int width) {
         TableColumn c = new TableColumn(table, SWT.LEFT);
         c.setText(heading);
         c.pack();
         c.setWidth(Math.max(c.getWidth() + 8, width));
+        return c;
+    }
+
+    private String heading(int valueColumn) {
+        LayerColumn c = LayerColumn.VALUES.get(valueColumn);
+        return c.words() + " (" + units[valueColumn].unit() + ")";
+    }
+
+    /** A click on a value column's heading offers the units of its quantity. */
+    private void chooseUnit(int valueColumn) {
+        List<DisplayUnit> choices = DisplayUnit.choices(LayerColumn.VALUES.get(valueColumn).key());
+        if (choices.size() < 2) {
+            return;
+        }
+        Menu menu = new Menu(table);
+        for (DisplayUnit u : choices) {
+            MenuItem item = new MenuItem(menu, SWT.RADIO);
+            item.setText(u.unit());
+            item.setSelection(u.equals(units[valueColumn]));
+            item.addListener(SWT.Selection, e -> {
+                if (item.getSelection()) {
+                    useUnit(valueColumn, u);
+                }
+            });
+        }
+        menu.setVisible(true);
+    }
+
+    /** Shows a value column in another unit (also for tests, as the heading's menu would). */
+    void useUnit(int valueColumn, DisplayUnit u) {
+        units[valueColumn] = u;
+        CHOSEN_UNITS.put(valueColumn, u);
+        table.getColumn(FIRST_VALUE + valueColumn).setText(heading(valueColumn));
+        refresh();
+    }
+
+    /** Every column as wide as its heading or its widest cell, so that nothing in the table is cut. */
+    private void fitColumns() {
+        for (TableColumn c : table.getColumns()) {
+            c.pack();
+            c.setWidth(c.getWidth() + 8);
+        }
     }
 
     private static Button button(Composite parent, String text, Runnable action) {
@@ -151,25 +210,32 @@ final class StackView implements PanelView {
         names = now;
         Optional<CaseModel> model = project.model();
         int keep = table.getSelectionIndex();
-        table.removeAll();
+        // Rows are rewritten in place, so that a cell being edited keeps its editor.
+        while (table.getItemCount() > names.size()) {
+            table.remove(table.getItemCount() - 1);
+        }
+        while (table.getItemCount() < names.size()) {
+            new TableItem(table, SWT.NONE);
+        }
         for (int i = 0; i < names.size(); i++) {
             JsonNode node = layers.get(i);
-            TableItem item = new TableItem(table, SWT.NONE);
+            TableItem item = table.getItem(i);
             item.setText(NAME, names.get(i));
             item.setText(MATERIAL, node.path("material").asText(EXPLICIT));
             String name = names.get(i);
             Optional<Layer> resolved = model.flatMap(m -> m.stack().layer(name));
             for (int c = 0; c < LayerColumn.VALUES.size(); c++) {
-                item.setText(FIRST_VALUE + c, cell(names.get(i), LayerColumn.VALUES.get(c), resolved, node));
+                item.setText(FIRST_VALUE + c, cell(names.get(i), c, resolved, node));
             }
         }
+        fitColumns();
         if (keep >= 0 && keep < names.size()) {
             table.setSelection(keep);
         }
         model.ifPresent(m -> drawing.show(m.stack()));
         if (project.problem().isPresent()) {
             status.show("The case as edited has a problem (the drawing shows the last valid stack): "
-                    + project.problem().get().getMessage(), StatusLine.Tone.PROBLEM);
+                    + Words.problem(project.problem().get()), StatusLine.Tone.PROBLEM);
             projectProblemShown = true;
         } else if (projectProblemShown) {
             status.show("", StatusLine.Tone.PLAIN);
@@ -177,14 +243,15 @@ final class StackView implements PanelView {
         }
     }
 
-    private String cell(String layer, LayerColumn c, Optional<Layer> resolved, JsonNode node) {
+    private String cell(String layer, int valueColumn, Optional<Layer> resolved, JsonNode node) {
+        LayerColumn c = LayerColumn.VALUES.get(valueColumn);
         ParameterRef ref = ParameterRef.layer(layer, c.key());
         double v = resolved.map(l -> value(l, c.key())).orElse(node.path(c.key()).asDouble(Double.NaN));
         String text;
         if (Double.isInfinite(v)) {
             text = c.key().equals("thickness_m") ? "semi-infinite" : "perfect contact";
         } else {
-            text = NumberText.format(c.unit().shown(v));
+            text = NumberText.format(units[valueColumn].shown(v));
         }
         if (!node.has(c.key()) && node.has("material") && Double.isFinite(v)) {
             text += " (material)";
@@ -195,10 +262,10 @@ final class StackView implements PanelView {
     private String roleMark(ParameterRef ref) {
         return switch (project.role(ref)) {
             case FIXED -> "";
-            case FREE -> "   ▸ free";
+            case FREE -> " ▸ free";
             case UNCERTAIN -> {
                 double s = project.relativeSigma(ref);
-                yield Double.isNaN(s) ? "   ± σ" : "   ± " + NumberText.format(100 * s) + " %";
+                yield Double.isNaN(s) ? " ± σ" : " ± " + NumberText.format(100 * s) + " %";
             }
         };
     }
@@ -237,10 +304,14 @@ final class StackView implements PanelView {
         Text t = new Text(table, SWT.NONE);
         String shown = item.getText(column);
         int cut = shown.indexOf(' ');
-        t.setText(cut > 0 ? shown.substring(0, cut) : shown);
+        String number = cut > 0 ? shown.substring(0, cut) : shown;
+        t.setText(NumberText.parse(number) == null ? "" : number);
         t.selectAll();
+        // One visit to the cell is one undoable step, however many keystrokes it takes.
+        Object visit = new Object();
+        t.addListener(SWT.Modify, e -> take(row, column, t.getText(), visit, false));
         t.addListener(SWT.DefaultSelection, e -> {
-            if (commit(row, column, t.getText())) {
+            if (take(row, column, t.getText(), visit, true)) {
                 disposeEditor();
             }
         });
@@ -250,7 +321,7 @@ final class StackView implements PanelView {
             }
         });
         t.addListener(SWT.FocusOut, e -> {
-            if (!t.isDisposed() && commit(row, column, t.getText())) {
+            if (!t.isDisposed() && take(row, column, t.getText(), visit, true)) {
                 disposeEditor();
             }
         });
@@ -259,28 +330,38 @@ final class StackView implements PanelView {
     }
 
     /**
-     * Sets one value from the text typed in its cell, in the column's display unit; a text that is not a positive
-     * number is refused with a message, never clamped. True when the value was taken.
+     * Sets one value from the text typed in its cell, in the column's unit unless the text names another of the
+     * same quantity ({@code 0.1 µm}); a text that is not a positive value is refused with a message, never clamped.
+     * True when the value was taken.
      */
     boolean commit(int row, int column, String text) {
-        LayerColumn c = LayerColumn.VALUES.get(column - FIRST_VALUE);
+        return take(row, column, text, new Object(), true);
+    }
+
+    /** While typing (not finishing) a text that is not yet a value is left alone without a word. */
+    private boolean take(int row, int column, String text, Object visit, boolean finishing) {
+        int valueColumn = column - FIRST_VALUE;
+        LayerColumn c = LayerColumn.VALUES.get(valueColumn);
         String layer = names.get(row);
-        String shownNow = table.getItem(row).getText(column);
-        if (text.trim().equals(shownNow.split(" ")[0])) {
-            return true;
-        }
-        Double v = NumberText.parse(text);
-        if (v == null) {
-            status.show(layer + " · " + c.heading() + ": " + NumberText.notANumber(text), StatusLine.Tone.PROBLEM);
+        String where = layer + " · " + heading(valueColumn) + ": ";
+        double si;
+        try {
+            si = QuantityText.parse(text, c.key(), units[valueColumn]).si();
+        } catch (QuantityText.Refusal e) {
+            if (finishing) {
+                status.show(where + e.getMessage(), StatusLine.Tone.PROBLEM);
+            }
             return false;
         }
-        if (!(v > 0)) {
-            status.show(layer + " · " + c.heading() + ": " + NumberText.format(v) + " is not allowed; a layer's"
-                    + " values are positive", StatusLine.Tone.PROBLEM);
+        if (!(si > 0)) {
+            if (finishing) {
+                status.show(where + NumberText.format(units[valueColumn].shown(si)) + " is not allowed; a layer's"
+                        + " values are positive", StatusLine.Tone.PROBLEM);
+            }
             return false;
         }
         status.show("", StatusLine.Tone.PLAIN);
-        project.set(ParameterRef.layer(layer, c.key()), c.unit().si(v));
+        project.set(ParameterRef.layer(layer, c.key()), si, visit);
         return true;
     }
 

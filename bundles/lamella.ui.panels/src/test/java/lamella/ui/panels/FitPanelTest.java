@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import lamella.api.ParameterRef;
 import lamella.api.fit.FittedParameter;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableItem;
 import org.junit.jupiter.api.Test;
 
 class FitPanelTest {
@@ -28,12 +30,25 @@ class FitPanelTest {
             boolean found = false;
             for (int i = 0; i < v.results().getItemCount(); i++) {
                 if (v.results().getItem(i).getText(0).equals("film · Λ through (isotropic Λ)")) {
-                    assertEquals(NumberText.format(film.value()), v.results().getItem(i).getText(1));
-                    assertEquals("W/(m K)", v.results().getItem(i).getText(4));
+                    assertEquals(SigmaRounding.valueAndSigma(film.value(), film.sigma()),
+                            v.results().getItem(i).getText(1), "the value to the digits its σ allows");
+                    assertEquals("W/(m K)", v.results().getItem(i).getText(3));
                     found = true;
                 }
             }
             assertTrue(found, "the film's conductivity is in the table");
+            Table budget = v.budget();
+            TableItem total = budget.getItem(budget.getItemCount() - 1);
+            assertEquals("total (in quadrature)", total.getText(0));
+            for (int c = 2; c < budget.getColumnCount(); c++) {
+                assertTrue(total.getText(c).endsWith("(100 %)"), total.getText(c));
+                double shares = 0;
+                for (int r = 0; r < budget.getItemCount() - 1; r++) {
+                    String cell = budget.getItem(r).getText(c);
+                    shares += Double.parseDouble(cell.substring(cell.indexOf('(') + 1, cell.indexOf(" %")));
+                }
+                assertEquals(100, shares, 0.5 * budget.getItemCount(), "the shares add up to the whole variance");
+            }
             assertTrue(v.startButton().getEnabled(), "a new fit can start");
             h.screenshot("fit");
         }

@@ -81,6 +81,37 @@ class StackPanelTest {
         }
     }
 
+    @Test
+    void aColumnShowsTheUnitChosenForItAndTypedUnitsConvert() throws Exception {
+        try (PanelHarness h = new PanelHarness(1200, 520)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            assertEquals("thickness (nm)", stack.table().getColumn(2).getText());
+            assertEquals("G below (MW/(m² K))", stack.table().getColumn(6).getText());
+            stack.useUnit(0, DisplayUnit.choices("thickness_m").get(1));
+            try {
+                assertEquals("thickness (µm)", stack.table().getColumn(2).getText());
+                assertTrue(stack.table().getItem(0).getText(2).startsWith("0.085 "),
+                        stack.table().getItem(0).getText(2));
+                assertTrue(stack.commit(1, 2, "250 nm"), stack.statusText());
+                assertEquals(2.5e-7, h.workbench.project().tree().path("stack").path("layers").get(1)
+                        .path("thickness_m").asDouble(), 0, "files stay SI, exactly");
+                assertTrue(stack.table().getItem(1).getText(2).startsWith("0.25"), stack.table().getItem(1).getText(2));
+                for (int c = 0; c < stack.table().getColumnCount(); c++) {
+                    org.eclipse.swt.widgets.TableColumn col = stack.table().getColumn(c);
+                    org.eclipse.swt.graphics.GC gc = new org.eclipse.swt.graphics.GC(stack.table());
+                    try {
+                        assertTrue(col.getWidth() >= gc.textExtent(col.getText()).x,
+                                "the heading '" + col.getText() + "' is not cut");
+                    } finally {
+                        gc.dispose();
+                    }
+                }
+            } finally {
+                stack.useUnit(0, DisplayUnit.choices("thickness_m").get(0));
+            }
+        }
+    }
+
     private static Button button(PanelHarness h, String label) {
         java.util.ArrayDeque<org.eclipse.swt.widgets.Control> todo = new java.util.ArrayDeque<>(
                 List.of(h.shell.getChildren()));

@@ -30,17 +30,27 @@ final class Arrangement {
         this.root = root;
     }
 
-    /** Three columns, the middle one over a strip along the bottom. */
+    /**
+     * The inputs and their tables on the left, the plots beside them, messages and the project's files in a strip
+     * along the bottom. The left column asks for {@link #INPUT_COLUMN_PX} (as much as a stack table with all its
+     * columns needs), up to {@link Split#LEADING_SHARE_LIMIT} of the window, until the user moves its sash.
+     */
     static Arrangement standard() {
-        Split columns = new Split(true);
-        columns.add(new TabArea(Area.LEFT.name()), 26);
-        Split middle = new Split(false);
-        middle.add(new TabArea(Area.CENTER.name()), 68);
-        middle.add(new TabArea(Area.BOTTOM.name()), 32);
-        columns.add(middle, 48);
-        columns.add(new TabArea(Area.RIGHT.name()), 26);
-        return new Arrangement(columns);
+        Split top = new Split(true);
+        top.add(new TabArea(Area.LEFT.name()), 55);
+        top.add(new TabArea(Area.CENTER.name()), 45);
+        top.leadingPixels = INPUT_COLUMN_PX;
+        Split bottom = new Split(true);
+        bottom.add(new TabArea(Area.BOTTOM.name()), 62);
+        bottom.add(new TabArea(Area.RIGHT.name()), 38);
+        Split rows = new Split(false);
+        rows.add(top, 74);
+        rows.add(bottom, 26);
+        return new Arrangement(rows);
     }
+
+    /** Width the left column of the standard arrangement asks for, in pixels. */
+    static final int INPUT_COLUMN_PX = 830;
 
     List<TabArea> areas() {
         List<TabArea> out = new ArrayList<>();

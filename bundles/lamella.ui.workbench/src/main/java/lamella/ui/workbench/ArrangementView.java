@@ -36,6 +36,7 @@ final class ArrangementView {
     private final Composite host;
     private final PanelShelf shelf;
     private final Actions actions;
+    private static final String USER_DRAG = "lamella.userDrag";
     private final Map<SashForm, Drawn> sashes = new LinkedHashMap<>();
     private final Map<CTabFolder, TabArea> folders = new LinkedHashMap<>();
     private Arrangement arrangement;
@@ -169,7 +170,40 @@ final class ArrangementView {
         }
         sash.setWeights(weights);
         sashes.put(sash, new Drawn(split, drawn));
+        if (split.leadingPixels > 0 && drawn.get(0) == 0) {
+            sash.addListener(SWT.Resize, e -> keepLeading(sash, split));
+        }
         return sash;
+    }
+
+    /**
+     * Gives the first part the pixels its split asks for, within the share limit, each time the room changes size;
+     * the user's first drag of the sash ends that, and the split keeps whatever the user chose.
+     */
+    private static void keepLeading(SashForm sash, Split split) {
+        for (Control c : sash.getChildren()) {
+            if (c instanceof org.eclipse.swt.widgets.Sash bar && bar.getData(USER_DRAG) == null) {
+                bar.setData(USER_DRAG, Boolean.TRUE);
+                bar.addListener(SWT.Selection, e -> split.leadingPixels = 0);
+            }
+        }
+        int total = split.sideBySide ? sash.getClientArea().width : sash.getClientArea().height;
+        if (split.leadingPixels <= 0 || total <= 0) {
+            return;
+        }
+        int[] w = sash.getWeights();
+        int sum = java.util.Arrays.stream(w).sum();
+        int want = (int) Math.min(split.leadingPixels, Split.LEADING_SHARE_LIMIT * total);
+        int now = (int) Math.round((double) w[0] * total / sum);
+        if (Math.abs(now - want) > 2) {
+            int[] next = new int[w.length];
+            next[0] = Math.max(1, want);
+            int restOld = sum - w[0];
+            for (int k = 1; k < w.length; k++) {
+                next[k] = Math.max(1, (int) Math.round((double) w[k] / Math.max(1, restOld) * (total - want)));
+            }
+            sash.setWeights(next);
+        }
     }
 
     private Control area(Composite parent, TabArea area, boolean enlarged) {

@@ -6,7 +6,16 @@ import java.util.List;
 /** Parts side by side (left to right) or stacked (top to bottom), each with a share of the room. */
 final class Split extends Part {
 
+    /** The largest share of the room {@link #leadingPixels} may take. */
+    static final double LEADING_SHARE_LIMIT = 0.64;
+
     final boolean sideBySide;
+    /**
+     * Pixels the first part asks for whatever the window's size (0: none), until the user moves the sash: the
+     * standard arrangement's way of keeping a table's columns in view on a small screen. Not saved; a saved
+     * arrangement keeps the shares it had.
+     */
+    int leadingPixels;
     final List<Part> parts = new ArrayList<>();
     final List<Integer> weights = new ArrayList<>();
 

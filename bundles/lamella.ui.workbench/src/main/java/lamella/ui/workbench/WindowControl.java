@@ -153,6 +153,12 @@ final class WindowControl implements Function<String, String> {
         move.y = b.y + b.height / 2;
         d.post(move);
         shell.forceActive();
+        // Keys go to the control with the focus; one hidden behind another tab hears nothing, as a user would
+        // first click into the window.
+        Control focus = d.getFocusControl();
+        if (focus == null || !focus.isVisible() || focus.getShell() != shell) {
+            shell.setFocus();
+        }
         settle(150);
         List<String> parts = List.of(chord.toLowerCase(java.util.Locale.ROOT).split("\\+"));
         List<Integer> modifiers = new java.util.ArrayList<>();
@@ -280,7 +286,9 @@ final class WindowControl implements Function<String, String> {
         List<String> out = new java.util.ArrayList<>();
         for (int i = 0; i < controls.size() - 1; i++) {
             if (controls.get(i) instanceof Label l && controls.get(i + 1) instanceof Text t) {
-                out.add(l.getText() + " = " + t.getText());
+                String unit = i + 2 < controls.size() && controls.get(i + 2) instanceof Combo c ? " " + c.getText()
+                        : "";
+                out.add(l.getText() + " = " + t.getText() + unit);
             }
         }
         return String.join("\n", out);

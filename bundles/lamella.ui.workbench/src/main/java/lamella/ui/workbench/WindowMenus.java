@@ -85,7 +85,8 @@ final class WindowMenus {
         redo.addListener(SWT.Selection, e -> window.project().redo());
         // Ctrl+Y is the other usual key for redo; a menu item takes one accelerator, so the window listens for it.
         shell.getDisplay().addFilter(SWT.KeyDown, e -> {
-            boolean ctrlY = (e.stateMask & SWT.MODIFIER_MASK) == SWT.MOD1 && (e.keyCode == 'y' || e.keyCode == 'Y');
+            boolean ctrlY = (e.stateMask & SWT.MOD1) != 0 && (e.stateMask & (SWT.SHIFT | SWT.ALT)) == 0
+                    && (e.keyCode == 'y' || e.keyCode == 'Y');
             if (ctrlY && !shell.isDisposed() && e.widget instanceof org.eclipse.swt.widgets.Control c
                     && c.getShell() == shell) {
                 e.doit = false;

@@ -34,9 +34,6 @@ import org.eclipse.swt.widgets.Shell;
  */
 final class WorkbenchWindow implements Workbench {
 
-    private static final int DEFAULT_WIDTH = 1440;
-    private static final int DEFAULT_HEIGHT = 900;
-
     private final Display display;
     private final LiveServices services;
     private final MessageLog messages;
@@ -357,19 +354,18 @@ final class WorkbenchWindow implements Workbench {
         }
     }
 
-    /** The saved bounds if they still fit on a screen, else a comfortable size centred on the primary one. */
+    /** The saved bounds if they still fit on a screen, else the whole of the primary screen's work area. */
     private void placeWindow() {
         Arrangement a = layout.arrangement();
         Rectangle screen = display.getPrimaryMonitor().getClientArea();
         Rectangle saved = new Rectangle(a.x, a.y, a.width, a.height);
         if (a.width > 200 && a.height > 150 && screen.intersects(saved)) {
-            shell.setBounds(saved);
+            shell.setBounds(saved.intersection(screen));
+            shell.setMaximized(a.windowMaximised);
         } else {
-            int w = Math.min(DEFAULT_WIDTH, screen.width);
-            int h = Math.min(DEFAULT_HEIGHT, screen.height);
-            shell.setBounds(screen.x + (screen.width - w) / 2, screen.y + (screen.height - h) / 2, w, h);
+            shell.setBounds(screen);
+            shell.setMaximized(true);
         }
-        shell.setMaximized(a.windowMaximised);
     }
 
     private void onUi(Runnable r) {
