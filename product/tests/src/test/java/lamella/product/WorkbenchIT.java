@@ -88,7 +88,8 @@ class WorkbenchIT {
 
     @Test
     void theTitleNamesTheProjectAndTheStatusLineJudgesTheCase() {
-        assertTrue(ask("title").matches("Lamella — [^ /]+\\.json( •)?"), ask("title"));
+        assertTrue(ask("title").matches("Lamella — [^ /]+\\.json in [^ /]+( \\(demo, read-only\\))?( •)?"),
+                ask("title"));
         assertTrue(ask("status").startsWith("Case valid: gaussian heating"), ask("status"));
     }
 
@@ -115,13 +116,44 @@ class WorkbenchIT {
     void saveAsWritesACaseTheCaseReaderAccepts() throws Exception {
         Path target = user.resolve("saved/oxide-copy.json");
         assertEquals("saved", ask("save-as " + target));
-        assertEquals("Lamella — oxide-copy.json", ask("title"));
+        assertEquals("Lamella — oxide-copy.json in saved", ask("title"));
+        try (Stream<Path> copied = Files.list(target.getParent())) {
+            assertEquals(List.of("fdtr.csv", "oxide-copy.json", "tdtr-1.1mhz.csv", "tdtr-9.8mhz.csv"),
+                    copied.map(p -> p.getFileName().toString()).sorted().toList(), "the data came along");
+        }
         Object format = service("lamella.api.CaseFormat", null);
         Object doc = api(format, "lamella.api.CaseFormat").getMethod("read", Path.class).invoke(format, target);
         assertNotNull(doc);
         String text = Files.readString(target, StandardCharsets.UTF_8);
         assertTrue(text.contains("\"stack\""), text);
         assertTrue(Files.readString(user.resolve("recent.json")).contains("oxide-copy.json"));
+    }
+
+    @Test
+    void helpHoldsTheUsersLoopAndTheKeysAndAboutNamesTheVersion() {
+        String guide = ask("help User guide");
+        for (String step : List.of("1. Stack", "2. Set-up", "3. Import", "4. Sensitivity", "5. Fit", "6. Report",
+                "Laser and heater safety")) {
+            assertTrue(guide.contains(step), step + " in: " + guide);
+        }
+        String keys = ask("help Keyboard shortcuts");
+        assertTrue(keys.contains("Ctrl+Z") && keys.contains("Ctrl+Shift+Z, Ctrl+Y"), keys);
+        String about = ask("help About Lamella");
+        String version = bundle("lamella.ui.workbench").getVersion().toString();
+        assertTrue(about.contains("Lamella " + version), version + " in: " + about);
+        assertTrue(about.contains("laser safety programme"), about);
+        assertEquals("none", ask("dialog"), "each help window closed again");
+    }
+
+    @Test
+    void theDemosOwnFolderIsNeverSavedInto() throws Exception {
+        Path demoCase = home.resolve("demo/oxide-film-joint/case.json");
+        String before = Files.readString(demoCase);
+        assertEquals("error: not saved", window.apply("save-as " + demoCase));
+        String notice = waitFor(() -> ask("dialog"), d -> d.startsWith("Not saved"));
+        assertTrue(notice.contains("demo folder"), notice);
+        ask("dialog-press OK");
+        assertEquals(before, Files.readString(demoCase));
     }
 
     @Test

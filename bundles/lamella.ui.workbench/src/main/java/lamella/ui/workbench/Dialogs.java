@@ -7,7 +7,6 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Label;
-import org.eclipse.swt.widgets.MessageBox;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Text;
 
@@ -101,10 +100,36 @@ final class Dialogs {
         return chosen[0];
     }
 
-    static void tell(Shell parent, String title, String text, int icon) {
-        MessageBox box = new MessageBox(parent, icon | SWT.OK);
-        box.setText(title);
-        box.setMessage(text);
-        box.open();
+    /**
+     * A notice with an OK button, in a window of Lamella's own that does not wait to be closed: the caller goes on,
+     * and the window's event loop serves the notice.
+     */
+    static Shell tell(Shell parent, String title, String text, int icon) {
+        Shell d = new Shell(parent, SWT.DIALOG_TRIM | SWT.APPLICATION_MODAL);
+        d.setText(title);
+        GridLayout layout = new GridLayout(2, false);
+        layout.marginWidth = 16;
+        layout.marginHeight = 14;
+        layout.horizontalSpacing = 12;
+        d.setLayout(layout);
+        Label image = new Label(d, SWT.NONE);
+        image.setImage(d.getDisplay().getSystemImage(icon));
+        image.setLayoutData(new GridData(SWT.CENTER, SWT.TOP, false, false));
+        Label message = new Label(d, SWT.WRAP);
+        message.setText(text);
+        GridData md = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        md.widthHint = 440;
+        message.setLayoutData(md);
+        Button ok = new Button(d, SWT.PUSH);
+        ok.setText("OK");
+        GridData od = new GridData(SWT.END, SWT.CENTER, true, false, 2, 1);
+        od.widthHint = 90;
+        ok.setLayoutData(od);
+        ok.addListener(SWT.Selection, e -> d.close());
+        d.setDefaultButton(ok);
+        d.pack();
+        centre(d, parent);
+        d.open();
+        return d;
     }
 }

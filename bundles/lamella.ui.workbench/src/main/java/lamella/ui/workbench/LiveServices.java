@@ -26,4 +26,7 @@ interface LiveServices {
     List<DataImporter> importers();
 
     List<WorkbenchPanel> panels();
+
+    /** Lamella's version, as the workbench bundle carries it. */
+    String version();
 }

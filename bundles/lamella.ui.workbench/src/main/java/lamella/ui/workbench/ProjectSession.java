@@ -58,8 +58,20 @@ final class ProjectSession {
         return recent;
     }
 
+    /** The project as the title names it: its file and the folder it is in ("case.json in oxide-film-joint"). */
     String name() {
-        return project.file().map(f -> f.getFileName().toString()).orElse("untitled");
+        return project.file().map(f -> f.getFileName() + (f.getParent() != null && f.getParent().getFileName()
+                != null ? " in " + f.getParent().getFileName() : "") + (isDemo(f) ? " (demo, read-only)" : ""))
+                .orElse("untitled");
+    }
+
+    /** The shipped demo's folder is Lamella's own: Save never writes into it. */
+    boolean isDemo(Path file) {
+        if (home == null) {
+            return false;
+        }
+        Path demo = home.resolve("demo").toAbsolutePath().normalize();
+        return file.toAbsolutePath().normalize().startsWith(demo);
     }
 
     /** The last project if it still opens, else the shipped demo case, else a small template. */
@@ -136,23 +148,42 @@ final class ProjectSession {
         }
     }
 
+    /** Saves to the project's file; a project that is untitled or the shipped demo asks where instead. */
     boolean save() {
-        return project.file().isPresent() ? saveTo(project.file().get()) : saveAs();
+        if (project.file().isPresent() && !isDemo(project.file().get())) {
+            return saveTo(project.file().get());
+        }
+        return saveAs();
     }
 
+    /**
+     * Asks where to save, never offering the demo's own folder: the data files are copied beside the chosen case
+     * file, which then refers to them by relative paths.
+     */
     boolean saveAs() {
         FileDialog d = new FileDialog(shell, SWT.SAVE);
-        d.setText("Save the project as");
+        d.setText("Save the project as (its data files are copied beside it)");
         d.setFilterExtensions(new String[] {"*.json", "*"});
         d.setFilterNames(new String[] {"Lamella case files (*.json)", "All files"});
-        d.setFileName(project.file().map(f -> f.getFileName().toString()).orElse("case.json"));
-        d.setFilterPath(project.folder().toString());
+        boolean demo = project.file().filter(this::isDemo).isPresent();
+        String suggested = project.file().map(f -> demo ? f.getParent().getFileName() + ".json"
+                : f.getFileName().toString()).orElse("case.json");
+        d.setFileName(suggested);
+        d.setFilterPath(demo || project.file().isEmpty() ? System.getProperty("user.home")
+                : project.folder().toString());
         d.setOverwrite(true);
         String chosen = d.open();
         return chosen != null && saveTo(Path.of(chosen));
     }
 
     boolean saveTo(Path target) {
+        if (isDemo(target)) {
+            String why = "The demo folder " + home.resolve("demo") + " holds Lamella's own files; save your project"
+                    + " in a folder of your own.";
+            messages.warning("Not saved: " + why);
+            Dialogs.tell(shell, "Not saved", why, SWT.ICON_WARNING);
+            return false;
+        }
         try {
             project.save(target);
             recent.opened(target, messages);
@@ -161,7 +192,7 @@ final class ProjectSession {
             return true;
         } catch (IOException | RuntimeException e) {
             messages.error("Could not save " + target + "; nothing was changed on disk", e);
-            Dialogs.tell(shell, "Not saved", "Could not save " + target + ":\n" + e.getMessage(), SWT.ICON_ERROR);
+            Dialogs.tell(shell, "Not saved", "Could not save " + target + ":\n" + Failures.words(e), SWT.ICON_ERROR);
             return false;
         }
     }

@@ -30,7 +30,7 @@ import org.eclipse.swt.widgets.Text;
  * Drives the open window from another thread with words only (a JDK type crosses the bundle boundary): each
  * command runs on the UI thread, as the user's gesture would, and answers with text. Commands:
  * {@code panels}, {@code placements}, {@code move ID TARGET_ID TABS|LEFT|RIGHT|TOP|BOTTOM}, {@code view-menu},
- * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code save-as PATH}, {@code status},
+ * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code help ITEM}, {@code save-as PATH}, {@code status},
  * {@code title}, {@code size W H}, {@code screenshot PATH}, {@code messages}, {@code first-paint-ms},
  * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
  * {@code key ctrl+shift+z}; controls found by what they show: {@code press LABEL} (without waiting, so that a dialog
@@ -90,6 +90,8 @@ final class WindowControl implements Function<String, String> {
                 return window.layout().enlarged() ? "enlarged" : "restored";
             case "safety":
                 return safetyDialogText();
+            case "help":
+                return helpText(rest(w, 1));
             case "save-as":
                 return window.session().saveTo(Path.of(rest(w, 1))) ? "saved" : "error: not saved";
             case "status":
@@ -306,6 +308,18 @@ final class WindowControl implements Function<String, String> {
 
     private static List<String> parts(String[] w) {
         return Arrays.stream(rest(w, 1).split("\\s*\\|\\s*")).toList();
+    }
+
+    /** Opens a Help menu item as a user would, reads its window's texts, and closes it again. */
+    private String helpText(String item) {
+        window.menus().chooseHelp(item);
+        Shell s = WidgetFinder.dialog(window.shell())
+                .orElseThrow(() -> new IllegalStateException("Help ▸ " + item + " opened no window"));
+        String text = s.getText() + "\n" + WidgetFinder.visible(s).stream()
+                .map(c -> c instanceof Text t ? t.getText() : c instanceof Label l ? l.getText() : "")
+                .filter(x -> !x.isEmpty()).collect(Collectors.joining("\n"));
+        s.close();
+        return text;
     }
 
     /** Opens the safety notice through the Help menu, reads what it says, and closes it again. */

@@ -39,8 +39,14 @@ final class WindowMenus {
         view.addListener(SWT.Show, e -> fillView());
         fillView();
         help = cascade(bar, "&Help");
+        item(help, "&User guide…", SWT.F1, () -> HelpWindow.open(shell, HelpTexts.GUIDE_TITLE,
+                "Working with the workbench: stack, set-up, import, sensitivity, fit, report", HelpTexts.GUIDE, 640,
+                460));
+        item(help, "&Keyboard shortcuts…", 0, () -> HelpWindow.open(shell, HelpTexts.KEYS_TITLE,
+                HelpTexts.KEYS_TITLE, HelpTexts.KEYS, 560, 320));
+        new MenuItem(help, SWT.SEPARATOR);
         item(help, "&Laser and heater safety…", 0, () -> SafetyNotice.open(shell));
-        item(help, "&About Lamella", 0, () -> AboutNotice.open(shell));
+        item(help, "&About Lamella", 0, () -> AboutNotice.open(shell, window.version()));
         shell.setMenuBar(bar);
     }
 

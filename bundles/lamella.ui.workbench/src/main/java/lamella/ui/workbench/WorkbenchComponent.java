@@ -145,6 +145,11 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
         return List.copyOf(panels);
     }
 
+    @Override
+    public String version() {
+        return context.getBundle().getVersion().toString();
+    }
+
     // ------------------------------------------------------------------ references
 
     /** Every geometry behind a guard, so that a faulty plug-in fails one computation with its bundle's name. */

@@ -181,6 +181,10 @@ final class WorkbenchWindow implements Workbench {
         return status;
     }
 
+    String version() {
+        return services.version();
+    }
+
     BackgroundTasks tasks() {
         return tasks;
     }
