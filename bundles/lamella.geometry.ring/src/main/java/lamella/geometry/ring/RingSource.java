@@ -17,8 +17,9 @@ import org.osgi.service.component.annotations.Component;
 /**
  * Heat deposited on a ring of radius R — an annular pump beam or an annular resistive heater — read by a Gaussian
  * probe of 1/e² radius w₁ at the ring's centre. A thin ring of unit power has the transform J₀(kR); a ring of finite
- * width is modelled as the thin ring blurred by a Gaussian of 1/e² radius σ (accurate for σ ≪ R), so
- * H(ω) = (1/2π) ∫₀^∞ Z(k, ω) J₀(kR) exp(−k²(σ² + w₁²)/8) k dk.
+ * width is an annulus whose intensity across the width is exp(−2 (r − R)²/w²), w its 1/e² half-width, with the
+ * transform G(k) of {@link AnnulusTransform} (computed exactly by quadrature at each wavenumber), so
+ * H(ω) = (1/2π) ∫₀^∞ Z(k, ω) G(k) exp(−k² w₁²/8) k dk.
  */
 @Component(service = HeatingGeometry.class)
 public final class RingSource implements HeatingGeometry {
@@ -26,6 +27,8 @@ public final class RingSource implements HeatingGeometry {
     static final String RADIUS = "ring_radius_m";
     static final String WIDTH = "ring_width_m";
     static final String PROBE = "probe_radius_m";
+    /** Beyond the cut-off wavenumber the Gaussian weights are below exp(−25) ≈ 1.4e-11. */
+    private static final double CUTOFF = 25.0;
 
     @Override
     public String type() {
@@ -42,7 +45,8 @@ public final class RingSource implements HeatingGeometry {
         return List.of(
                 ParameterSpec.required(RADIUS, Constraint.POSITIVE, "the ring's radius in m"),
                 ParameterSpec.optional(WIDTH, Constraint.NON_NEGATIVE, 0.0,
-                        "the ring's Gaussian 1/e² half-width in m (0: a thin ring)"),
+                        "the 1/e² half-width in m of the ring's Gaussian radial profile about its radius"
+                                + " (0: a thin ring)"),
                 ParameterSpec.required(PROBE, Constraint.POSITIVE, "the probe's 1/e² intensity radius in m"));
     }
 
@@ -56,15 +60,35 @@ public final class RingSource implements HeatingGeometry {
         Geometries.requireInPlaneIsotropy(stack.stack(), p.path(), type());
         double radius = p.number(RADIUS);
         double width = p.number(WIDTH);
-        if (width >= radius) {
-            throw InputException.at(p.pathOf(WIDTH), "the ring's width " + width + " m must be below its radius "
-                    + radius + " m (a blurred thin ring models only a narrow ring)");
+        double probe = p.number(PROBE);
+        if (width == 0) {
+            double w2 = probe * probe;
+            return (frequencyHz, out) -> {
+                double omega = 2 * Math.PI * frequencyHz;
+                Geometries.requireSteadyStateExists(stack.stack(), omega, type());
+                GaussianHankel.integrate(stack, omega, w2, radius, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE,
+                        out);
+                Geometries.requireFinite(out, type(), frequencyHz);
+            };
         }
-        double w2 = width * width + p.number(PROBE) * p.number(PROBE);
+        AnnulusTransform annulus = new AnnulusTransform(radius, width);
+        double eighthProbe2 = probe * probe / 8.0;
+        // the annulus' transform decays like exp(−k² w²/8) once clear of the centre; nearer it, only the probe's does
+        double kMax = Math.sqrt(CUTOFF * 8.0 / (probe * probe + (annulus.clearOfCentre() ? width * width : 0)));
+        double period = 2 * Math.PI / radius;
         return (frequencyHz, out) -> {
             double omega = 2 * Math.PI * frequencyHz;
             Geometries.requireSteadyStateExists(stack.stack(), omega, type());
-            GaussianHankel.integrate(stack, omega, w2, radius, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE, out);
+            double[] z = new double[2];
+            Geometries.workspace().integrate((k, o) -> {
+                stack.radialResponse(k, omega, z);
+                double w = k * Math.exp(-eighthProbe2 * k * k) * annulus.at(k);
+                o[0] = z[0] * w;
+                o[1] = z[1] * w;
+            }, 0.0, kMax, stack.featureWavenumbers(omega), period, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE,
+                    0.0, out);
+            out[0] /= 2 * Math.PI;
+            out[1] /= 2 * Math.PI;
             Geometries.requireFinite(out, type(), frequencyHz);
         };
     }
