@@ -62,6 +62,14 @@ public final class FitCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
+        if (o.has("--out")) {
+            Path clash = lamella.api.OwnInputs.clash(io.resolve(o.value("--out")),
+                    lamella.api.OwnInputs.ofCase(casePath));
+            if (clash != null) {
+                io.err().println(lamella.api.OwnInputs.message("fit", io.resolve(o.value("--out")), clash));
+                return BAD_INPUT;
+            }
+        }
         try {
             FitSettings settings = FitReportRun.settings(o);
             CaseDocument doc = caseFormat.read(casePath);

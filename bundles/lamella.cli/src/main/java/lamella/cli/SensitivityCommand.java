@@ -66,6 +66,14 @@ public final class SensitivityCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
+        if (o.has("--out")) {
+            Path clash = lamella.api.OwnInputs.clash(io.resolve(o.value("--out")),
+                    lamella.api.OwnInputs.ofCase(casePath));
+            if (clash != null) {
+                io.err().println(lamella.api.OwnInputs.message("sensitivity", io.resolve(o.value("--out")), clash));
+                return BAD_INPUT;
+            }
+        }
         try {
             int dataset = o.has("--dataset") ? o.count("--dataset", 0) : -1;
             CaseDocument doc = caseFormat.read(casePath);

@@ -109,6 +109,13 @@ public final class SimulateCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(caseArg);
+        if (outArg != null) {
+            Path clash = lamella.api.OwnInputs.clash(io.resolve(outArg), lamella.api.OwnInputs.ofCase(casePath));
+            if (clash != null) {
+                io.err().println(lamella.api.OwnInputs.message("simulate", io.resolve(outArg), clash));
+                return BAD_INPUT;
+            }
+        }
         SignalTable table;
         try {
             CaseDocument doc = explain ? ValueOrigins.readExplaining(caseFormat, casePath, io.err())

@@ -114,6 +114,15 @@ public final class ImportCommand implements Command {
             return BAD_INPUT;
         }
         Path file = io.resolve(request.file());
+        if (request.out() != null) {
+            List<Path> inputs = request.reference() == null ? List.of(file)
+                    : List.of(file, io.resolve(request.reference()));
+            Path clash = lamella.api.OwnInputs.clash(io.resolve(request.out()), inputs);
+            if (clash != null) {
+                io.err().println(lamella.api.OwnInputs.message("import", io.resolve(request.out()), clash));
+                return BAD_INPUT;
+            }
+        }
         ConditionedTable table;
         DataImporter importer;
         Dataset data;
