@@ -75,6 +75,18 @@ public final class OwnInputs {
         return null;
     }
 
+    /**
+     * The refusal to print when a command's output {@code out} (null: none) is the case file or a file the case names,
+     * or null when the output is safe.
+     */
+    public static String refusal(String command, Path out, Path caseFile) {
+        if (out == null) {
+            return null;
+        }
+        Path clash = clash(out, ofCase(caseFile));
+        return clash == null ? null : message(command, out, clash);
+    }
+
     /** The message for a refused output, in one wording for every command. */
     public static String message(String command, Path out, Path input) {
         return "lamella " + command + ": --out " + out + " would overwrite its own input " + input

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import lamella.api.AtomicText;
+import lamella.api.OwnInputs;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
@@ -62,13 +63,10 @@ public final class FitCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
-        if (o.has("--out")) {
-            Path clash = lamella.api.OwnInputs.clash(io.resolve(o.value("--out")),
-                    lamella.api.OwnInputs.ofCase(casePath));
-            if (clash != null) {
-                io.err().println(lamella.api.OwnInputs.message("fit", io.resolve(o.value("--out")), clash));
-                return BAD_INPUT;
-            }
+        String refused = OwnInputs.refusal("fit", o.has("--out") ? io.resolve(o.value("--out")) : null, casePath);
+        if (refused != null) {
+            io.err().println(refused);
+            return BAD_INPUT;
         }
         try {
             FitSettings settings = FitReportRun.settings(o);

@@ -7,6 +7,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import lamella.api.AtomicText;
+import lamella.api.OwnInputs;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
@@ -66,13 +67,10 @@ public final class SensitivityCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
-        if (o.has("--out")) {
-            Path clash = lamella.api.OwnInputs.clash(io.resolve(o.value("--out")),
-                    lamella.api.OwnInputs.ofCase(casePath));
-            if (clash != null) {
-                io.err().println(lamella.api.OwnInputs.message("sensitivity", io.resolve(o.value("--out")), clash));
-                return BAD_INPUT;
-            }
+        String refused = OwnInputs.refusal("sensitivity", o.has("--out") ? io.resolve(o.value("--out")) : null, casePath);
+        if (refused != null) {
+            io.err().println(refused);
+            return BAD_INPUT;
         }
         try {
             int dataset = o.has("--dataset") ? o.count("--dataset", 0) : -1;

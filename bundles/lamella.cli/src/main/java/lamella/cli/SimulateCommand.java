@@ -1,6 +1,7 @@
 package lamella.cli;
 
 import lamella.api.AtomicText;
+import lamella.api.OwnInputs;
 import lamella.api.guard.LiveModels;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -109,12 +110,10 @@ public final class SimulateCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(caseArg);
-        if (outArg != null) {
-            Path clash = lamella.api.OwnInputs.clash(io.resolve(outArg), lamella.api.OwnInputs.ofCase(casePath));
-            if (clash != null) {
-                io.err().println(lamella.api.OwnInputs.message("simulate", io.resolve(outArg), clash));
-                return BAD_INPUT;
-            }
+        String refused = OwnInputs.refusal("simulate", outArg == null ? null : io.resolve(outArg), casePath);
+        if (refused != null) {
+            io.err().println(refused);
+            return BAD_INPUT;
         }
         SignalTable table;
         try {

@@ -25,11 +25,14 @@ final class AnnulusTransform {
     /** Gauss–Hermite rules by size; the first whose reach covers the oscillation is used. */
     private static final int[] HERMITE_SIZES = {16, 24, 32, 48, 64, 96};
     private static final double[][][] HERMITE = new double[HERMITE_SIZES.length][][];
+    /** The largest oscillation c each rule is used for: 0.75·√(2n). */
+    private static final double[] HERMITE_REACH = new double[HERMITE_SIZES.length];
     private static final double[][] LEGENDRE10 = GaussRules.legendre(10);
 
     static {
         for (int i = 0; i < HERMITE_SIZES.length; i++) {
             HERMITE[i] = GaussRules.hermite(HERMITE_SIZES[i]);
+            HERMITE_REACH[i] = 0.75 * Math.sqrt(2.0 * HERMITE_SIZES[i]);
         }
     }
 
@@ -40,6 +43,8 @@ final class AnnulusTransform {
     private final double[][] hermiteRadii = new double[HERMITE_SIZES.length][];
     private final double[][] hermiteWeights = new double[HERMITE_SIZES.length][];
     private final double legendreEnd;
+    /** w/√2: the oscillation across the profile is c = k·w/√2 in the Gauss–Hermite variable. */
+    private final double halfWidthScale;
 
     AnnulusTransform(double radius, double width) {
         if (!(width > 0) || !(radius > 0)) {
@@ -49,8 +54,9 @@ final class AnnulusTransform {
         this.width = width;
         this.hermite = radius >= CLEAR * width;
         this.legendreEnd = radius + SPAN * width;
+        this.halfWidthScale = width / Math.sqrt(2);
         if (hermite) {
-            double scale = width / Math.sqrt(2);
+            double scale = halfWidthScale;
             for (int s = 0; s < HERMITE_SIZES.length; s++) {
                 double[] x = HERMITE[s][0];
                 double[] h = HERMITE[s][1];
@@ -84,9 +90,9 @@ final class AnnulusTransform {
     private double hermiteAt(double k) {
         // J₀ across the profile oscillates like cos(c x), c = k w/√2; an n-point rule resolves c up to about
         // √(2n)·0.6 with the Gaussian's own decay exp(−c²/4) doing the rest
-        double c = k * width / Math.sqrt(2);
+        double c = k * halfWidthScale;
         int s = 0;
-        while (s < HERMITE_SIZES.length - 1 && c > 0.75 * Math.sqrt(2.0 * HERMITE_SIZES[s])) {
+        while (s < HERMITE_SIZES.length - 1 && c > HERMITE_REACH[s]) {
             s++;
         }
         double[] r = hermiteRadii[s];
