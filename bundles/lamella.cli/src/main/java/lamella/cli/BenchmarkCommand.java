@@ -91,7 +91,8 @@ public final class BenchmarkCommand implements Command {
                 on an oxide film on a crystalline substrate, with Gaussian beams. Prints the median and fastest
                 of %d runs after %d warm-up runs. Then, on synthetic data the model makes, times a two-parameter
                 FDTR fit of 30 points, a joint three-parameter fit of TDTR at two modulation frequencies, and 1000
-                Monte Carlo refits of the FDTR fit, on all cores.
+                Monte Carlo refits of the FDTR fit, on all cores. Also times 200 frequencies (1 kHz-10 MHz) on a
+                ring of 1 mm radius, thin and 2 um wide, read by a 3 um probe at its centre (median of 5 runs).
                 """.formatted(RUNS, WARM_UP);
     }
 
@@ -115,6 +116,7 @@ public final class BenchmarkCommand implements Command {
             io.out().println("lamella benchmark: one thread, " + RUNS + " runs after " + WARM_UP + " warm-up runs");
             report(io, "FDTR curve, 200 frequencies, 3 layers", models.catalog(kernels).simulation(stack, beams, fdtr));
             report(io, "TDTR curve, 50 delays, 3 layers", models.catalog(kernels).simulation(stack, beams, tdtr));
+            rings(io);
             FitBenchmark.run(io, caseFormat, fitter, models.catalog(kernels),
                     Math.max(1, Runtime.getRuntime().availableProcessors()));
             return OK;
@@ -128,6 +130,30 @@ public final class BenchmarkCommand implements Command {
         } catch (ModelEvaluationException e) {
             io.err().println("lamella benchmark: cannot evaluate the built-in cases: " + e.getMessage());
             return FAILED;
+        }
+    }
+
+    /** Large rings (annular beams, ring heaters) cost the most per frequency: 200 frequencies at R = 1 mm. */
+    private void rings(CommandIO io) throws InputException {
+        Stack metalOnGlass = new Stack(List.of(
+                Layer.isotropicInPlane("transducer", 8e-8, 180, 180, 2.42e6),
+                Layer.isotropicInPlane("glass", Double.POSITIVE_INFINITY, 1.38, 1.38, 1.6e6)),
+                BottomBoundary.SEMI_INFINITE);
+        Block fdtr = block("measurement", Map.of("type", "fdtr", "frequencies_hz", logSpaced(1e3, 1e7, 200)));
+        for (double width : new double[] {0, 2e-6}) {
+            Block ring = block("geometry", Map.of("type", "ring", "ring_radius_m", 1e-3, "ring_width_m", width,
+                    "probe_radius_m", 3e-6));
+            Simulation s = models.catalog(kernels).simulation(metalOnGlass, ring, fdtr);
+            s.run();
+            double[] ms = new double[5];
+            for (int i = 0; i < ms.length; i++) {
+                long t0 = System.nanoTime();
+                s.run();
+                ms[i] = (System.nanoTime() - t0) / 1e6;
+            }
+            Arrays.sort(ms);
+            io.out().println(String.format(Locale.ROOT, "  %-40s median %8.3f ms   fastest %8.3f ms",
+                    "ring R 1 mm, width " + (width == 0 ? "0" : "2 um") + ", 200 frequencies", ms[2], ms[0]));
         }
     }
 

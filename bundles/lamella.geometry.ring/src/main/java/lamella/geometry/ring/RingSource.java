@@ -1,5 +1,6 @@
 package lamella.geometry.ring;
 
+import java.util.Arrays;
 import java.util.List;
 import lamella.api.GeometryModel;
 import lamella.api.HeatingGeometry;
@@ -75,21 +76,38 @@ public final class RingSource implements HeatingGeometry {
         double eighthProbe2 = probe * probe / 8.0;
         // the annulus' transform decays like exp(−k² w²/8) once clear of the centre; nearer it, only the probe's does
         double kMax = Math.sqrt(CUTOFF * 8.0 / (probe * probe + (annulus.clearOfCentre() ? width * width : 0)));
-        double period = 2 * Math.PI / radius;
+        // panels start on one grid of the ring's period for every frequency (with that frequency's features added as
+        // breaks), so the nodes of successive integrals coincide and G(k) is computed once per node, not per frequency
+        double[] grid = periodGrid(kMax, 2 * Math.PI / radius);
+        ThreadLocal<WavenumberMemo> memo = ThreadLocal.withInitial(() -> new WavenumberMemo(annulus::at));
         return (frequencyHz, out) -> {
             double omega = 2 * Math.PI * frequencyHz;
             Geometries.requireSteadyStateExists(stack.stack(), omega, type());
+            double[] features = stack.featureWavenumbers(omega);
+            double[] breaks = Arrays.copyOf(grid, grid.length + features.length);
+            System.arraycopy(features, 0, breaks, grid.length, features.length);
+            WavenumberMemo g = memo.get();
             double[] z = new double[2];
             Geometries.workspace().integrate((k, o) -> {
                 stack.radialResponse(k, omega, z);
-                double w = k * Math.exp(-eighthProbe2 * k * k) * annulus.at(k);
+                double w = k * Math.exp(-eighthProbe2 * k * k) * g.at(k);
                 o[0] = z[0] * w;
                 o[1] = z[1] * w;
-            }, 0.0, kMax, stack.featureWavenumbers(omega), period, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE,
-                    0.0, out);
+            }, 0.0, kMax, breaks, 0.0, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE, 0.0, out);
             out[0] /= 2 * Math.PI;
             out[1] /= 2 * Math.PI;
             Geometries.requireFinite(out, type(), frequencyHz);
         };
+    }
+
+    /** The multiples of the period inside (0, kMax): at most one panel per oscillation of J₀(kR) to begin with. */
+    static double[] periodGrid(double kMax, double period) {
+        int n = (int) Math.min(Math.ceil(kMax / period) - 1, SpectralQuadrature.MAX_PANELS - 1);
+        double step = kMax / (n + 1);
+        double[] grid = new double[Math.max(n, 0)];
+        for (int i = 0; i < grid.length; i++) {
+            grid[i] = (i + 1) * step;
+        }
+        return grid;
     }
 }
