@@ -29,6 +29,16 @@ final class FitResultJson {
     }
 
     static String format(Path caseFile, FitOutcome o) throws JsonProcessingException {
+        return text(tree(caseFile, o));
+    }
+
+    /** A result (or any tree) as the file holds it: indented, ending in a newline. */
+    static String text(ObjectNode root) throws JsonProcessingException {
+        return MAPPER.writeValueAsString(root) + "\n";
+    }
+
+    /** The result as a tree, for commands that add their own record to it (batch). */
+    static ObjectNode tree(Path caseFile, FitOutcome o) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("case", caseFile.toString());
         root.put("converged", o.converged());
@@ -91,7 +101,7 @@ final class FitResultJson {
         o.monteCarlo().ifPresent(mc -> monteCarlo(root.putObject("monte_carlo"), mc, o.parameters()));
         ArrayNode warnings = root.putArray("warnings");
         o.warnings().forEach(warnings::add);
-        return MAPPER.writeValueAsString(root) + "\n";
+        return root;
     }
 
     private static void monteCarlo(ObjectNode n, MonteCarloSummary mc, List<FittedParameter> params) {

@@ -1,0 +1,65 @@
+package lamella.cli;
+
+import java.util.Map;
+import lamella.api.CaseDocument;
+import lamella.api.CaseModel;
+import lamella.api.InputException;
+import lamella.api.Names;
+import lamella.api.ParameterRef;
+
+/**
+ * A batch entry's {@code set}: inputs of a case replaced by their parameter paths ({@code film.thickness_m},
+ * {@code geometry.pump_radius_m}, {@code measurement.modulation_hz}) before it is fitted — the same paths every
+ * output uses. A fit that leaves an input free starts from the replaced value unless its {@code initial} says
+ * otherwise.
+ */
+final class CaseOverrides {
+
+    private CaseOverrides() {
+    }
+
+    /** The case with every override applied; a bad path or value is an InputException at {@code set.PATH}. */
+    static CaseDocument apply(CaseDocument doc, Map<String, Double> overrides) throws InputException {
+        if (overrides.isEmpty()) {
+            return doc;
+        }
+        CaseModel model = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+        for (Map.Entry<String, Double> e : overrides.entrySet()) {
+            String at = "set." + e.getKey();
+            ParameterRef ref = parse(e.getKey(), at);
+            try {
+                model.value(ref, at);
+                model = model.with(ref, e.getValue());
+            } catch (InputException problem) {
+                throw InputException.at(at, problem.problem());
+            }
+        }
+        return new CaseDocument(doc.file(), model.stack(), model.geometry(), model.measurement(), doc.root(),
+                doc.lines());
+    }
+
+    static ParameterRef parse(String path, String at) throws InputException {
+        if (path.startsWith("datasets[")) {
+            throw InputException.at(at, "a dataset's own block is not overridden by a batch; give the case its own"
+                    + " file, or override the case's geometry or measurement");
+        }
+        int dot = path.lastIndexOf('.');
+        if (dot <= 0 || dot == path.length() - 1) {
+            throw InputException.at(at, "expected a parameter path: LAYER.PROPERTY, geometry.KEY or measurement.KEY");
+        }
+        String head = path.substring(0, dot);
+        String key = path.substring(dot + 1);
+        if (head.equals("geometry")) {
+            return ParameterRef.geometry(key);
+        }
+        if (head.equals("measurement")) {
+            return ParameterRef.measurement(key);
+        }
+        if (!CaseModel.LAYER_KEYS.contains(key)) {
+            String hint = Names.closest(key, CaseModel.LAYER_KEYS).map(k -> " (did you mean '" + k + "'?)").orElse("");
+            throw InputException.at(at, "unknown layer property '" + key + "'" + hint + "; expected one of: "
+                    + String.join(", ", CaseModel.LAYER_KEYS));
+        }
+        return ParameterRef.layer(head, key);
+    }
+}
