@@ -300,16 +300,26 @@ class CaseFileReaderTest {
             String json = "{\n  \"description\": \"x\"\n  \"stack\": {}\n}\n";
             InputException e = fail(json);
             assertEquals(3, e.line(), e.getMessage());
-            assertNull(e.path());
-            assertTrue(e.getMessage().contains("not valid JSON"), e.getMessage());
-            assertTrue(e.getMessage().contains(":3: "), e.getMessage());
+            assertEquals("description", e.path());
+            assertTrue(e.getMessage().contains("expected ',' or '}' after the value of 'description'"),
+                    e.getMessage());
+            assertTrue(e.getMessage().contains(":3: description: "), e.getMessage());
         }
 
         @Test
         void unclosedObjectAndListAtTheEnd() throws Exception {
-            assertTrue(fail("{\n\"stack\": {\"layers\": [1, 2\n").getMessage().contains("not valid JSON"));
-            assertTrue(fail("{\n\"stack\": {\n").getMessage().contains("not valid JSON"));
-            assertTrue(fail("{\"a\": ").getMessage().contains("not valid JSON"));
+            InputException list = fail("{\n\"stack\": {\"layers\": [1, 2\n");
+            assertEquals("stack.layers", list.path());
+            assertTrue(list.getMessage().contains("cut short: the list stack.layers (opened at line 2) is not closed"),
+                    list.getMessage());
+            InputException object = fail("{\n\"stack\": {\n");
+            assertEquals("stack", object.path());
+            assertTrue(object.getMessage().contains("cut short: the object stack (opened at line 2)"),
+                    object.getMessage());
+            InputException value = fail("{\"a\": ");
+            assertEquals("a", value.path());
+            assertTrue(value.getMessage().contains("cut short: it ends where a value was expected"),
+                    value.getMessage());
         }
 
         @Test
@@ -355,8 +365,10 @@ class CaseFileReaderTest {
         void duplicateTopLevelKey() throws Exception {
             String json = withLayers(SUBSTRATE).replace("\"stack\": {", "\"stack\": {\"layers\": []},\n  \"stack\": {");
             InputException e = fail(json);
-            assertTrue(e.getMessage().contains("Duplicate field 'stack'"), e.getMessage());
+            assertTrue(e.getMessage().contains("the key 'stack' appears twice in the same object (first at line 2)"),
+                    e.getMessage());
             assertEquals(3, e.line(), e.getMessage());
+            assertEquals("stack", e.path());
         }
 
         @Test
@@ -406,7 +418,7 @@ class CaseFileReaderTest {
         void overflowingInteger() throws Exception {
             String big = "1" + "0".repeat(400);
             String json = withLayers(SUBSTRATE.replace("140", big));
-            assertAt(fail(json), "stack.layers[0].k_through_w_mk", lineOf(json, big), "outside the range");
+            assertAt(fail(json), "stack.layers[0].k_through_w_mk", lineOf(json, big), "a number of 401 characters");
         }
 
         @ParameterizedTest

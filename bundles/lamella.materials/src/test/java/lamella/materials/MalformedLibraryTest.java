@@ -68,18 +68,19 @@ class MalformedLibraryTest {
     @Test
     void badJsonNamesItsLineAndTheOtherFilesStillLoad() throws Exception {
         String text = "{\n  \"materials\": [\n    {\"id\": \"x\",\n     \"name\" \"missing colon\"}\n  ]\n}\n";
-        assertFinding(onlyError(text), 4, "", "not valid JSON");
+        assertFinding(onlyError(text), 4, "materials[0].name", "expected ':' after the key 'name'");
     }
 
     @Test
     void aTruncatedFileIsNotValidJson() throws Exception {
-        assertTrue(onlyError("{\n  \"materials\": [\n").message().contains("not valid JSON"));
+        assertFinding(onlyError("{\n  \"materials\": [\n"), 3, "materials",
+                "cut short: the list materials (opened at line 2) is not closed");
     }
 
     @Test
     void duplicateKeysAndNullsAreErrors() throws Exception {
         String dup = entries(entry("d", 1.0).replace("\"version\": 1", "\"version\": 1, \"version\": 2"));
-        assertTrue(onlyError(dup).message().contains("not valid JSON"), "duplicate key");
+        assertFinding(onlyError(dup), 3, "materials[0].version", "the key 'version' appears twice");
         Files.delete(lib.resolve("b-bad.json"));
         String nul = entries(entry("n", 1.0).replace("\"version\": 1", "\"version\": null"));
         assertFinding(onlyError(nul), 3, "materials[0].version", "null");

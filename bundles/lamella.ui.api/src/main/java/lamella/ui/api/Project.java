@@ -100,7 +100,7 @@ public final class Project {
         }
         JsonNode tree;
         try {
-            tree = JSON.readTree(Files.readString(abs, StandardCharsets.UTF_8));
+            tree = JsonFiles.read(abs);
         } catch (IOException e) {
             if (invalid != null) {
                 throw invalid;
@@ -127,7 +127,7 @@ public final class Project {
     }
 
     private static ObjectNode object(String json) throws IOException {
-        JsonNode tree = JSON.readTree(json);
+        JsonNode tree = JsonFiles.parse(json);
         if (!(tree instanceof ObjectNode o)) {
             throw new IOException("a case document is a JSON object");
         }

@@ -6,9 +6,8 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
+import lamella.ui.api.JsonFiles;
 
 /**
  * Arrangements as JSON: {@code {"lamella_arrangement": 1, "window": {…}, "closed": […], "enlarged": id,
@@ -49,7 +48,7 @@ final class ArrangementFile {
 
     /** Reads an arrangement; a file that is not one is an IOException saying what is wrong. */
     static Arrangement read(Path file) throws IOException {
-        JsonNode root = JSON.readTree(Files.readString(file, StandardCharsets.UTF_8));
+        JsonNode root = JsonFiles.read(file);
         if (root == null || root.path(VERSION_KEY).asInt() != VERSION) {
             throw new IOException(file + ": not a Lamella arrangement (expected \"" + VERSION_KEY + "\": " + VERSION
                     + ")");

@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.function.Consumer;
 import lamella.api.InputException;
 import lamella.ui.api.CaseReader;
+import lamella.ui.api.JsonFiles;
 import lamella.ui.api.Project;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.FileDialog;
@@ -98,7 +99,7 @@ final class ProjectSession {
         String about = "an earlier session";
         Path of = null;
         try {
-            ObjectNode info = (ObjectNode) JSON.readTree(Files.readString(recoveryInfo(), StandardCharsets.UTF_8));
+            ObjectNode info = (ObjectNode) JsonFiles.read(recoveryInfo());
             about = info.path("project").asText("an untitled project") + " (copy of " + info.path("written")
                     .asText("unknown time") + ")";
             of = info.hasNonNull("project") ? Path.of(info.get("project").asText()) : null;

@@ -4,11 +4,11 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import lamella.ui.api.JsonFiles;
 
 /** The projects opened lately, newest first, kept as {@code {"recent": [path, …]}}. */
 final class RecentProjects {
@@ -31,7 +31,7 @@ final class RecentProjects {
             return;
         }
         try {
-            JsonNode root = JSON.readTree(Files.readString(file, StandardCharsets.UTF_8));
+            JsonNode root = JsonFiles.read(file);
             root.path("recent").forEach(p -> paths.add(Path.of(p.asText())));
         } catch (IOException | RuntimeException e) {
             messages.warning("The list of recent projects " + file + " is unreadable and starts afresh: "
