@@ -9,7 +9,8 @@ import lamella.api.material.TemperatureCurve;
 
 /**
  * One entry as a library file of its own, in the format {@code materials check} accepts, so that a user can copy a
- * shipped or facility entry into a folder of their own and revise it (raising its version).
+ * shipped or facility entry into a folder of their own and revise it (raising its version). The copy says that it
+ * replaces the entry it was exported from, since in a higher tier it shares that entry's names.
  */
 final class EntryExport {
 
@@ -24,6 +25,7 @@ final class EntryExport {
             fields.add(field("aliases", "[" + String.join(", ", m.aliases().stream().map(EntryExport::quote).toList())
                     + "]"));
         }
+        fields.add(field("replaces", "[" + quote(m.id()) + "]"));
         fields.add(field("version", Integer.toString(m.curation().version())));
         m.curation().reviewedBy().ifPresent(by -> fields.add(field("reviewed_by", quote(by))));
         m.curation().reviewedOn().ifPresent(on -> fields.add(field("reviewed_on", quote(on.toString()))));

@@ -29,8 +29,8 @@ import lamella.api.material.TemperatureCurve;
  */
 final class EntryReader {
 
-    static final Set<String> ENTRY_KEYS = Set.of("id", "name", "aliases", "version", "reviewed_by", "reviewed_on",
-            "source", "notes", "properties");
+    static final Set<String> ENTRY_KEYS = Set.of("id", "name", "aliases", "replaces", "version", "reviewed_by",
+            "reviewed_on", "source", "notes", "properties");
     static final Set<String> PROPERTY_KEYS = Set.of("value", "at_k", "range_k", "table", "uncertainty_rel", "source",
             "notes");
     /** Ids are what case files type: lower case, digits and a few joiners, no spaces. */
@@ -56,7 +56,8 @@ final class EntryReader {
                     + " starting with a letter or digit");
         }
         String name = text(e, "name", true);
-        List<String> aliases = aliases(e);
+        List<String> aliases = names(e, "aliases", "alias");
+        List<String> replaces = names(e, "replaces", "replaced name");
         Curation curation = curation(e);
         String defaultSource = e.has("source") ? text(e, "source", true) : null;
         String notes = e.has("notes") ? text(e, "notes", false) : "";
@@ -80,24 +81,26 @@ final class EntryReader {
             properties.put(q, property(props, key, q, defaultSource));
         }
         consistentForms(props, new EnumMap<>(properties));
-        return new Material(id, name, aliases, properties, curation, notes, library, file + ":" + json.lineOf(e.path()));
+        return new Material(id, name, aliases, replaces, properties, curation, notes, library,
+                file + ":" + json.lineOf(e.path()));
     }
 
-    private List<String> aliases(Block e) throws FindingException {
-        if (!e.has("aliases")) {
+    /** A list of names under {@code key} (aliases, or the lower tiers' entries an entry replaces). */
+    private List<String> names(Block e, String key, String what) throws FindingException {
+        if (!e.has(key)) {
             return List.of();
         }
-        if (!(e.get("aliases") instanceof List<?> list)) {
-            throw error(e.pathOf("aliases"), "expected a list of names, got " + Block.describe(e.get("aliases")));
+        if (!(e.get(key) instanceof List<?> list)) {
+            throw error(e.pathOf(key), "expected a list of names, got " + Block.describe(e.get(key)));
         }
         List<String> out = new ArrayList<>();
         for (int i = 0; i < list.size(); i++) {
-            String at = e.pathOf("aliases") + "[" + i + "]";
+            String at = e.pathOf(key) + "[" + i + "]";
             if (!(list.get(i) instanceof String s) || s.isBlank()) {
                 throw error(at, "expected a non-blank name, got " + Block.describe(list.get(i)));
             }
-            if (out.stream().anyMatch(a -> a.equalsIgnoreCase(s))) {
-                throw error(at, "the alias '" + s + "' is listed twice");
+            if (out.stream().anyMatch(a -> a.equalsIgnoreCase(s.trim()))) {
+                throw error(at, "the " + what + " '" + s + "' is listed twice");
             }
             out.add(s.trim());
         }

@@ -21,7 +21,8 @@ import org.osgi.util.tracker.BundleTracker;
 
 /**
  * Finds library bundles: a bundle whose manifest has {@value #HEADER} (the folder holding its library, such as
- * {@code materials/}) gets a {@link MaterialLibrary} service of the shipped tier while it is active. A library is data
+ * {@code materials/}) gets a {@link MaterialLibrary} service while it is active — of the shipped tier for Lamella's own
+ * library bundle ({@value #SHIPPED_BUNDLE}), of the data-bundle tier for any other. A library is data
  * only; no code is needed per library. Immediate, so that libraries are live before the first command runs; each is
  * read when first asked for, so that a command naming no material never reads one.
  */
@@ -30,6 +31,7 @@ public final class LibraryExtender {
 
     static final String HEADER = "Lamella-Material-Library";
     static final String LIBRARY_TIER = "lamella.material.library.tier";
+    static final String SHIPPED_BUNDLE = "lamella.materials.shipped";
 
     private BundleTracker<ServiceRegistration<MaterialLibrary>> tracker;
 
@@ -42,7 +44,8 @@ public final class LibraryExtender {
                 if (folder == null) {
                     return null;
                 }
-                return register(context, LibraryTier.SHIPPED, () -> read(bundle, folder.trim()));
+                LibraryTier tier = tierOf(bundle.getSymbolicName());
+                return register(context, tier, () -> read(bundle, folder.trim(), tier));
             }
 
             @Override
@@ -66,7 +69,12 @@ public final class LibraryExtender {
         return context.registerService(MaterialLibrary.class, new DeferredLibrary(reader), properties);
     }
 
-    static ReadLibrary read(Bundle bundle, String folder) {
+    /** Lamella's own library bundle is the shipped tier; a lab's data bundle ranks above it. */
+    static LibraryTier tierOf(String symbolicName) {
+        return SHIPPED_BUNDLE.equals(symbolicName) ? LibraryTier.SHIPPED : LibraryTier.BUNDLE;
+    }
+
+    static ReadLibrary read(Bundle bundle, String folder, LibraryTier tier) {
         String dir = folder.endsWith("/") ? folder : folder + "/";
         String origin = bundle.getSymbolicName() + " " + bundle.getVersion();
         List<SourceFile> files = new ArrayList<>();
@@ -76,6 +84,6 @@ public final class LibraryExtender {
             String name = path.substring(path.lastIndexOf('/') + 1);
             files.add(new SourceFile(bundle.getSymbolicName() + "!/" + dir + name, name, url::openStream));
         }
-        return LibraryReader.read(LibraryTier.SHIPPED, "bundle " + origin + ", " + dir, files);
+        return LibraryReader.read(tier, "bundle " + origin + ", " + dir, files);
     }
 }

@@ -49,15 +49,17 @@ public final class MaterialsCommand implements Command {
         return """
                 usage: lamella materials list
                        lamella materials show NAME
-                       lamella materials check FOLDER [--tier facility|user]
+                       lamella materials check FOLDER [--tier bundle|facility|user]
                        lamella materials export NAME [--out FILE.json]
 
-                list    every entry in effect (user over facility over shipped), the entries replaced by a higher
-                        tier, the live libraries and every problem found in them
+                list    every entry in effect (user over facility over data bundles over shipped), the entries
+                        a higher tier replaces, the live libraries and every problem found in them
                 show    one entry (by id or alias) with every property, its table, uncertainty, source and curation
                 check   reads a library folder as it would be published (as a facility library unless --tier says
                         otherwise) and reports every problem with file, line and JSON path, and the problems it
-                        would cause among the live libraries; exit status 2 if there is an error
+                        would cause among the live libraries (a name of a lower tier's entry used without
+                        "replaces" naming that entry, a "replaces" that names none); exit status 2 if there is
+                        an error
                 export  one entry as a library file, to standard output or written atomically to --out, ready to
                         copy into a folder of your own and revise
 
@@ -111,12 +113,12 @@ public final class MaterialsCommand implements Command {
             String a = args.get(i);
             if (a.equals("--tier")) {
                 if (i + 1 >= args.size()) {
-                    return usageError(io, "--tier needs facility or user");
+                    return usageError(io, "--tier needs bundle, facility or user");
                 }
                 String t = args.get(++i);
                 tier = Arrays.stream(LibraryTier.values()).filter(x -> x.label().equals(t)).findFirst().orElse(null);
                 if (tier == null) {
-                    return usageError(io, "--tier: unknown tier '" + t + "'; expected facility or user");
+                    return usageError(io, "--tier: unknown tier '" + t + "'; expected bundle, facility or user");
                 }
             } else if (a.startsWith("-")) {
                 return usageError(io, "check: unknown option " + a);

@@ -34,6 +34,24 @@ final class Folders {
         return "{\n  \"materials\": [\n    " + String.join(",\n    ", entries) + "\n  ]\n}\n";
     }
 
+    /** {@code entry} with {@code "replaces": [names]}. */
+    static String replacing(String entry, String... names) {
+        return withList(entry, "replaces", names);
+    }
+
+    /** {@code entry} with {@code "aliases": [names]}. */
+    static String aliased(String entry, String... names) {
+        return withList(entry, "aliases", names);
+    }
+
+    private static String withList(String entry, String key, String... names) {
+        StringBuilder list = new StringBuilder();
+        for (String n : names) {
+            list.append(list.length() == 0 ? "" : ", ").append('"').append(n).append('"');
+        }
+        return entry.replaceFirst("\"version\"", "\"" + key + "\": [" + list + "], \"version\"");
+    }
+
     /** A valid isotropic entry (values invented for tests of the format, not of any material). */
     static String entry(String id, double k) {
         return "{\"id\": \"" + id + "\", \"name\": \"test " + id + "\", \"version\": 1, \"source\": \"test value,"

@@ -92,4 +92,28 @@ class LibraryCasesTest {
         assertEquals("stack.layers[1].material", e.path());
         assertTrue(e.getMessage().contains("no material 'fh-sio2'"), e.getMessage());
     }
+
+    @Test
+    void aCaseNamingAMaterialThatAFacilityEntryTakesWithoutSayingSoStopsNamingBothEntries() throws Exception {
+        Path lib = Folders.library(dir.resolve("glue"), "glue", "Glue library");
+        Path file = Folders.file(lib, "a.json", Folders.entries(Folders.aliased(Folders.entry("thermal-glue", 1.15),
+                "si")));
+        CaseFileReader reader = new CaseFileReader();
+        reader.addLibrary(LibraryFolder.read(Folders.SHIPPED, LibraryTier.SHIPPED));
+        reader.addLibrary(LibraryFolder.read(lib, LibraryTier.FACILITY));
+        Path c = Files.writeString(dir.resolve("si.json"), "{\"stack\": {\"layers\": [{\"name\": \"substrate\","
+                + " \"material\": \"si\"}]}, \"geometry\": {\"type\": \"gaussian\"},"
+                + " \"measurement\": {\"type\": \"sstr\"}}");
+        InputException e = assertThrows(InputException.class, () -> reader.read(c));
+        assertEquals("stack.layers[0].material", e.path());
+        for (String s : List.of("material 'si' is ambiguous", "library Glue library (facility), entry thermal-glue v1, "
+                + file + ":3", "library Lamella shipped materials (shipped), entry silicon v1, "
+                + Folders.SHIPPED.resolve("semiconductors.json") + ":3")) {
+            assertTrue(e.getMessage().contains(s), "expected '" + s + "' in: " + e.getMessage());
+        }
+        Path named = Files.writeString(dir.resolve("silicon.json"), Files.readString(c).replace("\"si\"",
+                "\"silicon\""));
+        assertEquals(148.0, reader.read(named).stack().layers().get(0).kThrough(),
+                "the shipped entry's other name still means it (Incropera et al., Table A.1, 300 K)");
+    }
 }

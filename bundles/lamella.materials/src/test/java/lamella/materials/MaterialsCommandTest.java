@@ -1,7 +1,9 @@
 package lamella.materials;
 
+import static lamella.materials.Folders.aliased;
 import static lamella.materials.Folders.entries;
 import static lamella.materials.Folders.entry;
+import static lamella.materials.Folders.replacing;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -112,9 +114,46 @@ class MaterialsCommandTest {
         Folders.file(lib, "a.json", entries(entry("fh-pecvd-oxide", 1.0)));
         Run r = run("check", "second");
         assertEquals(Command.BAD_INPUT, r.status(), r.out());
-        assertTrue(r.out().contains("the name 'fh-pecvd-oxide' is claimed by"), r.out());
+        assertTrue(r.out().contains("the name 'fh-pecvd-oxide': ") && r.out().contains("all claim it in the facility"
+                + " tier"), r.out());
         Run asUser = run("check", "second", "--tier", "user");
-        assertEquals(Command.OK, asUser.status(), "as a user library it simply takes precedence: " + asUser.out());
+        assertEquals(Command.BAD_INPUT, asUser.status(), "a user entry of the same name must say it replaces: "
+                + asUser.out());
+        assertTrue(asUser.out().contains("does not say that it replaces it"), asUser.out());
+        Folders.file(lib, "a.json", entries(replacing(entry("fh-pecvd-oxide", 1.0), "fh-pecvd-oxide")));
+        Run declared = run("check", "second", "--tier", "user");
+        assertEquals(Command.OK, declared.status(), declared.out());
+        assertTrue(declared.out().contains("fh-pecvd-oxide replaces library Fenwick Hall thermal lab films (facility),"
+                + " entry fh-pecvd-oxide v1"), declared.out());
+    }
+
+    @Test
+    void checkRefusesAnEntryThatTakesAShippedAliasWithoutSayingSo() throws Exception {
+        Path lib = Folders.library(dir.resolve("glue"), "glue", "Glue library");
+        Path file = Folders.file(lib, "a.json", entries(aliased(entry("thermal-glue", 1.15), "si")));
+        Run r = run("check", "glue");
+        assertEquals(Command.BAD_INPUT, r.status(), r.out());
+        for (String s : List.of("error: the name 'si': ", "library Glue library (facility), entry thermal-glue v1, "
+                + file + ":3", "library Lamella shipped materials (shipped), entry silicon v1, "
+                + Folders.SHIPPED.resolve("semiconductors.json") + ":", "\"replaces\": [\"silicon\"]",
+                "1 entries read, 1 error, 0 warnings")) {
+            assertTrue(r.out().contains(s), "expected '" + s + "' in:\n" + r.out());
+        }
+        Folders.file(lib, "a.json", entries(replacing(aliased(entry("thermal-glue", 1.15), "si"), "si")));
+        Run declared = run("check", "glue");
+        assertEquals(Command.OK, declared.status(), declared.out());
+        assertTrue(declared.out().contains("thermal-glue replaces library Lamella shipped materials (shipped), entry"
+                + " silicon v1"), declared.out());
+    }
+
+    @Test
+    void checkRefusesAReplacesThatNamesNoLowerEntry() throws Exception {
+        Path lib = Folders.library(dir.resolve("typo"), "typo", "Typo library");
+        Folders.file(lib, "a.json", entries(replacing(entry("si-film", 100), "silcon")));
+        Run r = run("check", "typo");
+        assertEquals(Command.BAD_INPUT, r.status(), r.out());
+        assertTrue(r.out().contains("entry si-film v1 says it replaces 'silcon', but no entry of a lower tier than"
+                + " facility has that name"), r.out());
     }
 
     @Test
@@ -130,6 +169,7 @@ class MaterialsCommandTest {
         Material copy = back.materials().get(0);
         assertEquals(original.id(), copy.id());
         assertEquals(original.aliases(), copy.aliases());
+        assertEquals(List.of(original.id()), copy.replaces(), "the copy takes the place of what it copies");
         assertEquals(original.curation(), copy.curation());
         assertEquals(original.properties().keySet(), copy.properties().keySet());
         original.properties().forEach((q, p) -> {

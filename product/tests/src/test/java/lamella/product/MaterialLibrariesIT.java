@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -64,6 +65,36 @@ class MaterialLibrariesIT {
         assertTrue(simulate.out().startsWith("delay_s,in_phase,out_of_phase,ratio,phase_deg\n"), simulate.out());
         assertTrue(simulate.err().matches("(?s).*transducer +k_through_w_mk +170 .*library Fenwick Hall thermal lab"
                 + " films \\(facility\\), entry aluminium v3.*"), simulate.err());
+    }
+
+    @Test
+    void aFacilityEntryThatTakesAShippedAliasWithoutSayingSoStopsTheCaseNamingBothEntries() throws Exception {
+        Path facility = userDir.resolve("glue-library");
+        Files.createDirectories(facility);
+        Files.writeString(facility.resolve("library.json"), "{\"library_format\": 1, \"id\": \"glue\","
+                + " \"name\": \"Glue library (invented)\"}\n");
+        Files.writeString(facility.resolve("glue.json"), "{\"materials\": [\n  {\"id\": \"thermal-glue\","
+                + " \"name\": \"glue\", \"aliases\": [\"si\"], \"version\": 1, \"source\": \"invented\",\n"
+                + "   \"properties\": {\"k_w_mk\": {\"value\": 1.15, \"at_k\": 300, \"uncertainty_rel\": 0.1},\n"
+                + "   \"heat_capacity_j_m3k\": {\"value\": 2e6, \"at_k\": 300, \"uncertainty_rel\": 0.1}}}\n]}\n");
+        Path c = Files.writeString(userDir.resolve("on-si.json"), "{\"stack\": {\"layers\": [{\"name\":"
+                + " \"substrate\", \"material\": \"si\"}]}, \"geometry\": {\"type\": \"gaussian\","
+                + " \"pump_radius_m\": 5e-6, \"probe_radius_m\": 5e-6}, \"measurement\": {\"type\": \"sstr\"}}");
+        List<String> options = List.of("-Dlamella.materials.facility=" + facility);
+        String glue = "library Glue library (invented) (facility), entry thermal-glue v1, " + facility.resolve("glue.json")
+                + ":2";
+        String silicon = "library Lamella shipped materials (shipped), entry silicon v1,"
+                + " lamella.materials.shipped!/materials/semiconductors.json:3";
+
+        Run check = launch(options, "materials", "check", facility.toString());
+        assertEquals(2, check.status(), check.out() + check.err());
+        assertTrue(check.out().contains(glue) && check.out().contains(silicon), check.out());
+
+        Run simulate = launch(options, "simulate", c.toString());
+        assertEquals(2, simulate.status(), simulate.out() + simulate.err());
+        assertEquals("", simulate.out());
+        assertTrue(simulate.err().contains("stack.layers[0].material: material 'si' is ambiguous"), simulate.err());
+        assertTrue(simulate.err().contains(glue) && simulate.err().contains(silicon), simulate.err());
     }
 
     @Test

@@ -11,17 +11,20 @@ import lamella.api.InputException;
 /**
  * One library entry: a material's stated properties with their sources, and the curation that vouches for them.
  *
- * @param id         identifier, unique within its library; a higher tier's entry of the same id replaces it whole
+ * @param id         identifier, unique within its library
  * @param name       display name
  * @param aliases    other names a case file may use
+ * @param replaces   the names (ids or aliases) of lower tiers' entries that this entry takes the place of, whole; a
+ *                   name of this entry that a lower tier also uses is refused unless this list covers that entry
  * @param properties the stated properties in file order
  * @param curation   revision and review
  * @param notes      the curator's remarks on the entry, empty if none
  * @param library    the library it belongs to
  * @param location   the file and line it was read from
  */
-public record Material(String id, String name, List<String> aliases, Map<MaterialQuantity, MaterialProperty> properties,
-                       Curation curation, String notes, LibraryInfo library, String location) {
+public record Material(String id, String name, List<String> aliases, List<String> replaces,
+                       Map<MaterialQuantity, MaterialProperty> properties, Curation curation, String notes,
+                       LibraryInfo library, String location) {
 
     /** How an entry states its conductivity, which decides what a layer must say about orientation. */
     public enum ConductivityForm {
@@ -37,8 +40,15 @@ public record Material(String id, String name, List<String> aliases, Map<Materia
 
     public Material {
         aliases = List.copyOf(aliases);
+        replaces = List.copyOf(replaces);
         properties = Collections.unmodifiableMap(new LinkedHashMap<>(properties));
         notes = notes == null ? "" : notes;
+    }
+
+    /** An entry that replaces nothing. */
+    public Material(String id, String name, List<String> aliases, Map<MaterialQuantity, MaterialProperty> properties,
+                    Curation curation, String notes, LibraryInfo library, String location) {
+        this(id, name, aliases, List.of(), properties, curation, notes, library, location);
     }
 
     public Optional<MaterialProperty> property(MaterialQuantity q) {
@@ -64,7 +74,15 @@ public record Material(String id, String name, List<String> aliases, Map<Materia
         return "library " + library.label() + ", entry " + id + " v" + curation.version();
     }
 
-    /** Every name a case file may use for this entry: its id and its aliases. */
+    /**
+     * "library Fenwick Hall films (facility), entry al-film v2, films.json:14": the label with the file and line it
+     * was read from, as messages about two entries name each.
+     */
+    public String placedLabel() {
+        return label() + ", " + location;
+    }
+
+    /** Every name the entry itself gives: its id and its aliases (a replaced entry's names come on top). */
     public List<String> names() {
         List<String> all = new java.util.ArrayList<>();
         all.add(id);
