@@ -2,7 +2,6 @@ package lamella.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
@@ -102,7 +101,7 @@ final class CsvTables {
 
     /** 13 significant digits, as the simulate command writes; NaN and ±Infinity spelt as Java and Python read them. */
     static String number(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.12e", v) : Double.toString(v);
+        return lamella.api.AtomicText.number(v);
     }
 
     /** Rows of cells; a cell holding a comma, quote or line break is quoted (RFC 4180). */

@@ -36,9 +36,9 @@ final class DataCsv {
         StringBuilder sb = new StringBuilder(64 * (t.rows() + 1) * header.size() / 4);
         sb.append(String.join(",", header)).append('\n');
         for (int r = 0; r < t.rows(); r++) {
-            sb.append(number(t.x()[r]));
+            AtomicText.appendNumber(sb, t.x()[r]);
             for (double[] c : columns) {
-                sb.append(',').append(number(c[r]));
+                AtomicText.appendNumber(sb.append(','), c[r]);
             }
             sb.append(',').append(t.outlier()[r] ? '1' : '0').append(',').append(t.excluded()[r] ? '1' : '0')
                     .append('\n');
@@ -46,8 +46,5 @@ final class DataCsv {
         return sb.toString();
     }
 
-    static String number(double v) {
-        return AtomicText.number(v);
-    }
 
 }

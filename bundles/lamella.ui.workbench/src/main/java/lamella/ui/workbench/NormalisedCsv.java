@@ -1,8 +1,9 @@
 package lamella.ui.workbench;
 
+
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
+import lamella.api.AtomicText;
 import lamella.api.data.SignalNames;
 import lamella.conditioning.ConditionedTable;
 
@@ -30,17 +31,13 @@ final class NormalisedCsv {
         header.add("excluded");
         StringBuilder sb = new StringBuilder(String.join(",", header)).append('\n');
         for (int r = 0; r < t.rows(); r++) {
-            sb.append(number(t.x()[r]));
+            AtomicText.appendNumber(sb, t.x()[r]);
             for (double[] c : columns) {
-                sb.append(',').append(number(c[r]));
+                AtomicText.appendNumber(sb.append(','), c[r]);
             }
             sb.append(',').append(t.outlier()[r] ? '1' : '0').append(',').append(t.excluded()[r] ? '1' : '0')
                     .append('\n');
         }
         return sb.toString();
-    }
-
-    private static String number(double v) {
-        return String.format(Locale.ROOT, "%.12e", v);
     }
 }
