@@ -11,6 +11,25 @@ public record Simulation(Technique technique, TechniqueModel measurement, Geomet
         return run(measurement.xValues());
     }
 
+    /**
+     * The steady temperature rise per watt of absorbed power, K/W: the geometry's response at 0 Hz, as SSTR measures
+     * it. The one estimate of pump heating that the workbench's set-up and experiment plans show; NaN where the
+     * geometry's response is not per watt (a line heater's is per unit length).
+     *
+     * @throws ModelEvaluationException when the stack has no steady state at 0 Hz
+     */
+    public double steadyRisePerWatt() {
+        if (technique.requiredUnit() != ResponseUnit.KELVIN_PER_WATT) {
+            return Double.NaN;
+        }
+        double[] h = new double[2];
+        geometry.at(0, h);
+        if (!Double.isFinite(h[0])) {
+            throw new ModelEvaluationException("the steady response at 0 Hz is not finite for this stack");
+        }
+        return h[0];
+    }
+
     /** The signals at given x values (for example those of a data file). */
     public SignalTable run(double[] x) {
         double[][] v = measurement.evaluate(x, geometry);

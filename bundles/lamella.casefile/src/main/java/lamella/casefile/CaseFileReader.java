@@ -44,7 +44,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
      * it, so any object is accepted there.
      */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
-            LayerReading.TEMPERATURE, "fit", WORKBENCH);
+            LayerReading.TEMPERATURE, "fit", "plan", WORKBENCH);
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";

@@ -31,6 +31,18 @@ final class FitBlockReader {
     }
 
     static FitSpec read(CaseDocument doc) throws InputException {
+        return read(doc, false);
+    }
+
+    /**
+     * The fit block as a plan reads it: no data are needed, so {@code datasets} and their {@code data} are optional;
+     * without datasets the case's own geometry and measurement make the one measurement planned.
+     */
+    static FitSpec readForPlan(CaseDocument doc) throws InputException {
+        return read(doc, true);
+    }
+
+    private static FitSpec read(CaseDocument doc, boolean planning) throws InputException {
         Object raw = doc.root().get("fit");
         if (raw == null) {
             throw InputException.at("fit", "the case has no fit block; add \"fit\": {\"datasets\": […], \"free\": […]}");
@@ -40,7 +52,9 @@ final class FitBlockReader {
         }
         only(fit, FIT_KEYS, "the fit block");
         CaseModel base = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
-        List<DatasetSpec> datasets = datasets(fit, doc.file());
+        List<DatasetSpec> datasets = planning && !fit.has("datasets") ? List.of(new DatasetSpec(0,
+                "the case's measurement", null, null, null, null, RowSelection.ALL, null, "measurement"))
+                : datasets(fit, doc.file(), planning);
         List<FreeInput> free = new ArrayList<>();
         Set<ParameterRef> seen = new HashSet<>();
         for (Block e : objects(fit, "free", true)) {
@@ -59,7 +73,8 @@ final class FitBlockReader {
                 throw InputException.at(e.path(), ref + " is already free or uncertain; an input is one or the other");
             }
             double v = value(base, datasets, ref, e.path());
-            uncertain.add(new UncertainInput(ref, v, sigma(e, v), e.path()));
+            uncertain.add(new UncertainInput(ref, v, sigma(e, v),
+                    e.has("sigma_relative") ? finite(e, "sigma_relative") : Double.NaN, e.path()));
         }
         checkDirectionsNamedOnce(free, uncertain);
         FitSpec.Weighting weighting = fit.has("weights") ? weighting(fit) : FitSpec.Weighting.AUTO;
@@ -67,14 +82,15 @@ final class FitBlockReader {
                 fit.has("seed") ? (long) count(fit, "seed") : 1L);
     }
 
-    private static List<DatasetSpec> datasets(Block fit, Path caseFile) throws InputException {
+    private static List<DatasetSpec> datasets(Block fit, Path caseFile, boolean planning) throws InputException {
         List<DatasetSpec> out = new ArrayList<>();
         Path folder = caseFile.toAbsolutePath().getParent();
         for (Block d : objects(fit, "datasets", true)) {
             only(d, DATASET_KEYS, "a dataset");
-            String data = d.requireString("data");
+            String data = planning && !d.has("data") ? null : d.requireString("data");
             String signal = d.has("signal") ? d.requireString("signal") : null;
-            out.add(new DatasetSpec(out.size(), data, folder.resolve(data).normalize(), signal,
+            out.add(new DatasetSpec(out.size(), data != null ? data : d.path(),
+                    data != null ? folder.resolve(data).normalize() : null, signal,
                     optionalObject(d, "geometry"), optionalObject(d, "measurement"), rows(d),
                     d.has("weights") ? weighting(d) : null, d.path()));
         }
@@ -123,7 +139,7 @@ final class FitBlockReader {
         return new double[] {a, b};
     }
 
-    private static ParameterRef ref(Block e, List<DatasetSpec> datasets) throws InputException {
+    static ParameterRef ref(Block e, List<DatasetSpec> datasets) throws InputException {
         int kinds = (e.has("layer") ? 1 : 0) + (e.has("geometry") ? 1 : 0) + (e.has("measurement") ? 1 : 0);
         if (kinds != 1) {
             throw InputException.at(e.path(), "name exactly one of \"layer\" (with \"property\"), \"geometry\" or"
@@ -282,7 +298,7 @@ final class FitBlockReader {
         return s;
     }
 
-    private static List<Block> objects(Block parent, String key, boolean required) throws InputException {
+    static List<Block> objects(Block parent, String key, boolean required) throws InputException {
         Object v = parent.get(key);
         if (v == null) {
             if (required) {
@@ -316,7 +332,7 @@ final class FitBlockReader {
         return b;
     }
 
-    private static double finite(Block b, String key) throws InputException {
+    static double finite(Block b, String key) throws InputException {
         Object v = b.get(key);
         if (!(v instanceof Double d)) {
             throw InputException.at(b.pathOf(key), "expected a number, got " + Block.describe(v));
@@ -324,7 +340,7 @@ final class FitBlockReader {
         return d;
     }
 
-    private static int count(Block b, String key) throws InputException {
+    static int count(Block b, String key) throws InputException {
         if (!b.has(key)) {
             return 0;
         }
@@ -339,7 +355,7 @@ final class FitBlockReader {
         return Double.isFinite(v) ? v : 0.0;
     }
 
-    private static void only(Block b, Set<String> known, String what) throws InputException {
+    static void only(Block b, Set<String> known, String what) throws InputException {
         for (String key : b.values().keySet()) {
             if (!known.contains(key)) {
                 String hint = Names.closest(key, known).map(k -> " (did you mean '" + k + "'?)").orElse("");
@@ -349,7 +365,7 @@ final class FitBlockReader {
         }
     }
 
-    private static Set<String> union(Set<String> a, Set<String> b) {
+    static Set<String> union(Set<String> a, Set<String> b) {
         Set<String> s = new HashSet<>(a);
         s.addAll(b);
         return Set.copyOf(s);

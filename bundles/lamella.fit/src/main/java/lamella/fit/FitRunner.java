@@ -65,44 +65,28 @@ final class FitRunner {
         }
         double[] u = best.u();
         double[][] j = solver.centralJacobian(u, unc, sigma);
-        Covariance cov = Covariance.of(j);
+        double[][] ju = problem.uncertain.isEmpty() ? new double[j.length][0]
+                : solver.uncertainJacobian(u, unc, sigma);
+        Linearised lin = Linearised.of(j, ju, problem.free, problem.uncertain, u);
+        Covariance cov = lin.covariance;
         int p = u.length;
-        double[] sigmaU = new double[p];
-        for (int a = 0; a < p; a++) {
-            sigmaU[a] = Math.sqrt(cov.matrix[a][a]);
-        }
-        double[][] budgetU = budget(cov, j, u, unc, sigma);
         List<FittedParameter> fitted = new ArrayList<>();
         List<BudgetLine> budget = new ArrayList<>();
-        double[] noiseNatural = new double[p];
-        for (int a = 0; a < p; a++) {
-            noiseNatural[a] = sigmaU[a] * problem.free.get(a).dPdU(u[a]);
-        }
-        budget.add(new BudgetLine(null, "", 0, noiseNatural));
-        double[] totalVar = new double[p];
-        for (int a = 0; a < p; a++) {
-            totalVar[a] = noiseNatural[a] * noiseNatural[a];
-        }
+        budget.add(new BudgetLine(null, "", 0, lin.noise.clone()));
         for (int k = 0; k < problem.uncertain.size(); k++) {
-            double[] c = new double[p];
-            for (int a = 0; a < p; a++) {
-                c[a] = Math.abs(budgetU[k][a]) * problem.free.get(a).dPdU(u[a]);
-                totalVar[a] += c[a] * c[a];
-            }
             UncertainInput in = problem.uncertain.get(k);
-            budget.add(new BudgetLine(in.ref(), problem.quantity(in.ref()), in.sigma(), c));
+            budget.add(new BudgetLine(in.ref(), problem.quantity(in.ref()), in.sigma(), lin.contributions[k]));
         }
         for (int a = 0; a < p; a++) {
             FreeInput f = problem.free.get(a);
             boolean atBound = Math.abs(u[a] - f.uMin()) < 1e-9 * Math.max(1, Math.abs(u[a]))
                     || Math.abs(u[a] - f.uMax()) < 1e-9 * Math.max(1, Math.abs(u[a]));
-            boolean singular = cov.condition > Covariance.SINGULAR_CONDITION && Math.abs(cov.weakestDirection[a]) > 0.1;
-            double relative = f.logScale() ? sigmaU[a] : noiseNatural[a] / Math.max(Math.abs(f.toP(u[a])), 1e-300);
-            boolean identifiable = !singular && relative <= IDENTIFIABLE_LIMIT;
+            boolean singular = lin.singular[a];
+            double relative = lin.relativeNoise(a, f, u[a]);
+            boolean identifiable = lin.identifiable(a, f, u[a]);
             double value = f.toP(u[a]);
-            double total = singular ? Double.POSITIVE_INFINITY : Math.sqrt(totalVar[a]);
-            FittedParameter fp = new FittedParameter(f.ref(), problem.quantity(f.ref()), f.initial(), value, total,
-                    singular ? Double.POSITIVE_INFINITY : noiseNatural[a], atBound, identifiable);
+            FittedParameter fp = new FittedParameter(f.ref(), problem.quantity(f.ref()), f.initial(), value,
+                    lin.total[a], singular ? Double.POSITIVE_INFINITY : lin.noise[a], atBound, identifiable);
             fitted.add(fp);
             if (atBound) {
                 warnings.add(fp.label() + " ended on a bound of its range; it is not a minimum there and its σ is not"
@@ -211,29 +195,6 @@ final class FitRunner {
             at += d.size();
         }
         return s;
-    }
-
-    /** budget[k][a]: ∂u_a/∂p_k · σ_k. */
-    private double[][] budget(Covariance cov, double[][] j, double[] u, double[] unc, double[] sigma) {
-        int kCount = problem.uncertain.size();
-        double[][] out = new double[kCount][];
-        if (kCount == 0) {
-            return out;
-        }
-        double[][] ju = solver.uncertainJacobian(u, unc, sigma);
-        double[][] map = cov.solveMap(j);
-        for (int k = 0; k < kCount; k++) {
-            double[] du = new double[u.length];
-            for (int a = 0; a < u.length; a++) {
-                double sum = 0;
-                for (int i = 0; i < ju.length; i++) {
-                    sum += map[a][i] * ju[i][k];
-                }
-                du[a] = -sum * problem.uncertain.get(k).sigma();
-            }
-            out[k] = du;
-        }
-        return out;
     }
 
     private List<DatasetFit> datasetFits(double[] model, double[] y, double[] sigma, List<String> warnings) {

@@ -18,6 +18,8 @@ import lamella.api.fit.FitSettings;
 import lamella.api.fit.Progress;
 import lamella.api.fit.SensitivityTable;
 import lamella.api.guard.LiveModels;
+import lamella.api.plan.PlanOutcome;
+import lamella.api.plan.PlanService;
 import lamella.api.guard.PluginOrigin;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.ServiceReference;
@@ -26,9 +28,12 @@ import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
 
-/** The fitting service: reads a case's fit block, fits, propagates uncertainty; computes sensitivities. */
-@Component(service = FitService.class)
-public final class Fitter implements FitService {
+/**
+ * The fitting service: reads a case's fit block, fits, propagates uncertainty; computes sensitivities; ranks the
+ * plans of a plan block by the σ their fit would give.
+ */
+@Component(service = {FitService.class, PlanService.class})
+public final class Fitter implements FitService, PlanService {
 
     private final LiveModels models = new LiveModels();
 
@@ -97,6 +102,15 @@ public final class Fitter implements FitService {
             return new FitRunner(problem, pool, progress).run(samples, seed);
         } finally {
             pool.shutdownNow();
+        }
+    }
+
+    @Override
+    public PlanOutcome plan(CaseDocument doc, int threads, Progress progress) throws InputException {
+        try {
+            return Planner.run(doc, catalog(), threads, progress);
+        } catch (InputException e) {
+            throw doc.locate(e);
         }
     }
 

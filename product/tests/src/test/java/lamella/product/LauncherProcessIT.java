@@ -145,6 +145,50 @@ class LauncherProcessIT {
         assertTrue(Files.notExists(userDir.resolve("typo.csv")));
     }
 
+    /** Experiment design end to end: the demo plan is ranked, printed with the case as written, written whole. */
+    @Test
+    void planRanksTheDemoPlansAndWritesEveryOne() throws Exception {
+        Path demo = Path.of("../../demo-data/plan/oxide-film-tdtr.json").toAbsolutePath().normalize();
+        Run run = launch("plan", demo.toString(), "--out", "plans/tdtr.json", "--show", "3");
+
+        assertEquals(0, run.status(), run.err());
+        assertTrue(run.out().contains("as written"), run.out());
+        assertTrue(run.out().contains("Budget of the best plan"), run.out());
+        String json = Files.readString(userDir.resolve("plans/tdtr.json"));
+        assertEquals(61, json.split("\"values\" : \\{", -1).length - 1, "the case as written and 60 plans: 5 single"
+                + " and 10 paired frequencies, 4 spots");
+        assertTrue(json.contains("\"rank\" : 1,"), json);
+        assertTrue(json.contains("\"geometry.pump_radius_m\" : "), json);
+        for (String key : List.of("\"parameter\" : \"film.k_through_w_mk\"", "\"sigma\" : ", "\"sigma_noise\" : ",
+                "\"sigma_relative\" : ", "\"steady_rise_k\" : ")) {
+            assertTrue(json.contains(key), key);
+        }
+    }
+
+    /** A plan's bad input: exit status 2 at the JSON path, and no output file; its own case is never overwritten. */
+    @Test
+    void planRefusesABadPlanAndItsOwnInput() throws Exception {
+        Path bad = userDir.resolve("bad-plan.json");
+        Files.writeString(bad, """
+                {
+                  "stack": {"layers": [{"name": "glass", "k_through_w_mk": 1.4, "heat_capacity_j_m3k": 1.6e6}]},
+                  "geometry": {"type": "gaussian", "pump_radius_m": 5e-6, "probe_radius_m": 5e-6},
+                  "measurement": {"type": "fdtr", "frequencies_hz": [1e3, 1e4, 1e5, 1e6]},
+                  "fit": {"free": [{"layer": "glass", "property": "k_w_mk"}]},
+                  "plan": {"vary": [
+                    {"geometry": "pump_radus_m", "values": [2e-6, 8e-6]}]}
+                }
+                """);
+        Run run = launch("plan", "bad-plan.json", "--out", "bad-plans.json");
+        assertEquals(2, run.status(), run.err());
+        assertTrue(run.err().contains("bad-plan.json:7: plan.vary[0].geometry: unknown key 'pump_radus_m'"), run.err());
+        assertTrue(Files.notExists(userDir.resolve("bad-plans.json")));
+
+        Run own = launch("plan", "bad-plan.json", "--out", "./bad-plan.json");
+        assertEquals(2, own.status(), own.err());
+        assertTrue(own.err().contains("would overwrite its own input"), own.err());
+    }
+
     private static Run launch(String... args) throws Exception {
         return launch(List.of(), args);
     }
