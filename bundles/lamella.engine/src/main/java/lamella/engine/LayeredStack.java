@@ -3,6 +3,7 @@ package lamella.engine;
 import java.util.Arrays;
 import lamella.api.BottomBoundary;
 import lamella.api.Layer;
+import lamella.api.ModelEvaluationException;
 import lamella.api.Stack;
 import lamella.api.StackKernel;
 
@@ -36,6 +37,8 @@ public final class LayeredStack implements StackKernel {
     private final double[] cOverZ;
     private final double[] resistanceBelow;
     private final BottomBoundary bottom;
+    /** Why a radial (axisymmetric) response cannot be given, or null when every layer is in-plane isotropic. */
+    private final String notAxisymmetric;
 
     public LayeredStack(Stack stack) {
         this.stack = stack;
@@ -56,6 +59,12 @@ public final class LayeredStack implements StackKernel {
             cOverZ[i] = l.heatCapacity() / l.kThrough();
             resistanceBelow[i] = l.hasPerfectContactBelow() ? 0.0 : 1.0 / l.conductanceBelow();
         }
+        this.notAxisymmetric = stack.layers().stream().filter(l -> !l.isInPlaneIsotropic()).findFirst()
+                .map(l -> "a radial (axisymmetric) response was asked of a stack whose layer '" + l.name()
+                        + "' conducts differently along x (" + l.kInPlaneX() + " W/mK) and y (" + l.kInPlaneY()
+                        + " W/mK); an axisymmetric geometry refuses such a stack in bind"
+                        + " (Geometries.requireInPlaneIsotropy), others integrate response(sx, sy, ω)")
+                .orElse(null);
     }
 
     @Override
@@ -70,11 +79,13 @@ public final class LayeredStack implements StackKernel {
 
     @Override
     public void radialResponse(double k, double omega, double[] out) {
+        requireAxisymmetric();
         evaluate(k * k, 0.0, omega, out);
     }
 
     @Override
     public void topHalfSpaceRadialResponse(double k, double omega, double[] out) {
+        requireAxisymmetric();
         double a = xOverZ[0] * k * k;
         double b = omega * cOverZ[0];
         double r = Math.sqrt(a * a + b * b);
@@ -85,6 +96,12 @@ public final class LayeredStack implements StackKernel {
         double m = gr * gr + gi * gi;
         out[0] = gr / m;
         out[1] = -gi / m;
+    }
+
+    private void requireAxisymmetric() {
+        if (notAxisymmetric != null) {
+            throw new ModelEvaluationException(notAxisymmetric);
+        }
     }
 
     private void evaluate(double sx2, double sy2, double omega, double[] out) {

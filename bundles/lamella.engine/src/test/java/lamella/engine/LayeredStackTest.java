@@ -1,11 +1,13 @@
 package lamella.engine;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import lamella.api.BottomBoundary;
 import lamella.api.Layer;
+import lamella.api.ModelEvaluationException;
 import lamella.api.Stack;
 import org.apache.commons.math3.complex.Complex;
 import org.junit.jupiter.api.Test;
@@ -132,5 +134,26 @@ class LayeredStackTest {
         s.response(0, 4e5, w, alongY);
         assertEquals(alongX[0], alongY[0], 1e-14 * Math.abs(alongX[0]));
         assertEquals(alongX[1], alongY[1], 1e-14 * Math.abs(alongX[1]));
+    }
+
+    /**
+     * An axisymmetric response has no meaning on a layer that conducts differently along x and y: both radial entry
+     * points refuse it, naming the layer, instead of quietly using Λx; the directional response still answers.
+     */
+    @Test
+    void radialEntryPointsRefuseAnInPlaneAnisotropicStack() {
+        Layer cap = Layer.isotropic("cap", 9e-8, 200, 2.45e6);
+        Layer film = new Layer("graphite-film", 2e-6, 6.0, 400.0, 30.0, 1.6e6, Double.POSITIVE_INFINITY);
+        Layer base = Layer.isotropic("base", Double.POSITIVE_INFINITY, 140, 1.63e6);
+        LayeredStack s = new LayeredStack(new Stack(List.of(cap, film, base), BottomBoundary.SEMI_INFINITE));
+        double[] out = new double[2];
+        for (Runnable radial : List.<Runnable>of(() -> s.radialResponse(1e5, OMEGA[1], out),
+                () -> s.topHalfSpaceRadialResponse(1e5, OMEGA[1], out))) {
+            ModelEvaluationException e = assertThrows(ModelEvaluationException.class, radial::run);
+            assertTrue(e.getMessage().contains("layer 'graphite-film'"), e.getMessage());
+            assertTrue(e.getMessage().contains("400.0") && e.getMessage().contains("30.0"), e.getMessage());
+        }
+        s.response(1e5, 0, OMEGA[1], out);
+        assertTrue(Double.isFinite(out[0]) && out[1] < 0);
     }
 }

@@ -62,8 +62,9 @@ final class EllipticModel implements GeometryModel {
         double omega = 2 * Math.PI * frequencyHz;
         Geometries.requireSteadyStateExists(stack.stack(), omega, "elliptic");
         double[] z = new double[2];
-        // scale of the co-axial signal: |Z| where the radial weight peaks
-        stack.radialResponse(Math.sqrt(0.5 / Math.max(a, b)), omega, z);
+        // scale of the co-axial signal: |Z| along x where the radial weight peaks (the radial response itself is
+        // refused on an in-plane anisotropic stack)
+        stack.response(Math.sqrt(0.5 / Math.max(a, b)), 0.0, omega, z);
         double scale = Math.hypot(z[0], z[1]);
         if (inPlaneIsotropic) {
             isotropicLayers(omega, scale, out);

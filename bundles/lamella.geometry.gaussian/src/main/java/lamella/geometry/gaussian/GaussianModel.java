@@ -3,16 +3,14 @@ package lamella.geometry.gaussian;
 import lamella.api.GeometryModel;
 import lamella.api.StackKernel;
 import lamella.engine.GaussianHankel;
-import lamella.engine.Geometries;
+import lamella.engine.RadialIntegral;
 import lamella.engine.SpectralQuadrature;
 
 /** The bound Gaussian-beam response; see {@link GaussianBeams}. */
 final class GaussianModel implements GeometryModel {
 
     private final StackKernel stack;
-    private final double w2;
-    private final double offset;
-    private final double tolerance;
+    private final RadialIntegral integral;
 
     GaussianModel(StackKernel stack, double pumpRadius, double probeRadius, double offset) {
         this(stack, pumpRadius, probeRadius, offset, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE);
@@ -20,16 +18,13 @@ final class GaussianModel implements GeometryModel {
 
     GaussianModel(StackKernel stack, double pumpRadius, double probeRadius, double offset, double tolerance) {
         this.stack = stack;
-        this.w2 = pumpRadius * pumpRadius + probeRadius * probeRadius;
-        this.offset = offset;
-        this.tolerance = tolerance;
+        this.integral = GaussianHankel.of("gaussian", pumpRadius * pumpRadius + probeRadius * probeRadius, offset,
+                tolerance);
     }
 
     @Override
     public void at(double frequencyHz, double[] out) {
-        double omega = 2 * Math.PI * frequencyHz;
-        Geometries.requireSteadyStateExists(stack.stack(), omega, "gaussian");
-        GaussianHankel.integrate(stack, omega, w2, offset, tolerance, out);
-        Geometries.requireFinite(out, "gaussian", frequencyHz);
+        // the steady-state, finiteness and failure guards are RadialIntegral's
+        integral.at(stack, frequencyHz, out);
     }
 }
