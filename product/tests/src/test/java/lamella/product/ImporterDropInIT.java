@@ -115,6 +115,10 @@ class ImporterDropInIT {
         Files.move(partial, runtime.pluginsDir().resolve("tarrow.jar"), StandardCopyOption.ATOMIC_MOVE);
         assertTrue(Eventually.within(LIVE_WITHIN, this::bothCommandsUseTheLabImporter),
                 "the dropped importer did not reach the import and formats commands");
+        // Both commands live in one bundle, so its use of the service proves only that one of them has it: the
+        // other's reference may follow a moment later on a busy machine.
+        assertTrue(Eventually.within(LIVE_WITHIN, () -> formatsLists(ID) && importReads(log)),
+                "formats does not list the importer, or import does not read with it");
 
         Run listed = call(formatsCommand);
         assertEquals(0, listed.status(), listed.err());
@@ -172,6 +176,23 @@ class ImporterDropInIT {
             out.putNextEntry(new JarEntry(entry));
             out.write(Files.readAllBytes(classes.resolve(entry)));
             out.closeEntry();
+        }
+    }
+
+    private boolean formatsLists(String id) {
+        try {
+            Run listed = call(formatsCommand);
+            return listed.status() == 0 && listed.out().contains("\n" + id + " ");
+        } catch (ReflectiveOperationException e) {
+            throw new AssertionError("cannot run formats", e);
+        }
+    }
+
+    private boolean importReads(Path file) {
+        try {
+            return call(importCommand, file.toString()).status() == 0;
+        } catch (ReflectiveOperationException e) {
+            throw new AssertionError("cannot run import", e);
         }
     }
 
