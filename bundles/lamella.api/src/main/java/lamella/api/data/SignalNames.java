@@ -4,8 +4,9 @@ import java.util.List;
 
 /**
  * The column names of measured data, the same as those {@code simulate} writes where the quantity is the same.
- * Lock-in channels are in the unit the instrument recorded (volts after conversion of mV, µV); phase in degrees,
- * negative when lagging; the TDTR ratio is −in_phase/out_of_phase.
+ * Lock-in channels ({@link #IN_PHASE}, {@link #OUT_OF_PHASE}, {@link #AMPLITUDE}) are in volts: an importer converts
+ * a file's mV, µV or nV, and takes a channel whose file states no unit as volts. Phase is in degrees, negative when
+ * lagging; the TDTR ratio is −in_phase/out_of_phase (no unit); x is in s or Hz.
  */
 public final class SignalNames {
 

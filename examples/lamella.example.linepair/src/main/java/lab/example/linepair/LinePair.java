@@ -74,6 +74,10 @@ public final class LinePair implements HeatingGeometry {
         return ResponseUnit.KELVIN_METRE_PER_WATT;
     }
 
+    /**
+     * No {@code Geometries.requireInPlaneIsotropy} here, unlike an axisymmetric geometry: heat spreads across the
+     * strips, along x, with each layer's Λx, so in-plane anisotropic layers are modelled.
+     */
     @Override
     public GeometryModel bind(Parameters p, StackKernel stack) throws InputException {
         double heater = p.number(HEATER_HALF_WIDTH);
@@ -89,6 +93,9 @@ public final class LinePair implements HeatingGeometry {
     private static void evaluate(StackKernel stack, double heater, double sensor, double spacing, double frequencyHz,
                                  double[] out) {
         double omega = 2 * Math.PI * frequencyHz;
+        // The guards every geometry calls (PLUGINS.md): no steady state where no heat can leave, then this
+        // geometry's own stricter rule, and a finite result at the end.
+        Geometries.requireSteadyStateExists(stack.stack(), omega, TYPE);
         if (omega == 0 && stack.stack().bottom() != BottomBoundary.ISOTHERMAL) {
             throw new ModelEvaluationException("geometry '" + TYPE + "': long strips have no steady temperature"
                     + " unless the bottom of the stack is isothermal (heat flow in two dimensions); use a frequency"
