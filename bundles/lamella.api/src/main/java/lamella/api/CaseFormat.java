@@ -1,8 +1,10 @@
 package lamella.api;
 
 import java.nio.file.Path;
+import org.osgi.annotation.versioning.ProviderType;
 
 /** Reads case files; offered as a service by the case-file bundle. */
+@ProviderType
 public interface CaseFormat {
 
     /**

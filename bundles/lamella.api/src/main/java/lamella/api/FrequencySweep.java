@@ -2,12 +2,14 @@ package lamella.api;
 
 import java.util.List;
 import java.util.Optional;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A technique that reads a geometry's complex response over a list of frequencies — FDTR over modulation
  * frequency, 3ω over drive frequency (the heater's temperature oscillates at twice it) — and reports it as real
  * part, imaginary part, amplitude and phase.
  */
+@ConsumerType
 public abstract class FrequencySweep implements Technique {
 
     private final String type;

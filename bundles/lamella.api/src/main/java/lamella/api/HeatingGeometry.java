@@ -1,6 +1,7 @@
 package lamella.api;
 
 import java.util.List;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A heating and sensing geometry — how heat enters the surface and how the temperature is read — offered as a
@@ -21,6 +22,7 @@ import java.util.List;
  * never NaN, when no steady state exists at zero frequency ({@code Geometries.requireSteadyStateExists}) or a result
  * is not finite ({@code Geometries.requireFinite}).
  */
+@ConsumerType
 public interface HeatingGeometry {
 
     /** The case-file name, such as {@code gaussian}. Unique among live geometries. */

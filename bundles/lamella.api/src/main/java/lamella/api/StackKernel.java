@@ -1,5 +1,7 @@
 package lamella.api;
 
+import org.osgi.annotation.versioning.ProviderType;
+
 /**
  * The point response of a layered stack in transform space: the surface temperature per unit surface heat-flux
  * density for a harmonic heating exp(+iωt) with in-plane wavenumbers (sx, sy), in K m² W⁻¹. Implementations are
@@ -15,6 +17,7 @@ package lamella.api;
  * radius w, S or P = exp(−k² w²/8)), and (1/4π²) ∫∫ Z(sx, sy, ω) S(sx, sy) P*(sx, sy) dsx dsy in general. Z at
  * k = 0 is the one-dimensional response of the stack to uniform heating.
  */
+@ProviderType
 public interface StackKernel {
 
     /** The stack this kernel was compiled from. */

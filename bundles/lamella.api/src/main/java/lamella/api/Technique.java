@@ -2,12 +2,14 @@ package lamella.api;
 
 import java.util.List;
 import java.util.Optional;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A measurement method offered as a service: turns the frequency response of a geometry into what the instrument
  * reports over its x-axis (modulation frequency, pump–probe delay, drive frequency). A case file selects it by
  * {@link #type()} in {@code measurement.type}.
  */
+@ConsumerType
 public interface Technique {
 
     /** The case-file name, such as {@code fdtr}. */

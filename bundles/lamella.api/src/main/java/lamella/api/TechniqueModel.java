@@ -1,6 +1,9 @@
 package lamella.api;
 
+import org.osgi.annotation.versioning.ConsumerType;
+
 /** A technique with its settings: evaluates the observables at x values. Thread-safe. */
+@ConsumerType
 public interface TechniqueModel {
 
     /** The x values the case file asks for: empty when it gives none, one value (0) for a steady technique. */

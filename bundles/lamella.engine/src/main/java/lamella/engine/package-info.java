@@ -3,5 +3,5 @@
  * OSGi at run time, so batch jobs and tests use it directly.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.1.0")
+@org.osgi.annotation.versioning.Version("0.2.0")
 package lamella.engine;

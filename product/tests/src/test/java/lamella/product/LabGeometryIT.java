@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
-import java.io.IOException;
 import java.io.PrintStream;
 import java.lang.reflect.Constructor;
 import java.lang.reflect.Method;
@@ -17,7 +16,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
-import java.util.stream.Stream;
 
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
@@ -93,7 +91,7 @@ class LabGeometryIT {
 
         Path partial = runtime.pluginsDir().resolve("line-pair.jar.part");
         Path jar = runtime.pluginsDir().resolve("line-pair.jar");
-        Files.copy(exampleJar(), partial);
+        Files.copy(ExamplePlugins.jar("lamella.example.linepair"), partial);
         Files.move(partial, jar, StandardCopyOption.ATOMIC_MOVE);
         assertTrue(Eventually.within(LIVE_WITHIN, this::simulateUsesTheLabGeometry),
                 "the line-pair geometry did not reach the simulate command");
@@ -121,19 +119,6 @@ class LabGeometryIT {
                 new PrintStream(err, true, StandardCharsets.UTF_8), home);
         int status = (Integer) run.invoke(simulate, List.of(CASE.toString()), io);
         return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
-    }
-
-    /** The jar that the build copied from the example module (see this module's pom). */
-    private static Path exampleJar() throws IOException {
-        String folder = System.getProperty("lamella.example.plugins");
-        if (folder == null) {
-            throw new IllegalStateException("system property lamella.example.plugins is not set; run through Maven");
-        }
-        try (Stream<Path> files = Files.list(Path.of(folder))) {
-            List<Path> jars = files.filter(f -> f.toString().endsWith(".jar")).toList();
-            assertEquals(1, jars.size(), "expected the example plug-in alone in " + folder + ": " + jars);
-            return jars.get(0);
-        }
     }
 
     /** Registered is not enough: the command's dynamic reference must have taken it up. */

@@ -1,11 +1,13 @@
 package lamella.api.command;
 
 import java.util.List;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A headless command, offered as a service and dispatched by {@link #name()}: {@code lamella NAME ARGS…}.
  * Exit status: {@link #OK}, {@link #FAILED} for a failure while working, {@link #BAD_INPUT} for bad input or usage.
  */
+@ConsumerType
 public interface Command {
 
     int OK = 0;

@@ -2,11 +2,13 @@ package lamella.api.data;
 
 import java.nio.file.Path;
 import lamella.api.InputException;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * Reads one family of instrument files into a {@link Dataset}, offered as a service. Any number of importers may be
  * live; the one most confident about a file reads it, unless the user names one by {@link #id()}.
  */
+@ConsumerType
 public interface DataImporter {
 
     /** The name a user gives to choose this importer, such as {@code delimited}. Unique among live importers. */

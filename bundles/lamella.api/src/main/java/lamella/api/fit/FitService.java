@@ -2,11 +2,13 @@ package lamella.api.fit;
 
 import lamella.api.CaseDocument;
 import lamella.api.InputException;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * Fits the free inputs of a case to its datasets and propagates the uncertainty of every input held fixed; computes
  * sensitivities. Offered as a service by the fitting bundle; works on any case through {@link lamella.api.ParameterRef}s.
  */
+@ConsumerType
 public interface FitService {
 
     /**

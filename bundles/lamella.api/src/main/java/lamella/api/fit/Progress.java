@@ -1,6 +1,9 @@
 package lamella.api.fit;
 
+import org.osgi.annotation.versioning.ConsumerType;
+
 /** Progress of long work, and the caller's way to cancel it. Called from worker threads. */
+@ConsumerType
 public interface Progress {
 
     Progress NONE = new Progress() {

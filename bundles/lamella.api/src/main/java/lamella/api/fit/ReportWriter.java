@@ -4,11 +4,13 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import lamella.api.CaseDocument;
+import org.osgi.annotation.versioning.ProviderType;
 
 /**
  * Writes a fit's report into a folder: an HTML page with data and fit, residuals, sensitivities and the uncertainty
  * budget as PNG and SVG plots, and the numbers as CSV and JSON. Offered as a service by the report bundle.
  */
+@ProviderType
 public interface ReportWriter {
 
     /**

@@ -1,11 +1,13 @@
 package lamella.api.material;
 
 import java.util.List;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A library of materials, offered as a service: one per library bundle (found by the materials extender) and one per
  * configured folder. What could not be read is reported in {@link #findings()}; the entries that could are there.
  */
+@ConsumerType
 public interface MaterialLibrary {
 
     LibraryInfo info();

@@ -7,8 +7,10 @@ import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.InputException;
 import lamella.api.ModelCatalog;
+import org.osgi.annotation.versioning.ProviderType;
 
 /** Reads and checks a case file: the live {@link lamella.api.CaseFormat}'s read method. */
+@ProviderType
 @FunctionalInterface
 public interface CaseReader {
 

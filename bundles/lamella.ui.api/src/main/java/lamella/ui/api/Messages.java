@@ -3,8 +3,10 @@ package lamella.ui.api;
 import java.time.Instant;
 import java.util.List;
 import java.util.function.Consumer;
+import org.osgi.annotation.versioning.ProviderType;
 
 /** What happened, for the Messages panel: information, warnings and errors with their cause. Thread-safe. */
+@ProviderType
 public interface Messages {
 
     enum Level { INFO, WARNING, ERROR }

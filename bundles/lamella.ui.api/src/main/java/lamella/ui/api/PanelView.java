@@ -1,8 +1,10 @@
 package lamella.ui.api;
 
 import org.eclipse.swt.widgets.Control;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /** An open panel: its top control, and what to release when it closes. */
+@ConsumerType
 public interface PanelView {
 
     Control control();

@@ -1,9 +1,12 @@
 package lamella.ui.api;
 
+import org.osgi.annotation.versioning.ConsumerType;
+
 /**
  * What becomes of background work, told on the UI thread: its result, its failure (already in Messages, in words),
  * or that it stopped because it was cancelled (by the user, or by a newer request).
  */
+@ConsumerType
 @FunctionalInterface
 public interface WorkResult<T> {
 

@@ -13,8 +13,10 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.MessageBox;
 import org.eclipse.swt.widgets.Shell;
+import org.osgi.annotation.versioning.ProviderType;
 
 /** What every panel is given. Call on the UI thread unless a method says otherwise. */
+@ProviderType
 public interface Workbench {
 
     Display display();
