@@ -31,7 +31,8 @@ final class FitBlockReader {
     }
 
     static FitSpec read(CaseDocument doc) throws InputException {
-        return read(doc, false);
+        Block fit = fitBlock(doc, "\"fit\": {\"datasets\": […], \"free\": […]}");
+        return read(doc, fit, datasets(fit, doc.file(), false));
     }
 
     /**
@@ -39,22 +40,35 @@ final class FitBlockReader {
      * without datasets the case's own geometry and measurement make the one measurement planned.
      */
     static FitSpec readForPlan(CaseDocument doc) throws InputException {
-        return read(doc, true);
+        Block fit = fitBlock(doc, "\"fit\": {\"datasets\": […], \"free\": […]}");
+        List<DatasetSpec> datasets = !fit.has("datasets") ? List.of(new DatasetSpec(0,
+                "the case's measurement", null, null, null, null, RowSelection.ALL, null, "measurement"))
+                : datasets(fit, doc.file(), true);
+        return read(doc, fit, datasets);
     }
 
-    private static FitSpec read(CaseDocument doc, boolean planning) throws InputException {
+    /**
+     * The fit rules for curves measured under the case's own blocks (a map's positions), as the one dataset
+     * {@code curve}; the fit block's own datasets, if any, are not read.
+     */
+    static FitSpec readForCurves(CaseDocument doc, DatasetSpec curve) throws InputException {
+        return read(doc, fitBlock(doc, "\"fit\": {\"free\": […]}"), List.of(curve));
+    }
+
+    private static Block fitBlock(CaseDocument doc, String example) throws InputException {
         Object raw = doc.root().get("fit");
         if (raw == null) {
-            throw InputException.at("fit", "the case has no fit block; add \"fit\": {\"datasets\": […], \"free\": […]}");
+            throw InputException.at("fit", "the case has no fit block; add " + example);
         }
         if (!(raw instanceof Block fit)) {
             throw InputException.at("fit", "expected an object, got " + Block.describe(raw));
         }
         only(fit, FIT_KEYS, "the fit block");
+        return fit;
+    }
+
+    private static FitSpec read(CaseDocument doc, Block fit, List<DatasetSpec> datasets) throws InputException {
         CaseModel base = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
-        List<DatasetSpec> datasets = planning && !fit.has("datasets") ? List.of(new DatasetSpec(0,
-                "the case's measurement", null, null, null, null, RowSelection.ALL, null, "measurement"))
-                : datasets(fit, doc.file(), planning);
         List<FreeInput> free = new ArrayList<>();
         Set<ParameterRef> seen = new HashSet<>();
         for (Block e : objects(fit, "free", true)) {

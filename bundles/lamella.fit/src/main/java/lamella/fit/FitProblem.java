@@ -68,13 +68,7 @@ final class FitProblem {
         CaseModel model = new CaseModel(doc.stack(), geometry, measurement).apartFor(named);
         Simulation sim = model.simulation(catalog);
         Technique t = sim.technique();
-        String signal = d.signal() != null ? d.signal() : Signals.usual(t.type()).orElseThrow(() ->
-                InputException.at(d.path() + ".signal", "name the signal to fit; technique '" + t.type()
-                        + "' gives " + String.join(", ", t.signalColumns())));
-        if (!t.signalColumns().contains(signal)) {
-            throw InputException.at(d.path() + ".signal", "technique '" + t.type() + "' has no signal '" + signal
-                    + "'; it gives " + String.join(", ", t.signalColumns()));
-        }
+        String signal = signalOf(d, t);
         DataTable table = DataTable.read(d.file());
         String xColumn = t.xColumn().orElseThrow(() -> InputException.at(d.path(), "technique '" + t.type()
                 + "' has no x axis; its data cannot be fitted as a curve"));
@@ -112,8 +106,25 @@ final class FitProblem {
                 RowSelection.select(table.column(signal), keep), sigma);
     }
 
+    /** The dataset's signal column, or the technique's usual one, checked against what the technique gives. */
+    static String signalOf(DatasetSpec d, Technique t) throws InputException {
+        String signal = d.signal() != null ? d.signal() : Signals.usual(t.type()).orElseThrow(() ->
+                InputException.at(d.path() + ".signal", "name the signal to fit; technique '" + t.type()
+                        + "' gives " + String.join(", ", t.signalColumns())));
+        if (!t.signalColumns().contains(signal)) {
+            throw InputException.at(d.path() + ".signal", "technique '" + t.type() + "' has no signal '" + signal
+                    + "'; it gives " + String.join(", ", t.signalColumns()));
+        }
+        return signal;
+    }
+
+    /** A problem of datasets already prepared (one curve of a map), without the checks {@link #of} makes. */
+    static FitProblem prepared(List<PreparedDataset> datasets, FitSpec spec, ModelCatalog catalog) {
+        return new FitProblem(datasets, spec, catalog);
+    }
+
     /** Fails early, with the case's words, when the model cannot be evaluated at the starting point. */
-    private void checkEvaluates() throws InputException {
+    void checkEvaluates() throws InputException {
         double[] v = startValues();
         for (PreparedDataset d : datasets) {
             try {

@@ -12,6 +12,7 @@ import lamella.api.ParameterRef;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
+import lamella.api.fit.CurveFit;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FitService;
 import lamella.api.fit.FitSettings;
@@ -109,6 +110,17 @@ public final class Fitter implements FitService, PlanService {
     public PlanOutcome plan(CaseDocument doc, int threads, Progress progress) throws InputException {
         try {
             return Planner.run(doc, catalog(), threads, progress);
+        } catch (InputException e) {
+            throw doc.locate(e);
+        }
+    }
+
+    @Override
+    public CurveFit curves(CaseDocument doc, String signal) throws InputException {
+        try {
+            DatasetSpec curve = new DatasetSpec(0, "map", doc.file(), signal, null, null, RowSelection.ALL, null,
+                    "map");
+            return new CurveFitter(doc, FitBlockReader.readForCurves(doc, curve), curve, catalog());
         } catch (InputException e) {
             throw doc.locate(e);
         }
