@@ -39,12 +39,12 @@ public final class CaseFileReader implements ExplainingCaseFormat {
 
     static final String WORKBENCH = "workbench";
     /**
-     * {@code fit} is read by the fitting service; this reader only lets it through. {@code workbench} holds what the
-     * workbench remembers with a project (settings of techniques and geometries switched away from); no model reads
+     * {@code fit} and {@code plan} are read by the fitting service and {@code map} by the map command; this reader
+     * only lets them through. {@code workbench} holds what the workbench remembers with a project (settings of techniques and geometries switched away from); no model reads
      * it, so any object is accepted there.
      */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
-            LayerReading.TEMPERATURE, "fit", "plan", WORKBENCH);
+            LayerReading.TEMPERATURE, "fit", "plan", "map", WORKBENCH);
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";

@@ -81,7 +81,7 @@ class ShippedServicesIT {
 
     @Test
     void theShippedCommandsAreRegistered() throws Exception {
-        assertNamesEventually("lamella.api.command.Command", "name", Set.of("help", "plugins", "simulate"));
+        assertNamesEventually("lamella.api.command.Command", "name", Set.of("help", "plugins", "simulate", "fit", "batch", "map"));
     }
 
     @Test

@@ -1,0 +1,193 @@
+package lamella.map;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.CancellationException;
+import lamella.api.AtomicText;
+import lamella.api.CaseDocument;
+import lamella.api.CaseFormat;
+import lamella.api.InputException;
+import lamella.api.ModelEvaluationException;
+import lamella.api.OwnInputs;
+import lamella.api.command.Command;
+import lamella.api.command.CommandIO;
+import lamella.api.fit.CurveFit;
+import lamella.api.fit.FitService;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+
+/** {@code lamella map CASE.json --out DIR [--threads N]}: a property map, one small fit per position. */
+@Component(service = Command.class)
+public final class MapCommand implements Command {
+
+    @Reference
+    private CaseFormat caseFormat;
+
+    @Reference
+    private FitService fitter;
+
+    public MapCommand() {
+    }
+
+    /** For tests and programs that assemble the services themselves. */
+    MapCommand(CaseFormat caseFormat, FitService fitter) {
+        this.caseFormat = caseFormat;
+        this.fitter = fitter;
+    }
+
+    @Override
+    public String name() {
+        return "map";
+    }
+
+    @Override
+    public String summary() {
+        return "Fits every position of a map's data and draws each fitted value, its σ and χ² as an image.";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                usage: lamella map CASE.json --out DIR [--threads N]
+
+                Fits the free inputs of the case's fit block at every position of the data file its map block
+                names (a long CSV table: x_m, y_m, the technique's x column, the signal, optionally its sigma_
+                column), each position starting from a neighbour's result where that helps. Writes DIR/map.csv
+                (x_m, y_m, per free input its value and sigma_ column, reduced_chi_square, status, message), an
+                image of each free input, of its σ and of the reduced χ² (PNG and SVG, colour bar with unit,
+                scale bar in µm, positions without a value marked ×) and DIR/summary.txt (counts, time, the
+                spread of each value), which is also printed. A position whose data are unusable is reported in
+                its row and the rest go on. --threads: worker threads (default: all cores). Exit status 0 when
+                at least one position was fitted, 1 when none was, 2 for bad usage, a bad case or a broken file
+                (named with its line), or an output that would overwrite an input.
+                """;
+    }
+
+    @Override
+    public int run(List<String> args, CommandIO io) {
+        Map<String, String> options = new HashMap<>();
+        String casePath = null;
+        for (int i = 0; i < args.size(); i++) {
+            String a = args.get(i);
+            if (a.equals("--out") || a.equals("--threads")) {
+                if (i + 1 >= args.size()) {
+                    return refuse(io, a + " needs a value");
+                }
+                options.put(a, args.get(++i));
+            } else if (a.startsWith("--")) {
+                return refuse(io, "unknown option " + a);
+            } else if (casePath == null) {
+                casePath = a;
+            } else {
+                return refuse(io, "one case file at a time; got also " + a);
+            }
+        }
+        if (casePath == null) {
+            return refuse(io, "which case file?");
+        }
+        if (!options.containsKey("--out")) {
+            return refuse(io, "--out DIR is needed (the folder for map.csv and the images)");
+        }
+        int threads = Math.max(1, Runtime.getRuntime().availableProcessors());
+        if (options.containsKey("--threads")) {
+            try {
+                threads = Integer.parseInt(options.get("--threads"));
+            } catch (NumberFormatException e) {
+                threads = 0;
+            }
+            if (threads < 1) {
+                return refuse(io, "--threads expects a whole number ≥ 1, got '" + options.get("--threads") + "'");
+            }
+        }
+        Path file = io.resolve(casePath);
+        Path out = io.resolve(options.get("--out"));
+        try {
+            CaseDocument doc = caseFormat.read(file);
+            MapBlock block = MapBlock.read(doc);
+            CurveFit fit = fitter.curves(doc, block.signal());
+            List<Path> inputs = new ArrayList<>(OwnInputs.ofCase(file));
+            inputs.add(block.data());
+            for (Path f : MapOutputs.files(out, fit)) {
+                Path clash = OwnInputs.clash(f, inputs);
+                if (clash != null) {
+                    io.err().println(OwnInputs.message("map", out, clash));
+                    return BAD_INPUT;
+                }
+            }
+            MapData data = MapData.read(block.data(), fit.xColumn(), fit.signal());
+            fit.check(data.x, data.hasSigma, "map.data");
+            return map(doc, data, fit, threads, out, io);
+        } catch (InputException e) {
+            io.err().println("lamella map: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (ModelEvaluationException e) {
+            io.err().println("lamella map: " + file + ": the model cannot be evaluated: " + e.getMessage());
+            return BAD_INPUT;
+        } catch (CancellationException e) {
+            io.err().println("lamella map: interrupted; nothing was written");
+            return FAILED;
+        } catch (IOException e) {
+            io.err().println("lamella map: cannot write into " + out + ": " + e.getMessage());
+            return FAILED;
+        }
+    }
+
+    private static int map(CaseDocument doc, MapData data, CurveFit fit, int threads, Path out, CommandIO io)
+            throws IOException {
+        long t0 = System.nanoTime();
+        int total = data.positions.size();
+        Reporter reporter = new Reporter(io.err(), total, t0);
+        MapEngine.Result[] results = new MapEngine(fit, data.x, threads).run(data.positions, reporter::done);
+        double seconds = (System.nanoTime() - t0) * 1e-9;
+        AtomicText.write(out.resolve(MapOutputs.TABLE), MapOutputs.table(data, results, fit));
+        MapOutputs.images(out, data, results, fit);
+        String summary = MapOutputs.summary(data, results, fit, seconds, threads);
+        AtomicText.write(out.resolve(MapOutputs.SUMMARY), "# lamella map " + doc.file() + "\n" + summary);
+        io.out().print(summary);
+        io.out().println("results: " + out.resolve(MapOutputs.TABLE));
+        boolean any = false;
+        for (MapEngine.Result r : results) {
+            any |= r.status() != MapEngine.Status.FAILED;
+        }
+        return any ? OK : FAILED;
+    }
+
+    private int refuse(CommandIO io, String problem) {
+        io.err().println("lamella map: " + problem + "\n" + usage());
+        return BAD_INPUT;
+    }
+
+    /** Progress on standard error about every two seconds: positions done, rate and time left. */
+    private static final class Reporter {
+        private final PrintStream err;
+        private final int total;
+        private final long start;
+        private long last;
+
+        Reporter(PrintStream err, int total, long start) {
+            this.err = err;
+            this.total = total;
+            this.start = start;
+            this.last = start;
+        }
+
+        synchronized void done(int count) {
+            long now = System.nanoTime();
+            if (now - last < 2_000_000_000L && count < total) {
+                return;
+            }
+            last = now;
+            double seconds = (now - start) * 1e-9;
+            double rate = count / Math.max(seconds, 1e-9);
+            String left = count < total ? String.format(Locale.ROOT, ", about %.0f s left", (total - count) / rate)
+                    : "";
+            err.printf(Locale.ROOT, "map: %d/%d positions, %.0f positions/s%s%n", count, total, rate, left);
+        }
+    }
+}
