@@ -22,7 +22,6 @@ import lamella.api.CaseModel;
 import lamella.api.InputException;
 import lamella.api.ModelCatalog;
 import lamella.api.command.CommandIO;
-import lamella.api.fit.CurveFit;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FitService;
 import lamella.api.fit.FitSettings;
@@ -202,11 +201,6 @@ class BatchCommandTest {
                     Thread.currentThread().interrupt();
                 }
                 return fitter.fit(doc, settings, progress);
-            }
-
-            @Override
-            public CurveFit curves(CaseDocument doc, String signal) {
-                throw new UnsupportedOperationException("not used by batch");
             }
 
             @Override

@@ -13,6 +13,7 @@ import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.fit.CurveFit;
+import lamella.api.fit.CurveFitService;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FitService;
 import lamella.api.fit.FitSettings;
@@ -33,8 +34,8 @@ import org.osgi.service.component.annotations.ReferencePolicy;
  * The fitting service: reads a case's fit block, fits, propagates uncertainty; computes sensitivities; ranks the
  * plans of a plan block by the σ their fit would give.
  */
-@Component(service = {FitService.class, PlanService.class})
-public final class Fitter implements FitService, PlanService {
+@Component(service = {FitService.class, PlanService.class, CurveFitService.class})
+public final class Fitter implements FitService, PlanService, CurveFitService {
 
     private final LiveModels models = new LiveModels();
 

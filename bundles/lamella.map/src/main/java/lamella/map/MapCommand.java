@@ -18,7 +18,7 @@ import lamella.api.OwnInputs;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.CurveFit;
-import lamella.api.fit.FitService;
+import lamella.api.fit.CurveFitService;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
@@ -30,13 +30,13 @@ public final class MapCommand implements Command {
     private CaseFormat caseFormat;
 
     @Reference
-    private FitService fitter;
+    private CurveFitService fitter;
 
     public MapCommand() {
     }
 
     /** For tests and programs that assemble the services themselves. */
-    MapCommand(CaseFormat caseFormat, FitService fitter) {
+    MapCommand(CaseFormat caseFormat, CurveFitService fitter) {
         this.caseFormat = caseFormat;
         this.fitter = fitter;
     }

@@ -9,6 +9,8 @@ import java.awt.Shape;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -169,6 +171,11 @@ final class MapImages {
         barAxis.setLabelFont(LABEL);
         barAxis.setTickLabelFont(TICKS);
         barAxis.setRange(lo, hi);
+        double magnitude = Math.max(Math.abs(lo), Math.abs(hi));
+        if (magnitude >= 1e5 || magnitude < 1e-2) {
+            // 54,000,000 or 0.000031 is hard to read on a colour bar: powers of ten instead
+            barAxis.setNumberFormatOverride(new DecimalFormat("0.0##E0", DecimalFormatSymbols.getInstance(Locale.ROOT)));
+        }
         PaintScaleLegend bar = new PaintScaleLegend(scale, barAxis);
         bar.setPosition(RectangleEdge.RIGHT);
         bar.setAxisLocation(AxisLocation.BOTTOM_OR_RIGHT);

@@ -108,13 +108,14 @@ class MapCommandTest {
             assertEquals((byte) 0x89, png[0], stem);
             assertEquals('P', png[1], stem);
             String svg = Files.readString(out.resolve(stem + ".svg"));
-            assertTrue(svg.contains("<svg") && svg.contains(" µm<") || svg.contains(" µm</"), stem);
+            assertTrue(svg.startsWith("<?xml") && svg.contains("<svg"), stem);
+            assertTrue(svg.contains(" µm</"), stem + ": a scale bar labelled in µm");
             assertTrue(svg.contains("x (µm)"), stem);
         }
         assertTrue(Files.readString(out.resolve("film.k_through_w_mk.svg")).contains("film.k_through_w_mk (W/(m K))"),
                 "the colour bar names the quantity and its unit");
         assertTrue(r.out().contains("30 positions, 6 frequency_hz values each"), r.out());
-        assertTrue(r.out().contains("ok 30, with warnings 0, failed 0") || r.out().contains("failed 0"), r.out());
+        assertTrue(r.out().matches("(?s).*ok \\d+, with warnings \\d+, failed 0;.*"), r.out());
         assertTrue(Files.readString(out.resolve("summary.txt")).contains("film.k_through_w_mk"), r.out());
     }
 
@@ -244,7 +245,7 @@ class MapCommandTest {
 
     @Test
     void anOutputThatIsAnInputIsRefused() throws Exception {
-        SyntheticMap.write(dir.resolve("map.csv"), gridTable(3, 2).replace("", ""));
+        SyntheticMap.write(dir.resolve("map.csv"), gridTable(3, 2));
         caseFile("map.csv");
         byte[] before = Files.readAllBytes(dir.resolve("map.csv"));
 

@@ -3,12 +3,14 @@ package lamella.api.fit;
 import java.util.List;
 import lamella.api.InputException;
 import lamella.api.ParameterRef;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * The fit rules of one case — its {@code fit} block's free and uncertain inputs, bounds, weights and starts — applied
  * to many short curves measured under the case's own geometry and measurement: the positions of a map. One instance
  * serves every worker thread; each {@link #fit} runs in the thread that calls it and uses no other.
  */
+@ConsumerType
 public interface CurveFit {
 
     /** The free inputs, in the order of every value array. */

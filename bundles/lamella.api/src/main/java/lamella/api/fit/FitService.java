@@ -19,16 +19,6 @@ public interface FitService {
     FitOutcome fit(CaseDocument doc, FitSettings settings, Progress progress) throws InputException;
 
     /**
-     * The case's fit rules — the fit block's free and uncertain inputs, bounds, weights and starts; its datasets, if
-     * any, are not read — for fitting many curves measured under the case's own geometry and measurement, such as the
-     * positions of a map.
-     *
-     * @param signal a signal column of the technique, or null for the technique's usual fitted signal
-     * @throws InputException for a bad fit block, naming the JSON path
-     */
-    CurveFit curves(CaseDocument doc, String signal) throws InputException;
-
-    /**
      * Sensitivities S = ∂ln(signal)/∂ln(p) (for a phase, ∂φ/∂ln p in degrees) of every numeric input of the
      * case's measurement — or, when {@code dataset ≥ 0}, of that fit dataset at its data's x values.
      *
