@@ -9,8 +9,10 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.function.Predicate;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.stream.Stream;
 
 /**
  * Guards an output file against being one of the command's own inputs: the case file, and every existing file a case
@@ -80,16 +82,66 @@ public final class OwnInputs {
      * or null when the output is safe.
      */
     public static String refusal(String command, Path out, Path caseFile) {
+        return refusal(command, out, caseFile, List.of());
+    }
+
+    /**
+     * As {@link #refusal(String, Path, Path)}, with more inputs: the runtime's own ({@code CommandIO.runtimeInputs},
+     * the configured material libraries' files).
+     */
+    public static String refusal(String command, Path out, Path caseFile, List<Path> more) {
         if (out == null) {
             return null;
         }
-        Path clash = clash(out, ofCase(caseFile));
+        List<Path> inputs = new ArrayList<>(ofCase(caseFile));
+        inputs.addAll(more);
+        Path clash = clash(out, inputs);
         return clash == null ? null : message(command, out, clash);
+    }
+
+    /**
+     * The refusal to print when writing files into {@code folder} would replace an input: the folder is itself one of
+     * the inputs, or an input lies in it under a name the writer uses ({@code writes}). Null when the folder is safe.
+     */
+    public static String folderRefusal(String command, Path folder, List<Path> inputs, Predicate<String> writes) {
+        if (folder == null) {
+            return null;
+        }
+        Path itself = clash(folder, inputs);
+        if (itself != null) {
+            return message(command, folder, itself);
+        }
+        if (!Files.isDirectory(folder)) {
+            return null;
+        }
+        for (Path in : inputs) {
+            Path name = in.getFileName();
+            if (name != null && writes.test(name.toString())) {
+                Path clash = clash(folder.resolve(name.toString()), List.of(in));
+                if (clash != null) {
+                    return message(command, folder, clash);
+                }
+            }
+        }
+        return null;
+    }
+
+    /** The files of a library folder: its library.json and entry files. Empty when it is not a folder. */
+    public static List<Path> ofLibraryFolder(Path folder) {
+        if (!Files.isDirectory(folder)) {
+            return List.of();
+        }
+        try (Stream<Path> s = Files.list(folder)) {
+            return s.filter(p -> p.getFileName().toString().endsWith(".json") && Files.isRegularFile(p)).sorted()
+                    .toList();
+        } catch (IOException | RuntimeException e) {
+            return List.of();
+        }
     }
 
     /** The message for a refused output, in one wording for every command. */
     public static String message(String command, Path out, Path input) {
         return "lamella " + command + ": --out " + out + " would overwrite its own input " + input
-                + "; nothing was written (choose another output file)";
+                + "; nothing was written (choose another output " + (Files.isDirectory(out) ? "folder" : "file") + ")";
     }
 }

@@ -2,7 +2,12 @@ package lamella.api;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import lamella.api.material.Material;
+import lamella.api.material.MaterialProperty;
 import lamella.api.material.PropertyValue;
 
 /**
@@ -56,5 +61,54 @@ public record ValueOrigin(String path, String layer, String key, double value, K
             default:
                 return "default: " + how;
         }
+    }
+
+    /**
+     * The provenance of a library value as plain JSON-ready values, the one record that result files and reports
+     * write: the path and value, the library (id, name, tier, where it lives), the entry (id, version, file and
+     * line, review), the source of every stated property used, the temperature and the relative uncertainty.
+     * Keys are those of the case and library files.
+     *
+     * @throws IllegalStateException for a value that is not a library value
+     */
+    public Map<String, Object> provenance() {
+        PropertyValue v = library.orElseThrow(() -> new IllegalStateException(path + " is not a library value"));
+        Material m = v.material();
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("path", path);
+        out.put("layer", layer);
+        out.put("key", key);
+        out.put("value", value);
+        out.put("unit", Units.ofKey(key));
+        Map<String, Object> lib = new LinkedHashMap<>();
+        lib.put("id", m.library().id());
+        lib.put("name", m.library().name());
+        lib.put("tier", m.library().tier().label());
+        lib.put("location", m.library().location());
+        out.put("library", lib);
+        Map<String, Object> entry = new LinkedHashMap<>();
+        entry.put("id", m.id());
+        entry.put("version", m.curation().version());
+        entry.put("read_from", m.location());
+        m.curation().reviewedBy().ifPresent(by -> entry.put("reviewed_by", by));
+        m.curation().reviewedOn().ifPresent(on -> entry.put("reviewed_on", on.toString()));
+        out.put("entry", entry);
+        out.put("source", v.sources());
+        List<Map<String, Object>> from = v.from().stream().map(ValueOrigin::stated).toList();
+        out.put("stated", from);
+        if (!how.isEmpty()) {
+            out.put("how", how);
+        }
+        out.put("temperature_k", v.temperatureK());
+        v.uncertaintyRel().ifPresent(u -> out.put("uncertainty_rel", u));
+        return out;
+    }
+
+    private static Map<String, Object> stated(MaterialProperty p) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("key", p.quantity().key());
+        out.put("source", p.source());
+        p.uncertaintyRel().ifPresent(u -> out.put("uncertainty_rel", u));
+        return out;
     }
 }

@@ -98,7 +98,8 @@ public final class CaseFileReader implements ExplainingCaseFormat {
                     root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins);
             Block geometry = block(root, "geometry");
             Block measurement = block(root, "measurement");
-            return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines), origins);
+            return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines, origins),
+                    origins);
         } catch (InputException e) {
             throw new CaseDocument(file, null, null, null, root, lines).locate(e);
         }

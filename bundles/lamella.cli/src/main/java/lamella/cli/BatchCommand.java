@@ -89,7 +89,7 @@ public final class BatchCommand implements Command {
             io.err().println("lamella batch: " + e.getMessage());
             return BAD_INPUT;
         }
-        String refused = refusal(input, out, entries);
+        String refused = refusal(input, out, entries, io.runtimeInputs());
         if (refused != null) {
             io.err().println(refused);
             return BAD_INPUT;
@@ -110,7 +110,7 @@ public final class BatchCommand implements Command {
     }
 
     /** Refuses an output folder that is the folder of cases, or a result file that is one of the inputs. */
-    static String refusal(Path input, Path out, List<BatchManifest.Entry> entries) {
+    static String refusal(Path input, Path out, List<BatchManifest.Entry> entries, List<Path> runtimeInputs) {
         try {
             if (Files.isDirectory(input) && Files.isDirectory(out) && Files.isSameFile(input, out)) {
                 return "lamella batch: --out " + out + " is the folder of cases itself; nothing was written (choose"
@@ -124,6 +124,7 @@ public final class BatchCommand implements Command {
             inputs.add(input);
         }
         entries.forEach(e -> inputs.addAll(OwnInputs.ofCase(e.file())));
+        inputs.addAll(runtimeInputs);
         List<Path> all = new ArrayList<>(inputs);
         for (Path f : BatchRun.outputs(out, entries)) {
             Path clash = OwnInputs.clash(f, all);

@@ -112,8 +112,9 @@ final class BatchRun {
             } else {
                 List<Row> mine;
                 try {
-                    FitOutcome outcome = fit(e);
-                    ObjectNode tree = FitResultJson.tree(e.file(), outcome);
+                    CaseDocument doc = read(e);
+                    FitOutcome outcome = fitter.fit(doc, settings, Progress.NONE);
+                    ObjectNode tree = FitResultJson.tree(doc, outcome);
                     ObjectNode record = tree.putObject("batch");
                     record.put("name", e.name());
                     record.put("fingerprint", fingerprint);
@@ -163,14 +164,13 @@ final class BatchRun {
         }
     }
 
-    private FitOutcome fit(BatchManifest.Entry e) throws InputException {
+    private CaseDocument read(BatchManifest.Entry e) throws InputException {
         CaseDocument doc = format.read(e.file());
         try {
-            doc = CaseOverrides.apply(doc, e.overrides());
+            return CaseOverrides.apply(doc, e.overrides());
         } catch (InputException x) {
             throw e.problem(x.path(), x.problem());
         }
-        return fitter.fit(doc, settings, Progress.NONE);
     }
 
     private static Row failure(BatchManifest.Entry e, Exception x) {

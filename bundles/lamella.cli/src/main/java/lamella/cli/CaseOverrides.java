@@ -1,11 +1,15 @@
 package lamella.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
 import lamella.api.InputException;
+import lamella.api.Layer;
 import lamella.api.Names;
 import lamella.api.ParameterRef;
+import lamella.api.ValueOrigin;
 
 /**
  * A batch entry's {@code set}: inputs of a case replaced by their parameter paths ({@code film.thickness_m},
@@ -24,9 +28,12 @@ final class CaseOverrides {
             return doc;
         }
         CaseModel model = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+        List<ValueOrigin> origins = new ArrayList<>(doc.origins());
         for (Map.Entry<String, Double> e : overrides.entrySet()) {
             String at = "set." + e.getKey();
             ParameterRef ref = parse(e.getKey(), at);
+            Layer.Tie tie = tieOf(doc, ref);
+            origins.removeIf(o -> sets(ref, tie, o));
             try {
                 model.value(ref, at);
                 model = model.with(ref, e.getValue());
@@ -35,7 +42,37 @@ final class CaseOverrides {
             }
         }
         return new CaseDocument(doc.file(), model.stack(), model.geometry(), model.measurement(), doc.root(),
-                doc.lines());
+                doc.lines(), origins);
+    }
+
+    /**
+     * Whether an override replaces the value an origin describes, so that the library (or case line) it names no
+     * longer stands behind the value: the same layer and key, or every direction of a conductivity stated once.
+     */
+    static boolean sets(ParameterRef ref, Layer.Tie tie, ValueOrigin o) {
+        if (ref.scope() != ParameterRef.Scope.LAYER || !ref.layer().equals(o.layer())) {
+            return false;
+        }
+        return switch (ref.key()) {
+            case "k_w_mk" -> o.key().startsWith("k_");
+            case "k_in_plane_w_mk" -> o.key().startsWith("k_in_plane");
+            case "k_through_w_mk" -> o.key().equals("k_through_w_mk")
+                    || (o.key().equals("k_in_plane_x_w_mk") && tie.x())
+                    || (o.key().equals("k_in_plane_y_w_mk") && tie.y());
+            default -> o.key().equals(ref.key());
+        };
+    }
+
+    /** Which in-plane directions follow Λz in the layer a path names (none for other paths). */
+    private static Layer.Tie tieOf(CaseDocument doc, ParameterRef ref) {
+        if (ref.scope() == ParameterRef.Scope.LAYER) {
+            for (Layer l : doc.stack().layers()) {
+                if (l.name().equals(ref.layer())) {
+                    return l.tie();
+                }
+            }
+        }
+        return Layer.Tie.of(false, false);
     }
 
     static ParameterRef parse(String path, String at) throws InputException {

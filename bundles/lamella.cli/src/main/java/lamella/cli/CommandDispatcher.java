@@ -1,7 +1,9 @@
 package lamella.cli;
 
 import java.time.Duration;
+import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.IntConsumer;
 
 import org.osgi.framework.BundleContext;
@@ -13,6 +15,8 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
+import lamella.api.command.RuntimeInputs;
+import lamella.api.command.StartupNotice;
 
 /**
  * Runs the command line of the launcher's launch service against the live {@link Command} services and hands the
@@ -26,6 +30,8 @@ public final class CommandDispatcher {
     static final Duration QUIET = Duration.ofMillis(500);
 
     private final CommandShelf shelf = new CommandShelf();
+    private final List<StartupNotice> notices = new CopyOnWriteArrayList<>();
+    private final List<RuntimeInputs> inputs = new CopyOnWriteArrayList<>();
     private IntConsumer launcher;
     private LaunchRequest request;
 
@@ -45,10 +51,31 @@ public final class CommandDispatcher {
         shelf.remove(command);
     }
 
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeNotice")
+    void addNotice(StartupNotice notice) {
+        notices.add(notice);
+    }
+
+    void removeNotice(StartupNotice notice) {
+        notices.remove(notice);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeInputs")
+    void addInputs(RuntimeInputs files) {
+        inputs.add(files);
+    }
+
+    void removeInputs(RuntimeInputs files) {
+        inputs.remove(files);
+    }
+
     @Activate
     void activate(BundleContext context) {
         boolean debug = Boolean.parseBoolean(context.getProperty("lamella.debug"));
-        Dispatch dispatch = new Dispatch(shelf, PATIENCE, QUIET, debug);
+        Dispatch dispatch = new Dispatch(shelf, PATIENCE, QUIET, debug, () -> List.copyOf(notices),
+                () -> List.copyOf(inputs));
         CommandIO io = new CommandIO(System.out, System.err, request.workingDirectory());
         new Thread(() -> runAndReport(dispatch, io), "lamella-command").start();
     }

@@ -77,6 +77,9 @@ public final class DemoCommand implements Command {
         try {
             Options o = Options.parse(withCase, "demo", List.of("--out", "--monte-carlo", "--seed", "--threads"));
             Path folder = io.resolve(o.has("--out") ? o.value("--out") : DEFAULT_FOLDER);
+            if (FitReportRun.refused("demo", demo, folder, writer, io)) {
+                return BAD_INPUT;
+            }
             io.out().println("Demo (invented sample and data): " + demo + "\n");
             int status = FitReportRun.run("demo", demo, folder, FitReportRun.settings(o), caseFormat, fitter, writer,
                     io);

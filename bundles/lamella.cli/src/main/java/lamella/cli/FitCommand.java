@@ -63,7 +63,8 @@ public final class FitCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
-        String refused = OwnInputs.refusal("fit", o.has("--out") ? io.resolve(o.value("--out")) : null, casePath);
+        String refused = OwnInputs.refusal("fit", o.has("--out") ? io.resolve(o.value("--out")) : null, casePath,
+                io.runtimeInputs());
         if (refused != null) {
             io.err().println(refused);
             return BAD_INPUT;
@@ -75,7 +76,7 @@ public final class FitCommand implements Command {
             io.out().print(FitSummary.format(outcome));
             if (o.has("--out")) {
                 Path out = io.resolve(o.value("--out"));
-                AtomicText.write(out, FitResultJson.format(casePath, outcome));
+                AtomicText.write(out, FitResultJson.format(doc, outcome));
                 io.err().println("wrote " + out);
             }
             return OK;

@@ -9,6 +9,7 @@ import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
+import lamella.api.OwnInputs;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitOutcome;
@@ -25,6 +26,9 @@ final class FitReportRun {
 
     static int run(String command, Path casePath, Path folder, FitSettings settings, CaseFormat format,
                    FitService fitter, ReportWriter writer, CommandIO io) {
+        if (refused(command, casePath, folder, writer, io)) {
+            return Command.BAD_INPUT;
+        }
         try {
             CaseDocument doc = format.read(casePath);
             FitOutcome outcome = fitter.fit(doc, settings, new ProgressLine(io.err()));
@@ -51,6 +55,20 @@ final class FitReportRun {
                     + e.getMessage());
             return Command.FAILED;
         }
+    }
+
+    /**
+     * Whether the report folder would replace one of the run's inputs (the case, its data, a configured library
+     * file); if so the refusal is printed. Checked before anything is computed or written.
+     */
+    static boolean refused(String command, Path casePath, Path folder, ReportWriter writer, CommandIO io) {
+        List<Path> inputs = new ArrayList<>(OwnInputs.ofCase(casePath));
+        inputs.addAll(io.runtimeInputs());
+        String refusal = OwnInputs.folderRefusal(command, folder, inputs, writer::writes);
+        if (refusal != null) {
+            io.err().println(refusal);
+        }
+        return refusal != null;
     }
 
     /** The fit settings the command line asks for. */

@@ -5,9 +5,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.nio.file.Path;
 import java.util.List;
+import lamella.api.CaseDocument;
 import lamella.api.ParameterRef;
+import lamella.api.ValueOrigin;
 import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
@@ -18,8 +19,9 @@ import lamella.api.fit.MonteCarloSummary;
  * The result file of {@code lamella fit}: every free parameter (as {@code layer}/{@code geometry}/{@code measurement}
  * with {@code property}, as its one-line {@code parameter} path, and with {@code quantity} saying what a conductivity
  * path moved), value, total σ and noise σ, correlations,
- * per-dataset reduced χ² and residuals, the uncertainty budget and Monte Carlo statistics. SI units; a value that is
- * not finite (an unidentifiable σ) is written as null.
+ * per-dataset reduced χ² and residuals, the uncertainty budget, Monte Carlo statistics, and every stack value taken
+ * from a material library with its library, tier, entry version and source ({@code library_values}). SI units; a
+ * value that is not finite (an unidentifiable σ) is written as null.
  */
 final class FitResultJson {
 
@@ -28,8 +30,8 @@ final class FitResultJson {
     private FitResultJson() {
     }
 
-    static String format(Path caseFile, FitOutcome o) throws JsonProcessingException {
-        return text(tree(caseFile, o));
+    static String format(CaseDocument doc, FitOutcome o) throws JsonProcessingException {
+        return text(tree(doc, o));
     }
 
     /** A result (or any tree) as the file holds it: indented, ending in a newline. */
@@ -38,9 +40,9 @@ final class FitResultJson {
     }
 
     /** The result as a tree, for commands that add their own record to it (batch). */
-    static ObjectNode tree(Path caseFile, FitOutcome o) {
+    static ObjectNode tree(CaseDocument doc, FitOutcome o) {
         ObjectNode root = MAPPER.createObjectNode();
-        root.put("case", caseFile.toString());
+        root.put("case", doc.file().toString());
         root.put("converged", o.converged());
         number(root, "reduced_chi_square", o.reducedChiSquare());
         root.put("model_evaluations", o.evaluations());
@@ -99,6 +101,10 @@ final class FitResultJson {
             }
         }
         o.monteCarlo().ifPresent(mc -> monteCarlo(root.putObject("monte_carlo"), mc, o.parameters()));
+        ArrayNode library = root.putArray("library_values");
+        for (ValueOrigin v : doc.libraryValues()) {
+            library.add(MAPPER.valueToTree(v.provenance()));
+        }
         ArrayNode warnings = root.putArray("warnings");
         o.warnings().forEach(warnings::add);
         return root;

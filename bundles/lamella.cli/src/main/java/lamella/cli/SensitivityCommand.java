@@ -12,6 +12,7 @@ import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
+import lamella.api.ValueOrigin;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitService;
@@ -52,7 +53,8 @@ public final class SensitivityCommand implements Command {
                 values. The signal defaults to the one usually fitted (tdtr: ratio, fdtr: phase_deg). Writes CSV (x
                 column, then one column per input, named by its path such as film.thickness_m; a conductivity also
                 says what it moves, such as "film.k_w_mk (isotropic Λ)" or "film.k_through_w_mk (through-plane Λz)")
-                to --out or standard output, and a ranking by the largest |S| to standard error. A conductivity
+                to --out or standard output, and to standard error a ranking by the largest |S| with where each
+                value came from (a library value with its library, tier, entry version and source). A conductivity
                 stated once (one value, or one isotropic library value) is one input, perturbed in every direction.
                 """;
     }
@@ -67,7 +69,8 @@ public final class SensitivityCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(o.positional());
-        String refused = OwnInputs.refusal("sensitivity", o.has("--out") ? io.resolve(o.value("--out")) : null, casePath);
+        String refused = OwnInputs.refusal("sensitivity", o.has("--out") ? io.resolve(o.value("--out")) : null,
+                casePath, io.runtimeInputs());
         if (refused != null) {
             io.err().println(refused);
             return BAD_INPUT;
@@ -77,7 +80,7 @@ public final class SensitivityCommand implements Command {
             CaseDocument doc = caseFormat.read(casePath);
             SensitivityTable t = fitter.sensitivity(doc, dataset, o.value("--signal"));
             String csv = csv(t);
-            io.err().print(ranking(t));
+            io.err().print(ranking(t, doc));
             if (o.has("--out")) {
                 Path out = io.resolve(o.value("--out"));
                 AtomicText.write(out, csv);
@@ -115,7 +118,11 @@ public final class SensitivityCommand implements Command {
         return sb.toString();
     }
 
-    private static String ranking(SensitivityTable t) {
+    /**
+     * The inputs by their largest |S|, and where each value came from (a library value with its library, tier, entry
+     * version and source).
+     */
+    static String ranking(SensitivityTable t, CaseDocument doc) {
         List<Integer> order = new ArrayList<>();
         double[] peak = new double[t.parameters().size()];
         for (int j = 0; j < peak.length; j++) {
@@ -125,9 +132,11 @@ public final class SensitivityCommand implements Command {
             }
         }
         order.sort(Comparator.comparingDouble(j -> -peak[j]));
-        TextTable table = new TextTable("input", t.phaseLike() ? "largest |dφ/d ln p| (°)" : "largest |S|");
+        TextTable table = new TextTable("input", t.phaseLike() ? "largest |dφ/d ln p| (°)" : "largest |S|",
+                "value from");
         for (int j : order) {
-            table.add(t.label(j), String.format(Locale.ROOT, "%.3g", peak[j]));
+            String from = doc.origin(t.parameters().get(j)).map(ValueOrigin::describe).orElse("case file");
+            table.add(t.label(j), String.format(Locale.ROOT, "%.3g", peak[j]), from);
         }
         return "Sensitivity of " + t.signal() + " over " + t.xColumn() + "\n" + table.render("  ");
     }

@@ -110,7 +110,8 @@ public final class SimulateCommand implements Command {
             return BAD_INPUT;
         }
         Path casePath = io.resolve(caseArg);
-        String refused = OwnInputs.refusal("simulate", outArg == null ? null : io.resolve(outArg), casePath);
+        String refused = OwnInputs.refusal("simulate", outArg == null ? null : io.resolve(outArg), casePath,
+                io.runtimeInputs());
         if (refused != null) {
             io.err().println(refused);
             return BAD_INPUT;

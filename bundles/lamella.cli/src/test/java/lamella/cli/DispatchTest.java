@@ -9,6 +9,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 import lamella.api.command.Command;
+import lamella.api.command.StartupNotice;
 
 class DispatchTest {
 
@@ -26,6 +27,55 @@ class DispatchTest {
 
         assertEquals(7, status);
         assertEquals(List.of(List.of("case.json", "--out", "x.csv")), simulate.calls);
+    }
+
+    @Test
+    void everyStartUpNoticeIsPrintedOnceBeforeTheCommandRunsAndAFailingOneDoesNotStopIt() {
+        shelf.add(new FakeCommand("plugins", args -> {
+            capture.io.err().println("running");
+            return 0;
+        }));
+        StartupNotice broken = () -> List.of("the facility material library /srv/x cannot be used; details: lamella"
+                + " materials check /srv/x --tier facility");
+        StartupNotice failing = () -> {
+            throw new IllegalStateException("disk gone");
+        };
+        Dispatch noticing = new Dispatch(shelf, Duration.ofSeconds(5), Duration.ofMillis(50), false,
+                () -> List.of(broken, failing, List::of), List::of);
+
+        assertEquals(0, noticing.run(List.of("plugins"), capture.io));
+
+        assertEquals("lamella: the facility material library /srv/x cannot be used; details: lamella materials check"
+                + " /srv/x --tier facility\nlamella: a start-up check failed: java.lang.IllegalStateException: disk"
+                + " gone\nrunning\n", capture.err());
+    }
+
+    @Test
+    void theRuntimesInputsReachTheCommandAsFilesItsOutputsMustNotReplace() {
+        List<List<java.nio.file.Path>> seen = new java.util.ArrayList<>();
+        shelf.add(new Command() {
+            public String name() {
+                return "export";
+            }
+
+            public String summary() {
+                return "";
+            }
+
+            public String usage() {
+                return "";
+            }
+
+            public int run(List<String> args, lamella.api.command.CommandIO io) {
+                seen.add(io.runtimeInputs());
+                return 0;
+            }
+        });
+        java.nio.file.Path library = java.nio.file.Path.of("/srv/lab/materials/films.json");
+        Dispatch guarded = new Dispatch(shelf, Duration.ofSeconds(5), Duration.ofMillis(50), false, List::of,
+                () -> List.of(() -> List.of(library)));
+        assertEquals(0, guarded.run(List.of("export"), capture.io));
+        assertEquals(List.of(List.of(library)), seen);
     }
 
     @Test

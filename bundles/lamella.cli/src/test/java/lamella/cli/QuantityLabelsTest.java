@@ -42,7 +42,8 @@ class QuantityLabelsTest {
         String table = FitSummary.format(outcome());
         assertTrue(table.contains("sapphire.k_through_w_mk (isotropic Λ)"), table);
         assertTrue(table.contains("transducer.k_w_mk (isotropic Λ) ± 9"), table);
-        JsonNode json = new ObjectMapper().readTree(FitResultJson.format(Path.of("case.json"), outcome()));
+        JsonNode json = new ObjectMapper().readTree(FitResultJson.format(new lamella.api.CaseDocument(
+                Path.of("case.json"), null, null, null, null, java.util.Map.of()), outcome()));
         assertEquals("sapphire.k_through_w_mk", json.at("/parameters/0/parameter").asText());
         assertEquals("isotropic Λ", json.at("/parameters/0/quantity").asText());
         assertTrue(json.at("/parameters/1/quantity").isMissingNode());

@@ -5,8 +5,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import lamella.api.command.RuntimeInputs;
+import lamella.api.command.StartupNotice;
 import lamella.api.material.LibraryTier;
-import lamella.api.material.MaterialLibrary;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.ServiceRegistration;
 import org.osgi.service.component.annotations.Activate;
@@ -15,8 +16,9 @@ import org.osgi.service.component.annotations.Deactivate;
 
 /**
  * The facility and user libraries named by the runtime's configuration, each offered as a {@link MaterialLibrary} at
- * start and read once, when first asked for. A folder that is named but missing is offered as an empty library with a finding, so the
- * problem shows wherever libraries are listed instead of disappearing.
+ * start and read once, when first asked for. A folder that is named but missing is offered as an empty library with a
+ * finding, so the problem shows wherever libraries are listed instead of disappearing, and a {@link StartupNotice}
+ * has every command mention a configured library that is missing or has errors.
  */
 @Component(immediate = true, service = {})
 public final class ConfiguredLibraries {
@@ -27,23 +29,31 @@ public final class ConfiguredLibraries {
     static final String DEFAULT_USER_FOLDER = ".lamella/materials";
     static final String WORKING_DIRECTORY = "lamella.cwd";
 
-    private final List<ServiceRegistration<MaterialLibrary>> registrations = new ArrayList<>();
+    private final List<ServiceRegistration<?>> registrations = new ArrayList<>();
+    private final LibraryNotices notices = new LibraryNotices();
 
     @Activate
     void activate(BundleContext context) {
         Path base = Path.of(Optional.ofNullable(context.getProperty(WORKING_DIRECTORY))
                 .orElse(System.getProperty("user.dir")));
-        folder(context.getProperty(FACILITY), base).ifPresent(f -> registrations.add(LibraryExtender.register(context,
-                LibraryTier.FACILITY, () -> LibraryFolder.read(f, LibraryTier.FACILITY))));
-        userFolder(context.getProperty(USER), base, Path.of(System.getProperty("user.home"))).ifPresent(f ->
-                registrations.add(LibraryExtender.register(context, LibraryTier.USER,
-                        () -> LibraryFolder.read(f, LibraryTier.USER))));
+        folder(context.getProperty(FACILITY), base).ifPresent(f -> offer(context, LibraryTier.FACILITY, f));
+        userFolder(context.getProperty(USER), base, Path.of(System.getProperty("user.home")))
+                .ifPresent(f -> offer(context, LibraryTier.USER, f));
+        registrations.add(context.registerService(new String[] {StartupNotice.class.getName(),
+                RuntimeInputs.class.getName()}, notices, null));
+    }
+
+    private void offer(BundleContext context, LibraryTier tier, Path folder) {
+        DeferredLibrary library = new DeferredLibrary(() -> LibraryFolder.read(folder, tier));
+        registrations.add(LibraryExtender.register(context, tier, library));
+        notices.add(tier, folder, library);
     }
 
     @Deactivate
     void deactivate() {
         registrations.forEach(ServiceRegistration::unregister);
         registrations.clear();
+        notices.clear();
     }
 
     /** A configured folder; empty when the setting is absent or blank. Relative paths are the user's. */

@@ -64,9 +64,14 @@ public final class LibraryExtender {
     /** Registers a library that {@code reader} reads when the library is first asked for. */
     static ServiceRegistration<MaterialLibrary> register(BundleContext context, LibraryTier tier,
                                                          Supplier<ReadLibrary> reader) {
+        return register(context, tier, new DeferredLibrary(reader));
+    }
+
+    static ServiceRegistration<MaterialLibrary> register(BundleContext context, LibraryTier tier,
+                                                         DeferredLibrary library) {
         Dictionary<String, Object> properties = new Hashtable<>();
         properties.put(LIBRARY_TIER, tier.label());
-        return context.registerService(MaterialLibrary.class, new DeferredLibrary(reader), properties);
+        return context.registerService(MaterialLibrary.class, library, properties);
     }
 
     /** Lamella's own library bundle is the shipped tier; a lab's data bundle ranks above it. */

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 import lamella.api.AtomicText;
 import lamella.api.InputException;
+import lamella.api.OwnInputs;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.material.LibraryTier;
@@ -170,6 +171,11 @@ public final class MaterialsCommand implements Command {
             return OK;
         }
         Path target = io.resolve(out);
+        Path clash = OwnInputs.clash(target, libraryFiles(io));
+        if (clash != null) {
+            io.err().println(OwnInputs.message("materials export", target, clash));
+            return BAD_INPUT;
+        }
         try {
             AtomicText.write(target, json);
         } catch (IOException e) {
@@ -178,6 +184,18 @@ public final class MaterialsCommand implements Command {
         }
         io.err().println("wrote " + m.label() + " to " + target);
         return OK;
+    }
+
+    /** Every file of the live folder libraries, and the runtime's other inputs: what an export must not replace. */
+    private List<Path> libraryFiles(CommandIO io) {
+        List<Path> files = new java.util.ArrayList<>(io.runtimeInputs());
+        for (MaterialLibrary l : libraries) {
+            LibraryTier tier = l.info().tier();
+            if (tier == LibraryTier.FACILITY || tier == LibraryTier.USER) {
+                files.addAll(OwnInputs.ofLibraryFolder(Path.of(l.info().location())));
+            }
+        }
+        return files;
     }
 
     private int usageError(CommandIO io, String problem) {

@@ -184,6 +184,45 @@ class MaterialsCommandTest {
     }
 
     @Test
+    void exportNeverReplacesAFileOfALiveLibraryHoweverItIsSpelled() throws Exception {
+        Path lib = Folders.library(dir.resolve("lab"), "lab", "Lab library");
+        Path entries = Folders.file(lib, "films.json", entries(entry("lab-film", 3.0)));
+        MaterialsCommand own = new MaterialsCommand();
+        own.addLibrary(LibraryFolder.read(Folders.SHIPPED, LibraryTier.SHIPPED));
+        own.addLibrary(LibraryFolder.read(lib, LibraryTier.USER));
+        Files.createDirectories(dir.resolve("sub"));
+        Path link = Files.createSymbolicLink(dir.resolve("sub/link.json"), entries);
+        Path hard = Files.createLink(dir.resolve("sub/hard.json"), lib.resolve("library.json"));
+        String before = Files.readString(entries);
+        String head = Files.readString(lib.resolve("library.json"));
+        for (String[] c : List.of(new String[] {"lab/films.json", entries.toString()},
+                new String[] {"./lab/films.json", entries.toString()},
+                new String[] {"sub/../lab/films.json", entries.toString()},
+                new String[] {"sub/link.json", entries.toString()},
+                new String[] {"sub/hard.json", lib.resolve("library.json").toString()})) {
+            ByteArrayOutputStream out = new ByteArrayOutputStream();
+            ByteArrayOutputStream err = new ByteArrayOutputStream();
+            int status = own.run(List.of("export", "silicon", "--out", c[0]), new CommandIO(
+                    new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true,
+                    StandardCharsets.UTF_8), dir));
+            String e = err.toString(StandardCharsets.UTF_8);
+            assertEquals(Command.BAD_INPUT, status, c[0] + ": " + e);
+            assertTrue(e.startsWith("lamella materials export: --out ") && e.contains(" would overwrite its own input "
+                    + c[1] + "; nothing was written"), c[0] + ": " + e);
+        }
+        assertEquals(before, Files.readString(entries));
+        assertEquals(head, Files.readString(lib.resolve("library.json")));
+
+        Path configured = Folders.file(Files.createDirectories(dir.resolve("facility")), "films.json", "{}");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int status = own.run(List.of("export", "silicon", "--out", "facility/./films.json"), new CommandIO(
+                new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8), dir, List.of(configured)));
+        assertEquals(Command.BAD_INPUT, status, "a file of a configured library, even one that did not read");
+        assertEquals("{}", Files.readString(configured));
+    }
+
+    @Test
     void usageErrorsAreBadInput() {
         for (String[] args : List.of(new String[] {}, new String[] {"lst"}, new String[] {"show"},
                 new String[] {"check"}, new String[] {"check", "x", "--tier", "shipping"},

@@ -27,6 +27,10 @@ import org.osgi.service.component.annotations.Component;
 public final class FitReportWriter implements ReportWriter {
 
     static final String PAGE = "index.html";
+    /** Every name {@link #write} can give a file: the fixed ones and those numbered per dataset or table. */
+    private static final java.util.regex.Pattern NAMES = java.util.regex.Pattern.compile(
+            "index\\.html|result\\.json|(parameters|correlation|budget|montecarlo)\\.csv|budget\\.(png|svg)"
+            + "|dataset-\\d+-fit\\.(csv|png|svg)|dataset-\\d+-residuals\\.(png|svg)|sensitivity-\\d+\\.(png|svg)");
 
     private final String version;
     private final Clock clock;
@@ -103,6 +107,11 @@ public final class FitReportWriter implements ReportWriter {
                 contents, stamp));
         files.writeInto(folder);
         return folder.resolve(PAGE);
+    }
+
+    @Override
+    public boolean writes(String fileName) {
+        return NAMES.matcher(fileName).matches();
     }
 
     private static void describe(Map<String, String> contents, String base, String what) {

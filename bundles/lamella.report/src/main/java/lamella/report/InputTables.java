@@ -10,6 +10,9 @@ import lamella.api.CaseDocument;
 import lamella.api.Layer;
 import lamella.api.ParameterRef;
 import lamella.api.Units;
+import lamella.api.ValueOrigin;
+import lamella.api.material.Material;
+import lamella.api.material.PropertyValue;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FittedParameter;
 
@@ -53,6 +56,7 @@ final class InputTables {
                 .raw("<span class=\"free-key\">Shaded</span>")
                 .text(" values are fitted; the case file's starting value is shown here, the result above.")
                 .raw("</p>\n");
+        libraryValues(h, doc);
         if (doc.states("geometry")) {
             block(h, "Geometry", doc.geometry());
         }
@@ -62,6 +66,30 @@ final class InputTables {
         if (doc.root().get("fit") instanceof Block fit) {
             block(h, "Fit settings", fit);
         }
+    }
+
+    /** Every layer value a material library gave: which library and tier, which entry and version, which source. */
+    private static void libraryValues(Html h, CaseDocument doc) {
+        List<ValueOrigin> values = doc.libraryValues();
+        h.element("h3", "Values from material libraries");
+        if (values.isEmpty()) {
+            h.element("p", "note", "No layer value came from a material library.");
+            return;
+        }
+        h.raw("<table class=\"inputs keys\"><thead>");
+        h.headRow(List.of("layer", "key", "value", "unit", "library (tier)", "entry, version", "read from", "source",
+                "at", "relative σ"));
+        h.raw("</thead><tbody>\n");
+        for (ValueOrigin v : values) {
+            PropertyValue p = v.library().orElseThrow();
+            Material m = p.material();
+            h.row(List.of(v.layer(), v.key() + (v.how().isEmpty() ? "" : " (" + v.how() + ")"), Numbers.plain(v.value()),
+                    unit(v.key()), m.library().label() + ", " + m.library().id(),
+                    m.id() + " v" + m.curation().version(), m.location(), p.sources(),
+                    java.math.BigDecimal.valueOf(p.temperatureK()).stripTrailingZeros().toPlainString() + " K",
+                    p.uncertaintyRel().isPresent() ? Numbers.percent(p.uncertaintyRel().getAsDouble()) + " %" : "—"));
+        }
+        h.raw("</tbody></table>\n");
     }
 
     private static void cell(Html h, Set<String> free, Layer l, String text, String... keys) {

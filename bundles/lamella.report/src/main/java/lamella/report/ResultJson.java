@@ -11,6 +11,7 @@ import java.util.Map;
 import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.Layer;
+import lamella.api.ValueOrigin;
 import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
@@ -68,6 +69,10 @@ final class ResultJson {
             number(n, "conductance_below_w_m2k", l.conductanceBelow());
         }
         stack.put("bottom", doc.stack().bottom().caseName());
+        ArrayNode library = c.putArray("library_values");
+        for (ValueOrigin v : doc.libraryValues()) {
+            library.add(MAPPER.valueToTree(v.provenance()));
+        }
         c.set("geometry", block(doc.geometry()));
         c.set("measurement", block(doc.measurement()));
         if (doc.root().get("fit") instanceof Block fit) {

@@ -57,6 +57,17 @@ class FitReportWriterTest {
     }
 
     @Test
+    void theWriterNamesEveryFileItWritesSoThatCommandsCanGuardTheirInputs() throws IOException {
+        FitReportWriter w = writer(WRITTEN);
+        for (String name : names(report)) {
+            assertTrue(w.writes(name), name);
+        }
+        for (String other : List.of("case.json", "tdtr-9.8mhz.csv", "dataset-x-fit.csv", "index.htm", "budget.json")) {
+            assertFalse(w.writes(other), other);
+        }
+    }
+
+    @Test
     void theFolderIsCreatedAndHoldsEveryFileAndNothingElse() throws IOException {
         assertEquals(report.resolve("index.html"), page);
         assertEquals(new TreeSet<>(EXPECTED_FILES), names(report));

@@ -99,9 +99,57 @@ class MaterialLibrariesIT {
 
     @Test
     void aConfiguredFolderThatIsMissingIsNamedNotIgnored() throws Exception {
-        Run run = launch(List.of("-Dlamella.materials.facility=" + userDir.resolve("nowhere")), "materials", "list");
+        Path nowhere = userDir.resolve("nowhere");
+        Run run = launch(List.of("-Dlamella.materials.facility=" + nowhere), "materials", "list");
         assertEquals(0, run.status(), run.err());
         assertTrue(run.out().contains("the facility library folder does not exist"), run.out());
+
+        Run plugins = launch(List.of("-Dlamella.materials.facility=" + nowhere), "plugins");
+        assertEquals(0, plugins.status(), plugins.err());
+        List<String> lines = plugins.err().lines().filter(l -> l.contains("material library")).toList();
+        assertEquals(List.of("lamella: the facility material library " + nowhere + " cannot be used, so none of its"
+                + " values are: the facility library folder does not exist; details: lamella materials check "
+                + nowhere + " --tier facility"), lines, "once, by a command that names no material: " + plugins.err());
+    }
+
+    @Test
+    void aFitItsReportAndTheSensitivitiesNameEveryLibraryValueTheyUsed() throws Exception {
+        Path facility = Path.of("../../demo-data/materials/fenwick-hall").toAbsolutePath().normalize();
+        List<String> options = List.of("-Dlamella.materials.facility=" + facility);
+        Path work = Files.createDirectories(userDir.resolve("provenance"));
+        String stack = "\"stack\": {\"layers\": [{\"name\": \"transducer\", \"material\": \"al\", \"thickness_m\":"
+                + " 8e-8, \"conductance_below_w_m2k\": 1e8}, {\"name\": \"substrate\", \"material\": \"sapphire\","
+                + " \"c_axis\": \"normal\"}]}, \"geometry\": {\"type\": \"gaussian\", \"pump_radius_m\": 5e-6,"
+                + " \"probe_radius_m\": 5e-6}, \"measurement\": {\"type\": \"fdtr\", \"frequencies_hz\": [1e5, 3e5,"
+                + " 1e6, 3e6, 1e7]}";
+        Files.writeString(work.resolve("sim.json"), "{" + stack + "}");
+        Run simulate = launch(options, "simulate", work.resolve("sim.json").toString(), "--out",
+                work.resolve("fdtr.csv").toString());
+        assertEquals(0, simulate.status(), simulate.err());
+        Path fit = Files.writeString(work.resolve("fit.json"), "{" + stack + ", \"fit\": {\"datasets\": [{\"data\":"
+                + " \"fdtr.csv\"}], \"free\": [{\"layer\": \"transducer\", \"property\": \"conductance_below_w_m2k\","
+                + " \"initial\": 5e7}]}}");
+
+        Run result = launch(options, "fit", fit.toString(), "--out", work.resolve("result.json").toString());
+        assertEquals(0, result.status(), result.err());
+        String json = Files.readString(work.resolve("result.json"));
+        for (String s : List.of("\"library_values\"", "\"path\" : \"stack.layers[0].k_through_w_mk\"",
+                "\"tier\" : \"facility\"", "\"id\" : \"fenwick-hall\"", "\"id\" : \"aluminium\"",
+                "\"version\" : 3", "\"tier\" : \"shipped\"", "\"id\" : \"sapphire\"", "\"source\" : \"Invented demo value")) {
+            assertTrue(json.contains(s), "expected " + s + " in " + json);
+        }
+
+        Run report = launch(options, "report", fit.toString(), "--out", work.resolve("report").toString());
+        assertEquals(0, report.status(), report.err());
+        assertTrue(Files.readString(work.resolve("report/result.json")).contains("\"library_values\""));
+        String page = Files.readString(work.resolve("report/index.html"));
+        assertTrue(page.contains("Values from material libraries") && page.contains("aluminium v3")
+                && page.contains("Fenwick Hall thermal lab films (facility), fenwick-hall"), page);
+
+        Run sensitivity = launch(options, "sensitivity", fit.toString(), "--dataset", "0");
+        assertEquals(0, sensitivity.status(), sensitivity.err());
+        assertTrue(sensitivity.err().contains("library Fenwick Hall thermal lab films (facility), entry aluminium v3,"
+                + " Invented demo value"), sensitivity.err());
     }
 
     private static Run launch(List<String> javaOptions, String... args) throws Exception {

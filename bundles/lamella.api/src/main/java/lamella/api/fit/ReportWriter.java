@@ -20,4 +20,12 @@ public interface ReportWriter {
      */
     Path write(CaseDocument doc, FitOutcome outcome, List<SensitivityTable> sensitivities, Path folder)
             throws IOException;
+
+    /**
+     * Whether a report may write a file of this name into its folder, so that a command can refuse a folder holding
+     * one of its own inputs under such a name before it computes anything. The default assumes every name.
+     */
+    default boolean writes(String fileName) {
+        return true;
+    }
 }

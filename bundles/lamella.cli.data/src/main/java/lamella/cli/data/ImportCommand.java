@@ -115,8 +115,11 @@ public final class ImportCommand implements Command {
         }
         Path file = io.resolve(request.file());
         if (request.out() != null) {
-            List<Path> inputs = request.reference() == null ? List.of(file)
-                    : List.of(file, io.resolve(request.reference()));
+            List<Path> inputs = new java.util.ArrayList<>(List.of(file));
+            if (request.reference() != null) {
+                inputs.add(io.resolve(request.reference()));
+            }
+            inputs.addAll(io.runtimeInputs());
             Path clash = lamella.api.OwnInputs.clash(io.resolve(request.out()), inputs);
             if (clash != null) {
                 io.err().println(lamella.api.OwnInputs.message("import", io.resolve(request.out()), clash));

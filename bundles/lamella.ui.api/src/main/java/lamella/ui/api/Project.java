@@ -549,7 +549,8 @@ public final class Project {
             Files.writeString(tmp, JSON.writeValueAsString(copy), StandardCharsets.UTF_8);
             CaseDocument d = reader.read(tmp);
             Path asFile = file != null ? file : folder.resolve("untitled.json");
-            current = new CaseDocument(asFile, d.stack(), d.geometry(), d.measurement(), d.root(), d.lines());
+            current = new CaseDocument(asFile, d.stack(), d.geometry(), d.measurement(), d.root(), d.lines(),
+                    d.origins());
             problem = null;
         } catch (InputException e) {
             problem = new InputException(file, e.path(), e.line(), e.problem());
