@@ -68,7 +68,7 @@ public final class PlanCommand implements Command {
         }
         Path casePath = io.resolve(o.positional());
         Path out = o.has("--out") ? io.resolve(o.value("--out")) : null;
-        String refused = OwnInputs.refusal("plan", out, casePath);
+        String refused = OwnInputs.refusal("plan", out, casePath, io.runtimeInputs());
         if (refused != null) {
             io.err().println(refused);
             return BAD_INPUT;

@@ -143,6 +143,11 @@ class OwnOutputTest {
     }
 
     @Test
+    void plan() throws Exception {
+        everyInputOfAFileCommand(new PlanCommand(), "plan");
+    }
+
+    @Test
     void report() throws Exception {
         ReportCommand c = with(new ReportCommand(), "writer", new NamesOnly());
         for (String out : spellings(caseFile, "report-case")) {

@@ -98,6 +98,28 @@ class MaterialLibrariesIT {
     }
 
     @Test
+    void noCommandReplacesAFileOfTheConfiguredLibrary() throws Exception {
+        Path facility = userDir.resolve("own-library");
+        Files.createDirectories(facility);
+        Path head = Files.writeString(facility.resolve("library.json"), "{\"library_format\": 1, \"id\": \"own\","
+                + " \"name\": \"Own library (invented)\"}\n");
+        Path c = Files.writeString(userDir.resolve("plain.json"), "{\"stack\": {\"layers\": [{\"name\": \"s\","
+                + " \"k_through_w_mk\": 1.4, \"heat_capacity_j_m3k\": 1.6e6}]}, \"geometry\": {\"type\":"
+                + " \"gaussian\", \"pump_radius_m\": 5e-6, \"probe_radius_m\": 5e-6}, \"measurement\": {\"type\":"
+                + " \"sstr\"}}");
+        List<String> options = List.of("-Dlamella.materials.facility=" + facility);
+        String before = Files.readString(head);
+        Run simulate = launch(options, "simulate", c.toString(), "--out", facility.resolve("./library.json").toString());
+        assertEquals(2, simulate.status(), simulate.err());
+        assertTrue(simulate.err().contains("would overwrite its own input " + head), simulate.err());
+        Run export = launch(options, "materials", "export", "silicon", "--out",
+                facility.resolve("../own-library/library.json").toString());
+        assertEquals(2, export.status(), export.err());
+        assertTrue(export.err().contains("would overwrite its own input " + head), export.err());
+        assertEquals(before, Files.readString(head), "the library file is untouched");
+    }
+
+    @Test
     void aConfiguredFolderThatIsMissingIsNamedNotIgnored() throws Exception {
         Path nowhere = userDir.resolve("nowhere");
         Run run = launch(List.of("-Dlamella.materials.facility=" + nowhere), "materials", "list");
