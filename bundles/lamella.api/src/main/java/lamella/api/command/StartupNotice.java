@@ -1,12 +1,14 @@
 package lamella.api.command;
 
 import java.util.List;
+import org.osgi.annotation.versioning.ConsumerType;
 
 /**
  * A problem of the set-up that every command should mention as it starts, because it would otherwise go unnoticed
  * until a result is wrong or missing (a configured material library that is missing or broken, say). Offered as a
  * service; the dispatcher prints each line once on standard error before it runs a command.
  */
+@ConsumerType
 public interface StartupNotice {
 
     /**
