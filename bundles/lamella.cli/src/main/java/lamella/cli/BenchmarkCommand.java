@@ -22,6 +22,7 @@ import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitService;
+import lamella.api.plan.PlanService;
 import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -49,6 +50,9 @@ public final class BenchmarkCommand implements Command {
 
     @Reference
     private FitService fitter;
+
+    @Reference
+    private PlanService planner;
 
     /** With the service's reference, so that a failure can name the bundle that registered it. */
     @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,
@@ -84,7 +88,7 @@ public final class BenchmarkCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella benchmark
+                usage: lamella benchmark [plan]
 
                 Times, on the calling thread, an FDTR curve of 200 modulation frequencies (1 kHz-100 MHz) and a
                 TDTR curve of 50 delays (100 ps-5 ns, 9 MHz modulation, 76 MHz repetition) for a metal transducer
@@ -93,16 +97,24 @@ public final class BenchmarkCommand implements Command {
                 FDTR fit of 30 points, a joint three-parameter fit of TDTR at two modulation frequencies, and 1000
                 Monte Carlo refits of the FDTR fit, on all cores. Also times 200 frequencies (1 kHz-10 MHz) on a
                 ring of 1 mm radius, thin and 2 um wide, read by a 3 um probe at its centre (median of 5 runs).
+                Last, grids of 400 experiment plans (TDTR and FDTR, 3 free and 4 uncertain inputs) on all cores;
+                "lamella benchmark plan" times only those.
                 """.formatted(RUNS, WARM_UP);
     }
 
     @Override
     public int run(List<String> args, CommandIO io) {
-        if (!args.isEmpty()) {
-            io.err().println("lamella benchmark: takes no arguments");
+        boolean plansOnly = args.equals(List.of("plan"));
+        if (!args.isEmpty() && !plansOnly) {
+            io.err().println("lamella benchmark: takes no arguments, or \"plan\" for the experiment plans alone");
             return BAD_INPUT;
         }
+        int threads = Math.max(1, Runtime.getRuntime().availableProcessors());
         try {
+            if (plansOnly) {
+                PlanBenchmark.run(io, caseFormat, planner, threads);
+                return OK;
+            }
             Stack stack = new Stack(List.of(
                     Layer.isotropicInPlane("transducer", 9e-8, 200, 200, 2.45e6).withConductanceBelow(1.2e8),
                     Layer.isotropicInPlane("film", 3.5e-7, 1.4, 1.4, 1.65e6),
@@ -117,8 +129,8 @@ public final class BenchmarkCommand implements Command {
             report(io, "FDTR curve, 200 frequencies, 3 layers", models.catalog(kernels).simulation(stack, beams, fdtr));
             report(io, "TDTR curve, 50 delays, 3 layers", models.catalog(kernels).simulation(stack, beams, tdtr));
             rings(io);
-            FitBenchmark.run(io, caseFormat, fitter, models.catalog(kernels),
-                    Math.max(1, Runtime.getRuntime().availableProcessors()));
+            FitBenchmark.run(io, caseFormat, fitter, models.catalog(kernels), threads);
+            PlanBenchmark.run(io, caseFormat, planner, threads);
             return OK;
         } catch (IOException e) {
             io.err().println("lamella benchmark: cannot write its temporary data: " + e.getMessage());
