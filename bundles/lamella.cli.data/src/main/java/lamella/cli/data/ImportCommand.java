@@ -14,6 +14,7 @@ import lamella.api.command.CommandIO;
 import lamella.api.data.DataImporter;
 import lamella.api.data.DatasetSettings;
 import lamella.api.data.Dataset;
+import lamella.api.data.ImporterProfiles;
 import lamella.api.data.SignalNames;
 import lamella.api.data.StatedSettings;
 import lamella.conditioning.ConditionedTable;
@@ -23,6 +24,7 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
+import org.osgi.service.component.annotations.ReferencePolicyOption;
 
 /**
  * {@code lamella import FILE …}: reads an instrument file with the best live importer (or the one named),
@@ -34,6 +36,19 @@ public final class ImportCommand implements Command {
     private final LiveImporters importers = new LiveImporters();
     private final List<Technique> techniques = new CopyOnWriteArrayList<>();
     private final List<HeatingGeometry> geometries = new CopyOnWriteArrayList<>();
+    private volatile ImporterProfiles profiles;
+
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY, unbind = "removeProfiles")
+    void addProfiles(ImporterProfiles p) {
+        profiles = p;
+    }
+
+    void removeProfiles(ImporterProfiles p) {
+        if (profiles == p) {
+            profiles = null;
+        }
+    }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeImporter")
@@ -81,6 +96,7 @@ public final class ImportCommand implements Command {
                 usage: lamella import FILE [--format ID] [--out DATA.csv] [--exclude FROM:TO]...
                                       [--reference FILE] [--detection-phase DEG | --phase-as-recorded
                                       | --step-window S] [--outlier-limit N]
+                                      [--column 'HEADER=MEANING[:UNIT]']... [--write-profile PROFILE.json]
 
                 Reads FILE with the live importer most sure it can (lamella formats lists them; --format ID
                 chooses one), averages its scans, marks outliers and writes one row per x: the x column
@@ -98,6 +114,12 @@ public final class ImportCommand implements Command {
                                           change in out_of_phase the found phase removes (default 2e-11 s)
                   --outlier-limit N       mark rows further than N robust standard deviations from the running
                                           median of their neighbours (default 5; 0 marks none)
+                  --column 'H=MEANING[:UNIT]'
+                                          for a one-off file: the column whose header is H holds MEANING (frequency,
+                                          delay, in_phase, out_of_phase, amplitude, phase, ratio, sigma_<signal>,
+                                          or ignore), in UNIT if given, else the unit in brackets in H; repeatable
+                  --write-profile FILE    also write the importer profile these mappings make of this file, to
+                                          edit and publish (lamella formats check FILE checks it)
 
                 Bad input (an unreadable, binary, truncated or inconsistent file, a bad option) is reported with
                 the file and line; exit status 2, and no output is written.
@@ -126,11 +148,33 @@ public final class ImportCommand implements Command {
                 return BAD_INPUT;
             }
         }
+        if (request.writeProfile() != null) {
+            List<Path> inputs = request.reference() == null ? List.of(file)
+                    : List.of(file, io.resolve(request.reference()));
+            Path clash = lamella.api.OwnInputs.clash(io.resolve(request.writeProfile()), inputs);
+            if (clash != null) {
+                io.err().println("lamella import: --write-profile " + io.resolve(request.writeProfile())
+                        + " would overwrite its own input " + clash + "; nothing was written (choose another file)");
+                return BAD_INPUT;
+            }
+        }
+        ImporterProfiles.Draft draft = null;
         ConditionedTable table;
         DataImporter importer;
         Dataset data;
         try {
-            importer = importers.choose(file, request.format());
+            if (!request.columns().isEmpty() || request.writeProfile() != null) {
+                ImporterProfiles p = profiles;
+                if (p == null) {
+                    io.err().println("lamella import: --column and --write-profile need the importer-profile"
+                            + " bundle, which is not live");
+                    return FAILED;
+                }
+                draft = p.draft(file, request.columns());
+                importer = draft.importer();
+            } else {
+                importer = importers.choose(file, request.format());
+            }
             data = read(importer, file);
             if (request.phaseRequested() && data.xColumn().equals(SignalNames.FREQUENCY_HZ)) {
                 throw new InputException(file, null, -1, "--detection-phase, --phase-as-recorded and --step-window"
@@ -151,6 +195,17 @@ public final class ImportCommand implements Command {
             return FAILED;
         }
         String csv = DataCsv.format(table);
+        if (request.writeProfile() != null) {
+            Path profileOut = io.resolve(request.writeProfile());
+            try {
+                AtomicText.write(profileOut, draft.profileText());
+            } catch (IOException e) {
+                io.err().println("lamella import: cannot write " + profileOut + ": " + e.getMessage());
+                return FAILED;
+            }
+            io.err().println("wrote the starting profile '" + importer.id() + "' to " + profileOut
+                    + " (edit it, then lamella formats check " + profileOut + ")");
+        }
         if (request.out() == null) {
             io.out().print(csv);
             io.out().flush();

@@ -19,9 +19,12 @@ import lamella.conditioning.XRange;
  * @param phase          the TDTR detection-phase correction
  * @param phaseRequested whether the user set a phase option (an error for frequency data)
  * @param outlierLimit   the outlier threshold, 0 for none
+ * @param columns        one-off column meanings, {@code HEADER=MEANING[:UNIT]}
+ * @param writeProfile   where to write the starting profile of this file, or null
  */
 record ImportRequest(String file, String format, String out, String reference, List<XRange> exclusions,
-                     PhaseCorrection phase, boolean phaseRequested, double outlierLimit) {
+                     PhaseCorrection phase, boolean phaseRequested, double outlierLimit, List<String> columns,
+                     String writeProfile) {
 
     static ImportRequest parse(List<String> args) throws InputException {
         String file = null;
@@ -34,12 +37,16 @@ record ImportRequest(String file, String format, String out, String reference, L
         double window = PhaseCorrection.DEFAULT_STEP_WINDOW_S;
         boolean windowSet = false;
         double outlierLimit = ConditioningOptions.DEFAULT_OUTLIER_LIMIT;
+        List<String> columns = new ArrayList<>();
+        String writeProfile = null;
         for (int i = 0; i < args.size(); i++) {
             String a = args.get(i);
             switch (a) {
                 case "--format" -> format = value(args, ++i, a);
                 case "--out" -> out = value(args, ++i, a);
                 case "--reference" -> reference = value(args, ++i, a);
+                case "--column" -> columns.add(value(args, ++i, a));
+                case "--write-profile" -> writeProfile = value(args, ++i, a);
                 case "--exclude" -> exclusions.add(XRange.parse(value(args, ++i, a)));
                 case "--detection-phase" -> fixed = number(value(args, ++i, a), a, false);
                 case "--phase-as-recorded" -> asRecorded = true;
@@ -72,10 +79,14 @@ record ImportRequest(String file, String format, String out, String reference, L
             throw InputException.at("--detection-phase", "choose one of --detection-phase, --phase-as-recorded and"
                     + " --step-window");
         }
+        if (format != null && (!columns.isEmpty() || writeProfile != null)) {
+            throw InputException.at("--format", "--column and --write-profile make a profile of this file; they do"
+                    + " not go with --format");
+        }
         PhaseCorrection phase = fixed != null ? PhaseCorrection.fixed(fixed)
                 : asRecorded ? PhaseCorrection.asRecorded() : PhaseCorrection.fromStep(window);
         return new ImportRequest(file, format, out, reference, exclusions, phase,
-                fixed != null || asRecorded || windowSet, outlierLimit);
+                fixed != null || asRecorded || windowSet, outlierLimit, List.copyOf(columns), writeProfile);
     }
 
     private static String value(List<String> args, int i, String option) throws InputException {

@@ -73,9 +73,9 @@ class ImportCommandTest {
     void formatsListsTheLiveImporters() {
         Run run = Runs.run(Runs.formatsCommand(), dir);
         assertEquals(0, run.status());
-        assertEquals(List.of("format            reads", "delimited         Text tables separated by comma, tab,"
-                + " semicolon or spaces, with units in the header.", "lamella-exchange  Lamella exchange format,"
-                + " version 1: metadata, lock-in channels with standard deviations, scans."),
+        assertEquals(List.of("format            tier      reads", "delimited         built-in  Text tables separated"
+                + " by comma, tab, semicolon or spaces, with units in the header.", "lamella-exchange  built-in  Lamella"
+                + " exchange format, version 1: metadata, lock-in channels with standard deviations, scans."),
                 run.out().lines().toList());
     }
 

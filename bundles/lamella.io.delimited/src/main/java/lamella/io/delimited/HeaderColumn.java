@@ -78,7 +78,8 @@ record HeaderColumn(String name, boolean sigma, double factor) {
             throw new IllegalArgumentException("'" + cell.strip() + "' names no column Lamella knows; expected an x"
                     + " column (f, frequency, delay, time), a lock-in channel (X, Y, R, phase, in-phase,"
                     + " out-of-phase, ratio) or a standard deviation of one (sigma X, sd phase), each with its unit"
-                    + " in brackets where it has one, such as 'f (kHz)' or 'delay [ps]'");
+                    + " in brackets where it has one, such as 'f (kHz)' or 'delay [ps]'; or say what it holds:"
+                    + " lamella import FILE --column '" + cell.strip() + "=MEANING[:UNIT]'");
         }
         if (sigma && SignalNames.X_COLUMNS.contains(meaning.name())) {
             throw new IllegalArgumentException("'" + cell.strip() + "': standard deviations of x are not read");
