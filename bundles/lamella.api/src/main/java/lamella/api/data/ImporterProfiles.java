@@ -3,6 +3,7 @@ package lamella.api.data;
 import java.nio.file.Path;
 import java.util.List;
 import lamella.api.InputException;
+import org.osgi.annotation.versioning.ProviderType;
 
 /**
  * Importer profiles: instrument file formats described in a small declarative file that a facility writes, checks
@@ -10,6 +11,7 @@ import lamella.api.InputException;
  * checks profile folders before they are published, tries a profile on a sample file, and turns a one-off column
  * mapping into a starting profile.
  */
+@ProviderType
 public interface ImporterProfiles {
 
     /** The service property of a {@link DataImporter} that says where it comes from ({@code shipped}, …). */

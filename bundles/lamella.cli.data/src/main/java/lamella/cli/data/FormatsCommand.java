@@ -13,6 +13,8 @@ import lamella.api.data.Dataset;
 import lamella.api.data.ImporterProfiles;
 import lamella.api.data.Scan;
 import lamella.api.data.StatedSettings;
+import org.osgi.framework.Bundle;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -32,9 +34,18 @@ public final class FormatsCommand implements Command {
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             unbind = "removeImporter")
-    void addImporter(DataImporter i, Map<String, Object> properties) {
-        Object tier = properties.get(ImporterProfiles.TIER_PROPERTY);
-        tiers.put(i, tier == null ? "built-in" : tier.toString());
+    void addImporter(ServiceReference<DataImporter> reference, DataImporter i) {
+        Object tier = reference.getProperty(ImporterProfiles.TIER_PROPERTY);
+        Bundle bundle = reference.getBundle();
+        String name = bundle == null ? null : bundle.getSymbolicName();
+        tiers.put(i, tier != null ? tier.toString()
+                : name == null || name.startsWith("lamella.") ? "built-in" : "bundle " + name);
+        importers.add(i);
+    }
+
+    /** For tests without a framework: an importer of Lamella's own (not a bind method: that takes the reference). */
+    void addBuiltIn(DataImporter i) {
+        tiers.put(i, "built-in");
         importers.add(i);
     }
 

@@ -40,7 +40,7 @@ final class Runs {
 
     static FormatsCommand formatsCommand() {
         FormatsCommand c = new FormatsCommand();
-        shipped().forEach(i -> c.addImporter(i, java.util.Map.of()));
+        shipped().forEach(c::addBuiltIn);
         return c;
     }
 
