@@ -13,6 +13,11 @@ final class Channels {
     final int[] lines;
     final Map<String, double[]> values = new LinkedHashMap<>();
     final Map<String, double[]> sigmas = new LinkedHashMap<>();
+    /**
+     * The covariance of in-phase and out-of-phase per row where they are correlated (both made from one amplitude and
+     * phase, or rotated), or null where they are independent.
+     */
+    double[] covariance;
 
     Channels(double[] x, int[] lines) {
         this.x = x;

@@ -5,7 +5,8 @@ import lamella.api.data.SignalNames;
 
 /**
  * The output columns derived from in-phase X and out-of-phase Y: ratio −X/Y (TDTR), amplitude √(X²+Y²) and phase
- * atan2(Y, X) in degrees, with standard deviations propagated to first order, X and Y independent.
+ * atan2(Y, X) in degrees, with standard deviations propagated to first order with the covariance of X and Y where
+ * they are correlated (JCGM 100:2008, eq. 13).
  */
 final class Derived {
 
@@ -25,6 +26,7 @@ final class Derived {
         double[] sx = c.sigmas.get(SignalNames.IN_PHASE);
         double[] sy = c.sigmas.get(SignalNames.OUT_OF_PHASE);
         boolean sigma = sx != null && sy != null;
+        double[] cov = c.covariance;
         double[] r = new double[n];
         double[] amplitude = new double[n];
         double[] phase = new double[n];
@@ -36,9 +38,15 @@ final class Derived {
             amplitude[i] = Math.hypot(x[i], y[i]);
             phase[i] = Math.toDegrees(Math.atan2(y[i], x[i]));
             if (sigma) {
-                sr[i] = Math.hypot(sx[i] / y[i], x[i] * sy[i] / (y[i] * y[i]));
-                sa[i] = Math.hypot(x[i] * sx[i], y[i] * sy[i]) / amplitude[i];
-                sp[i] = Math.toDegrees(Math.hypot(y[i] * sx[i], x[i] * sy[i]) / (amplitude[i] * amplitude[i]));
+                double vx = sx[i] * sx[i];
+                double vy = sy[i] * sy[i];
+                double cxy = cov == null ? 0.0 : cov[i];
+                double x2 = x[i] * x[i];
+                double y2 = y[i] * y[i];
+                double a2 = amplitude[i] * amplitude[i];
+                sr[i] = Math.sqrt(Math.max(0, vx / y2 + x2 * vy / (y2 * y2) - 2 * x[i] * cxy / (y2 * y[i])));
+                sa[i] = Math.sqrt(Math.max(0, x2 * vx + y2 * vy + 2 * x[i] * y[i] * cxy)) / amplitude[i];
+                sp[i] = Math.toDegrees(Math.sqrt(Math.max(0, y2 * vx + x2 * vy - 2 * x[i] * y[i] * cxy)) / a2);
             }
             if (referenceSigma != null) {
                 sp[i] = Math.hypot(sp[i], referenceSigma[i]);

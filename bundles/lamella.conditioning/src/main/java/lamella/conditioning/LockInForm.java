@@ -5,9 +5,11 @@ import lamella.api.data.SignalNames;
 
 /**
  * Brings a scan's lock-in channels to in-phase/out-of-phase form, where averaging and phase rotation are linear:
- * amplitude and phase become X = R cos θ, Y = R sin θ (standard deviations propagated to first order, the two
- * channels taken as independent); a phase recorded alone becomes a unit vector, so that its average is the circular
- * mean and no wrap at ±180° can corrupt it.
+ * amplitude and phase become X = R cos θ, Y = R sin θ, with their variances and their covariance to first order
+ * (X and Y made from the same R and θ are correlated; with R and θ independent, cov(X, Y) = cos θ sin θ (σ_R² −
+ * R² σ_θ²), JCGM 100:2008, the Guide to the expression of uncertainty in measurement, eq. 13), so that a phase's σ
+ * comes back unchanged; a phase recorded alone becomes a unit vector, so that its average is the circular mean and no
+ * wrap at ±180° can corrupt it.
  */
 final class LockInForm {
 
@@ -56,6 +58,7 @@ final class LockInForm {
         double[] y = new double[n];
         double[] sx = sigma ? new double[n] : null;
         double[] sy = sigma ? new double[n] : null;
+        double[] cov = sigma ? new double[n] : null;
         for (int i = 0; i < n; i++) {
             double a = unit ? 1.0 : r[i];
             double t = Math.toRadians(theta[i]);
@@ -68,9 +71,11 @@ final class LockInForm {
                 double dt = Math.toRadians(sTheta[i]);
                 sx[i] = Math.hypot(cos * da, a * sin * dt);
                 sy[i] = Math.hypot(sin * da, a * cos * dt);
+                cov[i] = cos * sin * (da * da - a * a * dt * dt);
             }
         }
         c.put(SignalNames.IN_PHASE, x, sx);
         c.put(SignalNames.OUT_OF_PHASE, y, sy);
+        c.covariance = cov;
     }
 }

@@ -58,7 +58,61 @@ final class ScanAverage {
             }
             mean.put(name, avg, sd);
         }
+        correlation(scans, mean);
         return mean;
+    }
+
+    /**
+     * The covariance of the mean in-phase and out-of-phase: their correlation coefficient times their standard
+     * deviations, the coefficient from the scans' own covariances where they have standard deviations (the
+     * measurement's model: a pair made from amplitude and phase is correlated, a pair recorded as X and Y is not), else
+     * from the scatter between scans. So the phase and amplitude derived from the mean keep honest σ.
+     */
+    private static void correlation(List<Channels> scans, Channels mean) {
+        double[] sx = mean.sigmas.get(lamella.api.data.SignalNames.IN_PHASE);
+        double[] sy = mean.sigmas.get(lamella.api.data.SignalNames.OUT_OF_PHASE);
+        if (sx == null || sy == null) {
+            return;
+        }
+        Channels first = scans.get(0);
+        boolean own = first.sigmas.containsKey(lamella.api.data.SignalNames.IN_PHASE)
+                && first.sigmas.containsKey(lamella.api.data.SignalNames.OUT_OF_PHASE);
+        double[] mx = mean.values.get(lamella.api.data.SignalNames.IN_PHASE);
+        double[] my = mean.values.get(lamella.api.data.SignalNames.OUT_OF_PHASE);
+        double[] cov = new double[mean.rows()];
+        boolean any = false;
+        for (int i = 0; i < cov.length; i++) {
+            double rho;
+            if (own) {
+                double c = 0;
+                double vx = 0;
+                double vy = 0;
+                for (Channels s : scans) {
+                    double a = s.sigmas.get(lamella.api.data.SignalNames.IN_PHASE)[i];
+                    double b = s.sigmas.get(lamella.api.data.SignalNames.OUT_OF_PHASE)[i];
+                    c += s.covariance == null ? 0.0 : s.covariance[i];
+                    vx += a * a;
+                    vy += b * b;
+                }
+                rho = vx > 0 && vy > 0 ? c / Math.sqrt(vx * vy) : 0.0;
+            } else {
+                double c = 0;
+                double vx = 0;
+                double vy = 0;
+                for (Channels s : scans) {
+                    double a = s.values.get(lamella.api.data.SignalNames.IN_PHASE)[i] - mx[i];
+                    double b = s.values.get(lamella.api.data.SignalNames.OUT_OF_PHASE)[i] - my[i];
+                    c += a * b;
+                    vx += a * a;
+                    vy += b * b;
+                }
+                rho = vx > 0 && vy > 0 ? c / Math.sqrt(vx * vy) : 0.0;
+            }
+            rho = Math.max(-1.0, Math.min(1.0, rho));
+            cov[i] = rho * sx[i] * sy[i];
+            any |= cov[i] != 0;
+        }
+        mean.covariance = any ? cov : null;
     }
 
     private static void sameX(Path file, Channels a, Channels b, int scan) throws InputException {

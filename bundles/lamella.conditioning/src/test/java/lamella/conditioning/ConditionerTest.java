@@ -225,4 +225,77 @@ class ConditionerTest {
                 PhaseCorrection.asRecorded(), Optional.empty(), List.of(new XRange(1, 100)), 5))).getMessage();
         assertTrue(m.startsWith("--exclude: 1.00000:100.000 holds no row; delay_s runs from -5.00000e-11"), m);
     }
+
+    /**
+     * A phase or an amplitude–phase pair goes to X, Y and back with its own σ, at every angle: X and Y made from one
+     * R and θ are correlated, and the covariance carried through the working form makes the round trip exact to first
+     * order (JCGM 100:2008, the Guide to the expression of uncertainty in measurement, eq. 13). Without it the phase's
+     * σ came back as σ·√(sin⁴θ + cos⁴θ), 29 % low at 45°.
+     */
+    @Test
+    void aPhaseAndAnAmplitudeKeepTheirOwnSigmaThroughTheWorkingForm() throws InputException {
+        int n = 9;
+        double[] f = new double[n];
+        double[] phase = new double[n];
+        double[] sPhase = new double[n];
+        double[] amp = new double[n];
+        double[] sAmp = new double[n];
+        for (int i = 0; i < n; i++) {
+            f[i] = 1e3 * (i + 1);
+            phase[i] = -170 + 40 * i;
+            sPhase[i] = 0.1 + 0.05 * i;
+            amp[i] = 1e-6 * (1 + i);
+            sAmp[i] = 2e-8 * (1 + 0.5 * i);
+        }
+        ConditioningOptions none = new ConditioningOptions(PhaseCorrection.asRecorded(), Optional.empty(), List.of(),
+                0);
+        Dataset phaseOnly = new Dataset(FILE, "t", "frequency_hz", List.of(scan(f, columns("phase_deg", phase),
+                columns("phase_deg", sPhase))), Map.of());
+        ConditionedTable t = Conditioner.condition(phaseOnly, none);
+        assertArrayEquals(sPhase, t.sigmas().get("phase_deg"), 1e-12);
+        Dataset polar = new Dataset(FILE, "t", "frequency_hz", List.of(scan(f, columns("amplitude", amp, "phase_deg",
+                phase), columns("amplitude", sAmp, "phase_deg", sPhase))), Map.of());
+        ConditionedTable p = Conditioner.condition(polar, none);
+        assertArrayEquals(sPhase, p.sigmas().get("phase_deg"), 1e-12);
+        assertArrayEquals(sAmp, p.sigmas().get("amplitude"), 1e-20);
+        // two identical scans: the propagated σ of the mean is σ/√2, for the phase as for the amplitude
+        Dataset twice = new Dataset(FILE, "t", "frequency_hz", List.of(
+                scan(f, columns("amplitude", amp, "phase_deg", phase), columns("amplitude", sAmp, "phase_deg", sPhase)),
+                scan(f, columns("amplitude", amp, "phase_deg", phase), columns("amplitude", sAmp, "phase_deg", sPhase))),
+                Map.of());
+        ConditionedTable m = Conditioner.condition(twice, none);
+        for (int i = 0; i < n; i++) {
+            assertEquals(sPhase[i] / Math.sqrt(2), m.sigmas().get("phase_deg")[i], 1e-12, "phase row " + i);
+            assertEquals(sAmp[i] / Math.sqrt(2), m.sigmas().get("amplitude")[i], 1e-20, "amplitude row " + i);
+        }
+    }
+
+    /**
+     * A rotation is a phase shift: it leaves the amplitude's and the phase's σ as they were, for a pair of unequal σ in
+     * X and Y too (Σ' = R Σ Rᵀ, JCGM 100:2008, eq. 13); then rotating back gives X's and Y's own σ again.
+     */
+    @Test
+    void aRotationKeepsTheSigmaOfAmplitudeAndPhase() {
+        int n = 5;
+        Channels c = new Channels(new double[] {1, 2, 3, 4, 5}, new int[] {1, 2, 3, 4, 5});
+        double[] x = {1.0, -0.5, 0.2, 2.0, -1.5};
+        double[] y = {0.3, 0.8, -1.1, 0.1, -0.4};
+        double[] sx = {0.01, 0.05, 0.02, 0.03, 0.04};
+        double[] sy = {0.04, 0.01, 0.03, 0.02, 0.05};
+        c.put("in_phase", x.clone(), sx.clone());
+        c.put("out_of_phase", y.clone(), sy.clone());
+        Map<String, double[]> before = new LinkedHashMap<>();
+        Map<String, double[]> beforeSigma = new LinkedHashMap<>();
+        Derived.columns(c, false, false, null, before, beforeSigma);
+        Rotation.apply(c, 37.0);
+        Map<String, double[]> after = new LinkedHashMap<>();
+        Map<String, double[]> afterSigma = new LinkedHashMap<>();
+        Derived.columns(c, false, false, null, after, afterSigma);
+        assertArrayEquals(beforeSigma.get("phase_deg"), afterSigma.get("phase_deg"), 1e-12);
+        assertArrayEquals(beforeSigma.get("amplitude"), afterSigma.get("amplitude"), 1e-14);
+        Rotation.apply(c, -37.0);
+        assertArrayEquals(sx, c.sigmas.get("in_phase"), 1e-14);
+        assertArrayEquals(sy, c.sigmas.get("out_of_phase"), 1e-14);
+        assertEquals(n, c.rows());
+    }
 }
