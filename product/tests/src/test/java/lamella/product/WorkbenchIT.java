@@ -242,6 +242,53 @@ class WorkbenchIT {
     }
 
     @Test
+    void anImportShowsWhatTheFileStatesAndAddsItToTheDatasetsOwnBlocks() throws Exception {
+        Path raw = Files.createDirectories(user.resolve("incoming")).resolve("bench-scan.lamx");
+        Files.copy(RuntimeCopy.assembled().resolve("demo/raw/oxide-film-tdtr.lamx"), raw,
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        assertEquals("ok", ask("front project"));
+        Path caseFolder = Path.of(lines(ask("table Item")).stream().filter(l -> l.startsWith("Folder\t"))
+                .findFirst().orElseThrow().split("\t")[1]);
+        List<String> filesBefore = listing(caseFolder);
+        long datasets = datasetRows().size();
+
+        ask("import " + raw);
+        String preview = waitFor(() -> ask("dialog"), d -> d.startsWith("Import data — bench-scan.lamx"));
+        // The header of the demo file (invented data) states these; the case says 9.8 MHz.
+        assertTrue(preview.contains("measurement · type tdtr from the file"), preview);
+        assertTrue(preview.contains("measurement · modulation 9 MHz from the file"), preview);
+        assertTrue(preview.contains("measurement · repetition 76 MHz from the file"), preview);
+        assertTrue(preview.contains("geometry · pump radius 10 µm from the file"), preview);
+        assertTrue(preview.contains("x: delay (delay_s)") && preview.contains("in_phase (V, with σ)"), preview);
+        assertTrue(preview.contains("sample: FH-0417 oxide film (invented)"), preview);
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("import-preview-" + size.replace(' ', 'x') + ".png"));
+        }
+        ask("dialog-press Cancel");
+        assertEquals(datasets, datasetRows().size(), "cancelled: nothing added");
+
+        ask("import " + raw);
+        waitFor(() -> ask("dialog"), d -> d.startsWith("Import data — bench-scan.lamx"));
+        ask("dialog-press Add dataset");
+        List<String> rows = waitFor(() -> String.join("\n", datasetRows()),
+                t -> lines(t).size() == datasets + 1).lines().toList();
+        String added = rows.get(rows.size() - 1);
+        assertTrue(added.contains("bench-scan.csv"), added);
+        assertTrue(added.endsWith("measurement tdtr: modulation 9 MHz, repetition 76 MHz; geometry: the case's"),
+                added);
+        assertEquals(filesBefore, listing(caseFolder), "nothing is written into the case's folder before a save");
+        assertEquals("Undo add dataset bench-scan.csv", lines(ask("edit-menu")).get(0));
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("import-added-" + size.replace(' ', 'x') + ".png"));
+        }
+        ask("undo");
+        assertEquals(datasets, datasetRows().size());
+        ask("size 1600 1000");
+    }
+
+    @Test
     void theWorkbenchPaintsQuickly() {
         String ms = ask("first-paint-ms");
         System.out.println("workbench: first paint " + ms + " ms after the display was created");
@@ -261,6 +308,16 @@ class WorkbenchIT {
         }
         assertTrue(ok.test(answer), answer);
         return answer;
+    }
+
+    private static List<String> datasetRows() {
+        return lines(ask("table Item")).stream().filter(l -> l.startsWith("Dataset ")).toList();
+    }
+
+    private static List<String> listing(Path folder) throws IOException {
+        try (Stream<Path> files = Files.list(folder)) {
+            return files.map(p -> p.getFileName().toString()).sorted().toList();
+        }
     }
 
     private static String area(List<String> placements, String id) {

@@ -1,40 +1,51 @@
 package lamella.ui.workbench;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.UUID;
 import lamella.api.InputException;
 import lamella.api.data.DataImporter;
 import lamella.api.data.Dataset;
+import lamella.api.data.DatasetSettings;
 import lamella.api.data.ImportLimits;
-import lamella.conditioning.ConditionedTable;
 import lamella.conditioning.Conditioner;
 import lamella.conditioning.ConditioningOptions;
 import lamella.ui.api.Workbench;
-import org.eclipse.swt.SWT;
 import org.eclipse.swt.dnd.DND;
 import org.eclipse.swt.dnd.DropTargetAdapter;
 import org.eclipse.swt.dnd.DropTargetEvent;
 import org.eclipse.swt.dnd.FileTransfer;
 import org.eclipse.swt.dnd.Transfer;
 import org.eclipse.swt.widgets.Control;
-import org.eclipse.swt.widgets.DirectoryDialog;
 
 /**
  * Instrument files dropped on the window (or chosen with File ▸ Import data…): the most confident importer reads
- * each one off the UI thread, it is conditioned with the default options, written as normalised CSV next to the
- * project and added to the project's datasets. Every file that cannot be taken is reported with the reason.
+ * each one off the UI thread and it is conditioned with the default options; a preview shows the columns, what
+ * conditioning did and the dataset's own measurement and geometry settings as the file states them
+ * ({@link DatasetSettings}, the same mapping as {@code lamella import}); only on "Add dataset" is it added to the
+ * project, with those settings in its own blocks. The normalised CSV waits in the user's folder until the project is
+ * saved, when the save copies it beside the case: nothing is written into the case's folder before that. Every file
+ * that cannot be taken is reported with the reason.
  */
 final class DataDrop {
 
-    private final Workbench workbench;
+    private static final ObjectMapper JSON = new ObjectMapper();
 
-    DataDrop(Workbench workbench) {
+    private final Workbench workbench;
+    private final Path staging;
+
+    DataDrop(Workbench workbench, Path staging) {
         this.workbench = workbench;
+        this.staging = staging;
     }
 
     void acceptOn(Control control) {
@@ -66,10 +77,10 @@ final class DataDrop {
             return;
         }
         workbench.background("Importing " + file.getFileName(), progress -> read(file, importers),
-                this::addToProject);
+                this::preview);
     }
 
-    private static ConditionedTable read(Path file, List<DataImporter> importers) throws IOException,
+    private static ImportPreview.Read read(Path file, List<DataImporter> importers) throws IOException,
             InputException {
         if (!Files.isRegularFile(file)) {
             throw new IOException(file + " is not a file");
@@ -85,44 +96,53 @@ final class DataDrop {
                     + String.join(", ", importers.stream().map(DataImporter::id).toList()) + ")");
         }
         Dataset data = best.read(file);
-        return Conditioner.condition(data, ConditioningOptions.defaults());
+        return new ImportPreview.Read(data, Conditioner.condition(data, ConditioningOptions.defaults()), best);
     }
 
-    private void addToProject(ConditionedTable table) {
-        Path source = table.source();
-        Optional<Path> folder = workbench.project().file().map(Path::getParent).or(this::askFolder);
-        if (folder.isEmpty()) {
-            workbench.messages().warning("Import of " + source.getFileName() + " cancelled: the project has no"
-                    + " folder yet and none was chosen.");
+    private void preview(ImportPreview.Read read) {
+        ObjectNode doc = workbench.project().tree();
+        DatasetSettings.Context context = new DatasetSettings.Context(workbench.catalog().techniques(),
+                workbench.catalog().geometries(), map(doc.get("measurement")), map(doc.get("geometry")));
+        Optional<DatasetSettings> chosen = ImportPreview.ask(workbench.shell(), read, context);
+        if (chosen.isEmpty()) {
+            workbench.messages().info("Import of " + read.data().source().getFileName() + " cancelled.");
             return;
         }
-        Path target = freeName(folder.get(), stem(source) + ".csv", source);
+        add(read, chosen.get());
+    }
+
+    private void add(ImportPreview.Read read, DatasetSettings settings) {
+        Path source = read.data().source();
+        Path target;
         try {
-            AtomicFile.write(target, NormalisedCsv.of(table));
+            // A folder of its own per import keeps the file's own name, which the save's copy beside the case takes.
+            Path folder = Files.createDirectories(staging.resolve(UUID.randomUUID().toString()));
+            target = folder.resolve(stem(source) + ".csv");
+            AtomicFile.write(target, NormalisedCsv.of(read.table()));
         } catch (IOException e) {
-            workbench.messages().error("Could not write the imported data to " + target, e);
+            workbench.messages().error("Could not keep the imported data of " + source.getFileName()
+                    + " until the project is saved (in " + staging + ")", e);
             return;
         }
-        workbench.project().addDataset(target, null, null, null);
-        workbench.messages().info("Imported " + source + " as " + target.getFileName() + " (" + table.rows()
-                + " rows; " + String.join("; ", table.report().notes()) + ").");
+        workbench.project().addDataset(target, null, node(settings.measurement()), node(settings.geometry()));
+        int number = workbench.project().datasets().size();
+        String own = settings.settings().stream()
+                .filter(s -> s.origin() == DatasetSettings.Origin.FILE && !s.block().isEmpty())
+                .map(s -> ImportPreview.words(s.key()) + " " + (s.value() instanceof Double d
+                        ? Readable.of(s.key(), d) : String.valueOf(s.value())))
+                .reduce((a, b) -> a + ", " + b).orElse("none");
+        workbench.messages().info("Imported " + source + " as dataset " + number + " (" + read.table().rows()
+                + " rows; from the file: " + own + "); the data are written beside the case when the project is"
+                + " saved.");
     }
 
-    private Optional<Path> askFolder() {
-        DirectoryDialog d = new DirectoryDialog(workbench.shell(), SWT.NONE);
-        d.setText("Where should the imported data go?");
-        d.setMessage("The project is untitled; choose the folder for the normalised CSV files.");
-        return Optional.ofNullable(d.open()).map(Path::of);
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> map(JsonNode block) {
+        return block instanceof ObjectNode o ? JSON.convertValue(o, Map.class) : null;
     }
 
-    /** The name next to the project, numbered if taken, and never the dropped file itself. */
-    private static Path freeName(Path folder, String name, Path source) {
-        Path p = folder.resolve(name);
-        String base = name.substring(0, name.length() - ".csv".length());
-        for (int i = 1; Files.exists(p) || p.toAbsolutePath().equals(source.toAbsolutePath()); i++) {
-            p = folder.resolve(base + "-" + i + ".csv");
-        }
-        return p;
+    private static ObjectNode node(Optional<Map<String, Object>> block) {
+        return block.map(b -> (ObjectNode) JSON.valueToTree(b)).orElse(null);
     }
 
     private static String stem(Path file) {

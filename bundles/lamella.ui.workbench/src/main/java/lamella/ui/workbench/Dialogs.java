@@ -19,7 +19,7 @@ final class Dialogs {
     static void centre(Shell dialog, Shell over) {
         Rectangle p = over.getBounds();
         Point s = dialog.getSize();
-        dialog.setLocation(p.x + (p.width - s.x) / 2, p.y + (p.height - s.y) / 3);
+        dialog.setLocation(p.x + Math.max(0, (p.width - s.x) / 2), p.y + Math.max(0, (p.height - s.y) / 3));
     }
 
     /** Asks for a name; null when cancelled or left empty. */

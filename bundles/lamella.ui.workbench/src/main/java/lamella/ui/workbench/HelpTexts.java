@@ -21,8 +21,10 @@ final class HelpTexts {
                     + " technique and back keeps each one's values. Enter the absorbed power to see the predicted"
                     + " steady temperature rise.",
             "",
-            "3. Import — drop instrument files on the window, or File ▸ Import data…; each becomes a dataset of the"
-                    + " fit. The Signal panel draws the data and the model together and redraws as values change.",
+            "3. Import — drop instrument files on the window, or File ▸ Import data…; a preview shows the columns"
+                    + " read and the settings the file states (modulation, repetition, radii, powers), which the new"
+                    + " dataset keeps as its own; Add dataset makes it a dataset of the fit, and saving copies its"
+                    + " data beside the case. The Signal panel draws the data and the model together and redraws as values change.",
             "",
             "4. Sensitivity — before fitting (or before measuring), see how strongly the signal depends on each"
                     + " input over the x range: an input whose sensitivity is small cannot be fitted, and an"

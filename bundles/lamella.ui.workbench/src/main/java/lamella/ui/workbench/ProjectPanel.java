@@ -2,7 +2,10 @@ package lamella.ui.workbench;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import lamella.ui.api.Area;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
@@ -16,7 +19,10 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.osgi.service.component.annotations.Component;
 
-/** The project's files at a glance: the case file, its folder, every dataset's data file (found or missing). */
+/**
+ * The project's files at a glance: the case file, its folder, every dataset's data file (found or missing) and the
+ * settings it has of its own (its measurement and geometry blocks, as an import took them from the file).
+ */
 @Component(service = WorkbenchPanel.class)
 public final class ProjectPanel implements WorkbenchPanel {
 
@@ -41,7 +47,7 @@ public final class ProjectPanel implements WorkbenchPanel {
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         for (String[] c : List.of(new String[] {"Item", "150"}, new String[] {"File", "230"},
-                new String[] {"State", "80"})) {
+                new String[] {"State", "80"}, new String[] {"Own settings", "300"})) {
             TableColumn col = new TableColumn(table, SWT.LEFT);
             col.setText(c[0]);
             col.setWidth(Integer.parseInt(c[1]));
@@ -76,7 +82,7 @@ public final class ProjectPanel implements WorkbenchPanel {
             Path data = p.dataFile(i);
             String signal = p.datasets().get(i).path("signal").asText("");
             row(table, "Dataset " + (i + 1) + (signal.isEmpty() ? "" : " (" + signal + ")"), shortName(p, data),
-                    Files.isRegularFile(data) ? "found" : "missing");
+                    Files.isRegularFile(data) ? "found" : "missing", ownSettings(p.datasets().get(i)));
         }
         if (datasets.isEmpty()) {
             row(table, "Datasets", "none yet: drop a data file on the window", "");
@@ -90,6 +96,34 @@ public final class ProjectPanel implements WorkbenchPanel {
     }
 
     private static void row(Table t, String item, String file, String state) {
-        new TableItem(t, SWT.NONE).setText(new String[] {item, file, state});
+        row(t, item, file, state, "");
+    }
+
+    private static void row(Table t, String item, String file, String state, String settings) {
+        new TableItem(t, SWT.NONE).setText(new String[] {item, file, state, settings});
+    }
+
+    /** "measurement tdtr: modulation 9 MHz, repetition 76 MHz; geometry: the case's". */
+    static String ownSettings(ObjectNode dataset) {
+        List<String> parts = new ArrayList<>();
+        for (String block : List.of("measurement", "geometry")) {
+            JsonNode b = dataset.get(block);
+            if (!(b instanceof ObjectNode o)) {
+                parts.add(block + ": the case's");
+                continue;
+            }
+            List<String> values = new ArrayList<>();
+            o.fields().forEachRemaining(e -> {
+                if (e.getValue().isNumber()) {
+                    values.add(ImportPreview.words(e.getKey()) + " " + Readable.of(e.getKey(),
+                            e.getValue().asDouble()));
+                } else if (e.getValue().isArray()) {
+                    values.add(ImportPreview.words(e.getKey()) + " " + e.getValue().size() + " values");
+                }
+            });
+            parts.add(block + " " + o.path("type").asText("?") + (values.isEmpty() ? "" : ": "
+                    + String.join(", ", values)));
+        }
+        return String.join("; ", parts);
     }
 }

@@ -29,6 +29,11 @@ record UserFolder(Path root) {
         return root.resolve("recent.json");
     }
 
+    /** Normalised CSV files of imports, held here until a save copies them beside the case. */
+    Path imports() {
+        return root.resolve("imported");
+    }
+
     Path recovery() {
         return root.resolve("recovery");
     }

@@ -32,6 +32,7 @@ import org.eclipse.swt.widgets.Text;
  * {@code panels}, {@code placements}, {@code move ID TARGET_ID TABS|LEFT|RIGHT|TOP|BOTTOM}, {@code view-menu},
  * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code help ITEM}, {@code save-as PATH}, {@code status},
  * {@code title}, {@code size W H}, {@code screenshot PATH}, {@code messages}, {@code first-paint-ms},
+ * {@code import PATH} (as File ▸ Import data… with that file chosen, without waiting for its preview),
  * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
  * {@code key ctrl+shift+z}; controls found by what they show: {@code press LABEL} (without waiting, so that a dialog
  * it opens can be answered), {@code dialog}, {@code dialog-press LABEL}, {@code table HEADING},
@@ -94,6 +95,9 @@ final class WindowControl implements Function<String, String> {
                 return helpText(rest(w, 1));
             case "save-as":
                 return window.session().saveTo(Path.of(rest(w, 1))) ? "saved" : "error: not saved";
+            case "import":
+                window.drop().importFile(Path.of(rest(w, 1)));
+                return "importing";
             case "status":
                 return window.status().text();
             case "title":

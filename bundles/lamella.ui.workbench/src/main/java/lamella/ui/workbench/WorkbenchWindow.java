@@ -89,7 +89,7 @@ final class WorkbenchWindow implements Workbench {
         tasks = new BackgroundTasks(display, messages, () -> status.showWork(tasks().summary()));
         session = new ProjectSession(shell, CaseReader.withModels(services.caseFormat()::read, services::catalog),
                 user, home, messages, this::projectReplaced);
-        drop = new DataDrop(this);
+        drop = new DataDrop(this, user.imports());
         menus = new WindowMenus(this);
         host.addListener(SWT.Paint, e -> {
             if (firstPaintNanos == 0) {
