@@ -289,6 +289,61 @@ class WorkbenchIT {
     }
 
     @Test
+    void aFitFlowsBackIntoTheSignalPanelAndTheCaseAndIsKeptWithTheProject() throws Exception {
+        assertEquals("ok", ask("front fit"));
+        ask("press Start fit");
+        String fit = waitFor(() -> ask("texts fit"), t -> t.contains("Converged") || t.contains("Did not converge")
+                || t.contains("failed"));
+        assertTrue(fit.contains("Converged after"), fit);
+        assertEquals("ok", ask("front signal"));
+        String signal = waitFor(() -> ask("texts signal"), t -> t.contains("Dashed: the best fit of the last fit"));
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("fit-best-fit-" + size.replace(' ', 'x') + ".png"));
+        }
+        assertEquals("ok", ask("front stack"));
+        String before = ask("table layer");
+        assertEquals("ok", ask("front fit"));
+        ask("press Use fitted values");
+        waitFor(() -> lines(ask("edit-menu")).get(0), u -> u.equals("Undo use fitted values"));
+        assertTrue(ask("texts fit").contains("The case holds the fitted values now"), ask("texts fit"));
+        assertEquals("ok", ask("front stack"));
+        String after = ask("table layer");
+        assertTrue(!after.equals(before), "the stack shows the fitted values: " + after);
+        assertEquals("ok", ask("front signal"));
+        assertTrue(waitFor(() -> ask("texts signal"), t -> t.contains("Dashed: the best fit")).contains(signal
+                .lines().filter(l -> l.contains("Dashed")).findFirst().orElseThrow().split("Dashed")[1]));
+        ask("undo");
+        assertEquals("ok", ask("front stack"));
+        assertEquals(before, ask("table layer"), "undone: the starting values are back");
+
+        assertEquals("ok", ask("front setup"));
+        ask("field Technique | modulation | 9.7 MHz");
+        assertEquals("ok", ask("front fit"));
+        assertTrue(waitFor(() -> ask("texts fit"), t -> t.contains("Out of date")).contains("Start fit again"));
+        assertEquals("ok", ask("front signal"));
+        waitFor(() -> ask("texts signal"), t -> t.contains("out of date since the case was edited"));
+        ask("screenshot " + SHOTS.resolve("fit-out-of-date.png"));
+        ask("undo");
+        assertEquals("ok", ask("front fit"));
+        assertTrue(!ask("texts fit").contains("Out of date"), ask("texts fit"));
+
+        Path kept = user.resolve("fitted/sample.json");
+        assertEquals("saved", ask("save-as " + kept));
+        assertTrue(Files.readString(kept).contains("\"last_fit\""), "the fit is kept in the case file");
+        Object format = service("lamella.api.CaseFormat", null);
+        api(format, "lamella.api.CaseFormat").getMethod("read", Path.class).invoke(format, kept);
+        assertEquals("opened", ask("open " + kept));
+        assertEquals("ok", ask("front fit"));
+        String reopened = waitFor(() -> ask("texts fit"), t -> t.contains("The last fit, kept with the project"));
+        assertTrue(reopened.contains("Converged after"), reopened);
+        assertEquals("ok", ask("front signal"));
+        waitFor(() -> ask("texts signal"), t -> t.contains("Dashed: the best fit of the last fit"));
+        ask("screenshot " + SHOTS.resolve("fit-reopened.png"));
+        ask("size 1600 1000");
+    }
+
+    @Test
     void theWorkbenchPaintsQuickly() {
         String ms = ask("first-paint-ms");
         System.out.println("workbench: first paint " + ms + " ms after the display was created");

@@ -26,6 +26,7 @@ import lamella.api.CaseModel;
 import lamella.api.InputException;
 import lamella.api.ParameterRef;
 import lamella.api.fit.FitOutcome;
+import lamella.api.fit.FittedParameter;
 
 /**
  * The case being edited: the case-file document itself (stack, geometry, measurement and the fit block with its
@@ -73,9 +74,12 @@ public final class Project {
     private Path folder;
     private CaseDocument current;
     private InputException problem;
-    private FitOutcome lastFit;
+    private FitRecord lastFit;
+    private boolean fitUnsaved;
+    private String lastFitProblem;
 
     private Project(ObjectNode document, boolean saved, Path file, Path folder, CaseReader reader) {
+        takeKeptFit(document);
         absoluteDataPaths(document, folder);
         this.document = document;
         this.clean = saved ? document : null;
@@ -152,9 +156,9 @@ public final class Project {
         return folder;
     }
 
-    /** True when the document differs from what was last opened or saved. */
+    /** True when the document differs from what was last opened or saved, or a fit has not been saved yet. */
     public boolean dirty() {
-        return dirty;
+        return dirty || fitUnsaved;
     }
 
     /** The last version of the document that the case reader accepted. */
@@ -457,12 +461,70 @@ public final class Project {
 
     // ------------------------------------------------------------------ results and files
 
+    /** The last fit: of this session, or kept with the project when it was saved. */
     public Optional<FitOutcome> lastFit() {
-        return Optional.ofNullable(lastFit);
+        return Optional.ofNullable(lastFit).map(FitRecord::outcome);
     }
 
+    /** A fit of the document as it is now. */
     public void setLastFit(FitOutcome outcome) {
-        lastFit = outcome;
+        setLastFit(outcome, document);
+    }
+
+    /**
+     * A fit of the document as it was when the fit started (from {@link #tree()} then): edits made while it ran make
+     * it out of date at once. Saving keeps it with the project.
+     */
+    public void setLastFit(FitOutcome outcome, ObjectNode fitted) {
+        lastFit = new FitRecord(outcome, FitRecord.fingerprint(fitted), null);
+        lastFitProblem = null;
+        fitUnsaved = true;
+        fire(Change.RESULT);
+        fire(Change.FILE);
+    }
+
+    /**
+     * Whether the last fit belongs to the inputs as they are now: those it was fitted to, or those with its fitted
+     * values taken in. False after any other edit (the results are out of date), and without a fit.
+     */
+    public boolean lastFitCurrent() {
+        return lastFit != null && lastFit.belongsTo(FitRecord.fingerprint(document));
+    }
+
+    /** Whether the case holds the last fit's values, taken in with {@link #useFittedValues()}. */
+    public boolean fittedValuesInUse() {
+        return lastFit != null && lastFit.applied() != null
+                && lastFit.applied().equals(FitRecord.fingerprint(document));
+    }
+
+    /** Why a fit kept with the project could not be shown again, if that happened when it was opened. */
+    public Optional<String> lastFitProblem() {
+        return Optional.ofNullable(lastFitProblem);
+    }
+
+    /**
+     * Takes the last fit's values into the case as one undoable step, "use fitted values": each fitted input gets
+     * its best-fit value, and a free input's start value in the fit block moves there too, so that the next fit
+     * starts from it.
+     */
+    public void useFittedValues() {
+        FitRecord r = lastFit;
+        if (r == null) {
+            return;
+        }
+        edit("use fitted values", d -> {
+            for (FittedParameter p : r.outcome().parameters()) {
+                holder(d, p.ref()).put(p.ref().key(), p.value());
+                if (d.path("fit").get("free") instanceof ArrayNode free) {
+                    int i = find(free, p.ref());
+                    if (i >= 0 && free.get(i) instanceof ObjectNode e && e.has("initial")) {
+                        e.put("initial", p.value());
+                    }
+                }
+            }
+        });
+        lastFit = r.withApplied(FitRecord.fingerprint(document));
+        fitUnsaved = true;
         fire(Change.RESULT);
     }
 
@@ -476,6 +538,9 @@ public final class Project {
         Path dir = abs.getParent();
         Map<String, String> copies = DataCopies.besides(dir, dataPaths(document));
         ObjectNode saved = document.deepCopy();
+        if (lastFit != null) {
+            objectAt(saved, WORKBENCH_KEY).set(FitRecord.KEY, lastFit.toJson());
+        }
         for (JsonNode ds : saved.path("fit").path("datasets")) {
             if (ds instanceof ObjectNode o && o.path("data").isTextual()) {
                 Path p = Path.of(copies.getOrDefault(o.get("data").asText(), o.get("data").asText()));
@@ -489,6 +554,7 @@ public final class Project {
         folder = dir;
         clean = document;
         dirty = false;
+        fitUnsaved = false;
         history.seal();
         revalidate();
         fire(Change.FILE);
@@ -564,6 +630,26 @@ public final class Project {
                     // a stale temporary file is harmless; the system's temporary folder is cleaned
                 }
             }
+        }
+    }
+
+    /**
+     * A fit kept in the case file's {@code workbench} object is taken out of the document (the project holds it
+     * apart, and a save writes it back); one that cannot be read is dropped with the reason kept for the Fit panel.
+     */
+    private void takeKeptFit(ObjectNode d) {
+        if (!(d.get(WORKBENCH_KEY) instanceof ObjectNode wb) || !wb.has(FitRecord.KEY)) {
+            return;
+        }
+        try {
+            lastFit = FitRecord.of(wb.get(FitRecord.KEY));
+        } catch (IllegalArgumentException e) {
+            lastFitProblem = "the last fit kept with the project at " + WORKBENCH_KEY + "." + FitRecord.KEY
+                    + " could not be read (" + e.getMessage() + "); it is dropped at the next save";
+        }
+        wb.remove(FitRecord.KEY);
+        if (wb.isEmpty()) {
+            d.remove(WORKBENCH_KEY);
         }
     }
 

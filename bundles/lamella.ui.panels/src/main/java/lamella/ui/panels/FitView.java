@@ -42,12 +42,15 @@ import org.jfree.data.xy.XYSeriesCollection;
 
 /**
  * The Fit panel: starts and cancels a fit of the case's fit block in the background, then shows the values ± σ,
- * their correlations, the uncertainty budget and each dataset's residuals, and writes the HTML report.
+ * their correlations, the uncertainty budget and each dataset's residuals, and writes the HTML report. "Use fitted
+ * values" takes the best fit into the case as one undoable step; after any other edit the results are marked out of
+ * date. The last fit is kept with the project and shown again when it is reopened.
  */
 final class FitView implements PanelView {
 
     private static final int BAR_STEPS = 1000;
     private static final int SIDE_BY_SIDE_PX = 1500;
+    static final String USE = "Use fitted values";
 
     private final Workbench workbench;
     private final Project project;
@@ -55,6 +58,7 @@ final class FitView implements PanelView {
     private final Button start;
     private final Button cancel;
     private final Button report;
+    private final Button use;
     private final Spinner monteCarlo;
     private final ProgressBar bar;
     private final StatusLine status;
@@ -66,6 +70,8 @@ final class FitView implements PanelView {
     private final Project.Listener listener = this::changed;
     private Task running;
     private FitOutcome shown;
+    private String shownSummary = "";
+    private StatusLine.Tone shownTone = StatusLine.Tone.PLAIN;
 
     FitView(Composite parent, Workbench workbench) {
         this.workbench = workbench;
@@ -95,7 +101,16 @@ final class FitView implements PanelView {
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         Composite tables = new Composite(sash, SWT.NONE);
         tables.setLayout(new GridLayout(1, false));
-        heading(tables, "Fitted values (1σ; total includes every uncertain input)");
+        Composite valuesHead = new Composite(tables, SWT.NONE);
+        GridLayout vh = new GridLayout(2, false);
+        vh.marginWidth = 0;
+        vh.marginHeight = 0;
+        valuesHead.setLayout(vh);
+        valuesHead.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        heading(valuesHead, "Fitted values (1σ; total includes every uncertain input)");
+        use = push(valuesHead, USE, this::useFittedValues);
+        use.setToolTipText("take the best-fit values into the case as one step (Edit ▸ Undo takes them back)");
+        use.setEnabled(false);
         results = table(tables, 90);
         heading(tables, "Correlation of the fitted values (dimensionless)");
         correlation = table(tables, 80);
@@ -123,11 +138,17 @@ final class FitView implements PanelView {
             }
         });
         project.addListener(listener);
-        project.lastFit().ifPresent(this::show);
+        project.lastFit().ifPresent(o -> {
+            show(o);
+            shownSummary = "The last fit, kept with the project: " + summary(o, "");
+            shownTone = tone(o);
+            freshness();
+        });
         if (project.lastFit().isEmpty()) {
-            status.show(workbench.fitter().isPresent() ? "Press Start fit to fit the free inputs of the case's fit"
+            status.show(project.lastFitProblem().map(p -> "No fit to show: " + p + ". ").orElse("")
+                    + (workbench.fitter().isPresent() ? "Press Start fit to fit the free inputs of the case's fit"
                     + " block; the values and their uncertainty appear here." : "No fitting service is live, so"
-                    + " no fit can run (check that bundle lamella.fit runs).", StatusLine.Tone.PLAIN);
+                    + " no fit can run (check that bundle lamella.fit runs)."), StatusLine.Tone.PLAIN);
         }
     }
 
@@ -182,12 +203,45 @@ final class FitView implements PanelView {
     }
 
     private void changed(Project.Change change) {
-        if (change == Project.Change.RESULT && !root.isDisposed()) {
+        if (root.isDisposed()) {
+            return;
+        }
+        if (change == Project.Change.RESULT) {
             project.lastFit().ifPresent(o -> {
                 if (o != shown) {
                     show(o);
                 }
             });
+        }
+        freshness();
+    }
+
+    /**
+     * Says whether the results shown belong to the case as it is: fitted to it, taken into it, or out of date
+     * because of an edit since; "Use fitted values" is offered only for results that belong to the case.
+     */
+    private void freshness() {
+        if (shown == null || running != null) {
+            use.setEnabled(false);
+            return;
+        }
+        boolean current = shown == project.lastFit().orElse(null) && project.lastFitCurrent();
+        boolean inUse = current && project.fittedValuesInUse();
+        use.setEnabled(current && !inUse);
+        if (!current) {
+            status.show("Out of date: the case was edited after this fit, so the values, σ and budget below belong to"
+                    + " the case as it was then. Start fit again (or undo the edits).", StatusLine.Tone.CAUTION);
+        } else if (inUse) {
+            status.show(shownSummary + " The case holds the fitted values now (Edit ▸ Undo use fitted values takes"
+                    + " them back).", shownTone);
+        } else {
+            status.show(shownSummary, shownTone);
+        }
+    }
+
+    private void useFittedValues() {
+        if (shown != null && project.lastFitCurrent()) {
+            project.useFittedValues();
         }
     }
 
@@ -208,17 +262,19 @@ final class FitView implements PanelView {
         bar.setSelection(0);
         status.show("Fitting…", StatusLine.Tone.PLAIN);
         long t0 = System.nanoTime();
+        com.fasterxml.jackson.databind.node.ObjectNode fitted = project.tree();
+        use.setEnabled(false);
         running = workbench.start("Fit", p -> fitter.fit(doc, settings,
                 new ProgressRelay(p, root.getDisplay(), this::progress)), new WorkResult<FitOutcome>() {
                     @Override
                     public void done(FitOutcome outcome) {
                         if (ended()) {
                             bar.setSelection(BAR_STEPS);
-                            project.setLastFit(outcome);
+                            shownSummary = summary(outcome, " in " + String.format(java.util.Locale.ROOT,
+                                    "%.1f", (System.nanoTime() - t0) / 1e9) + " s");
+                            shownTone = tone(outcome);
                             show(outcome);
-                            status.show(summary(outcome, (System.nanoTime() - t0) / 1e9), outcome.warnings()
-                                    .isEmpty() && outcome.converged() ? StatusLine.Tone.PLAIN
-                                    : StatusLine.Tone.CAUTION);
+                            project.setLastFit(outcome, fitted);
                         }
                     }
 
@@ -274,11 +330,14 @@ final class FitView implements PanelView {
         }
     }
 
-    private static String summary(FitOutcome o, double seconds) {
+    private static String summary(FitOutcome o, String when) {
         String s = (o.converged() ? "Converged" : "Did not converge") + " after " + o.evaluations()
-                + " model evaluations in " + String.format(java.util.Locale.ROOT, "%.1f", seconds)
-                + " s; reduced χ² " + NumberText.format(o.reducedChiSquare()) + ".";
+                + " model evaluations" + when + "; reduced χ² " + NumberText.format(o.reducedChiSquare()) + ".";
         return o.warnings().isEmpty() ? s : s + " " + String.join(" ", o.warnings());
+    }
+
+    private static StatusLine.Tone tone(FitOutcome o) {
+        return o.warnings().isEmpty() && o.converged() ? StatusLine.Tone.PLAIN : StatusLine.Tone.CAUTION;
     }
 
     private void show(FitOutcome o) {

@@ -3,7 +3,9 @@ package lamella.ui.panels;
 import java.awt.BasicStroke;
 import java.awt.geom.Ellipse2D;
 import java.util.List;
+import java.util.Optional;
 import lamella.api.CaseDocument;
+import lamella.api.fit.DatasetFit;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
 import lamella.ui.api.Workbench;
@@ -23,8 +25,10 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * The Signal panel: the chosen dataset's points and the model line over them. Every change of the case's inputs
- * recomputes the model in the background; only the newest edit's curve is drawn, and the axes keep their zoom.
+ * The Signal panel: the chosen dataset's points, the model line over them and, after a fit, the best fit of the
+ * last fit for that dataset (dashed; grey and marked out of date once the case is edited). Every change of the
+ * case's inputs recomputes the model in the background; only the newest edit's curve is drawn, and the axes keep
+ * their zoom.
  */
 final class SignalView implements PanelView {
 
@@ -42,6 +46,8 @@ final class SignalView implements PanelView {
     private final Project.Listener listener = this::changed;
     private String lastProblem;
     private XYSeries model;
+    private XYSeries bestFit;
+    private String modelText = "";
     private XYLineAndShapeRenderer renderer;
     private String shownKey;
 
@@ -114,6 +120,46 @@ final class SignalView implements PanelView {
         if (change == Project.Change.INPUTS || change == Project.Change.FIT_SETUP) {
             recompute();
         }
+        if (change == Project.Change.RESULT || change == Project.Change.FILE) {
+            // A new result changes only the dashed line, so the status line can say so; after an edit the model's
+            // own recomputation brings the status line up to date.
+            drawBestFit(change == Project.Change.RESULT);
+        }
+    }
+
+    /**
+     * The last fit's model at the data points of the dataset shown, when it fitted the signal shown; its legend says
+     * whether it still belongs to the case's inputs.
+     */
+    private void drawBestFit(boolean tellStatus) {
+        if (bestFit == null || root.isDisposed()) {
+            return;
+        }
+        bestFit.clear();
+        int dataset = picker.selected();
+        String signal = signalCombo.getText();
+        Optional<DatasetFit> fit = project.lastFit().flatMap(o -> o.datasets().stream()
+                .filter(d -> d.index() == dataset && d.signal().equals(signal)).findFirst());
+        String fitText = "";
+        if (fit.isPresent()) {
+            DatasetFit d = fit.get();
+            boolean current = project.lastFitCurrent();
+            for (int i = 0; i < d.x().length; i++) {
+                bestFit.add(d.x()[i], d.model()[i], false);
+            }
+            bestFit.setKey(current ? "best fit (reduced χ² " + NumberText.format(d.reducedChiSquare()) + ")"
+                    : "best fit, out of date (case edited since)");
+            renderer.setSeriesPaint(2, current ? PlotLook.seriesPaint(1) : PlotLook.REFERENCE);
+            fitText = current ? " Dashed: the best fit of the last fit (reduced χ² "
+                    + NumberText.format(d.reducedChiSquare()) + ")."
+                    : " Dashed grey: the last fit's best fit, out of date since the case was edited.";
+        } else {
+            bestFit.setKey("best fit (none yet)");
+        }
+        bestFit.fireSeriesChanged();
+        if (tellStatus && !modelText.isEmpty()) {
+            status.show(modelText + fitText, StatusLine.Tone.PLAIN);
+        }
     }
 
     private void recompute() {
@@ -167,6 +213,7 @@ final class SignalView implements PanelView {
         if (root.isDisposed()) {
             return;
         }
+        modelText = "";
         clearModel();
         status.show("The model could not be computed: " + problem, StatusLine.Tone.PROBLEM);
         if (!problem.equals(lastProblem)) {
@@ -219,9 +266,11 @@ final class SignalView implements PanelView {
             model.fireSeriesChanged();
         }
         long ms = (System.nanoTime() - started) / 1_000_000;
-        status.show(c.technique().toUpperCase() + " model of " + c.modelX().length + " points"
+        modelText = c.technique().toUpperCase() + " model of " + c.modelX().length + " points"
                 + (c.dataName().isEmpty() ? "" : " over " + c.dataX().length + " data points of " + c.dataName())
-                + ", computed in " + ms + " ms.", StatusLine.Tone.PLAIN);
+                + ", computed in " + ms + " ms.";
+        status.show(modelText, StatusLine.Tone.PLAIN);
+        drawBestFit(true);
     }
 
     private JFreeChart chart(SignalCurve c) {
@@ -233,9 +282,11 @@ final class SignalView implements PanelView {
         for (int i = 0; i < c.modelX().length; i++) {
             model.add(c.modelX()[i], c.modelY()[i], false);
         }
+        bestFit = new XYSeries("best fit", false, true);
         XYSeriesCollection set = new XYSeriesCollection();
         set.addSeries(data);
         set.addSeries(model);
+        set.addSeries(bestFit);
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
         renderer = r;
         r.setSeriesLinesVisible(0, false);
@@ -247,6 +298,10 @@ final class SignalView implements PanelView {
         r.setSeriesShapesVisible(1, false);
         r.setSeriesPaint(1, PlotLook.MODEL);
         r.setSeriesStroke(1, new BasicStroke(2f));
+        r.setSeriesLinesVisible(2, true);
+        r.setSeriesShapesVisible(2, false);
+        r.setSeriesPaint(2, PlotLook.seriesPaint(1));
+        r.setSeriesStroke(2, PlotLook.seriesStroke(1));
         boolean log = SignalCurve.logarithmic(c.xColumn());
         XYPlot plot = new XYPlot(set, PlotLook.xAxis(Words.x(c.xColumn(), c.technique()), log, c.modelX()),
                 PlotLook.linear(Words.signal(c.signal())), r);

@@ -33,7 +33,9 @@ final class HelpTexts {
             "5. Fit — Start fit fits the free inputs to every dataset at once; the values come with their 1σ"
                     + " (noise and every uncertain input), the correlations, the residuals, and the uncertainty"
                     + " budget with each source's share. Structure in the residuals means the model misses"
-                    + " something.",
+                    + " something. The Signal panel draws each dataset's best fit over its data; Use fitted values"
+                    + " takes the fitted values into the stack (Ctrl+Z takes them back). After an edit the results"
+                    + " are marked out of date; saving keeps the last fit with the project.",
             "",
             "6. Report — Write report… puts an HTML page with plots, tables, the budget and every input into a"
                     + " folder to keep with the sample's record.",

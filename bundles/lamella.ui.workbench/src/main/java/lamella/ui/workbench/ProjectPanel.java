@@ -87,7 +87,9 @@ public final class ProjectPanel implements WorkbenchPanel {
         if (datasets.isEmpty()) {
             row(table, "Datasets", "none yet: drop a data file on the window", "");
         }
-        row(table, "Last fit", p.lastFit().isPresent() ? "this session" : "none this session", "");
+        row(table, "Last fit", p.lastFit().isEmpty() ? "none" : p.lastFitCurrent()
+                ? (p.fittedValuesInUse() ? "its values are in the case" : "belongs to the case")
+                : "out of date (edited since)", p.lastFit().isEmpty() ? "" : p.dirty() ? "not saved yet" : "saved");
     }
 
     /** Data inside the project's folder by its relative path, which is how the case file names it. */

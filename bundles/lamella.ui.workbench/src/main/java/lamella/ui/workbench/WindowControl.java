@@ -32,11 +32,11 @@ import org.eclipse.swt.widgets.Text;
  * {@code panels}, {@code placements}, {@code move ID TARGET_ID TABS|LEFT|RIGHT|TOP|BOTTOM}, {@code view-menu},
  * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code help ITEM}, {@code save-as PATH}, {@code status},
  * {@code title}, {@code size W H}, {@code screenshot PATH}, {@code messages}, {@code first-paint-ms},
- * {@code import PATH} (as File ▸ Import data… with that file chosen, without waiting for its preview),
+ * {@code open PATH} (as File ▸ Recent with that file), {@code import PATH} (as File ▸ Import data… with that file chosen, without waiting for its preview),
  * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
  * {@code key ctrl+shift+z}; controls found by what they show: {@code press LABEL} (without waiting, so that a dialog
  * it opens can be answered), {@code dialog}, {@code dialog-press LABEL}, {@code table HEADING},
- * {@code table-select HEADING | ROW}, {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * {@code table-select HEADING | ROW}, {@code texts PANEL_ID} (its labels), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
  * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
@@ -95,6 +95,10 @@ final class WindowControl implements Function<String, String> {
                 return helpText(rest(w, 1));
             case "save-as":
                 return window.session().saveTo(Path.of(rest(w, 1))) ? "saved" : "error: not saved";
+            case "open":
+                Path opened = Path.of(rest(w, 1)).toAbsolutePath().normalize();
+                window.session().openRecent(opened);
+                return window.project().file().filter(opened::equals).isPresent() ? "opened" : "error: not opened";
             case "import":
                 window.drop().importFile(Path.of(rest(w, 1)));
                 return "importing";
@@ -137,6 +141,8 @@ final class WindowControl implements Function<String, String> {
                 return choose(parts(w));
             case "field":
                 return field(parts(w));
+            case "texts":
+                return texts(w[1]);
             case "fields":
                 return fields(rest(w, 1));
             case "close":
@@ -282,6 +288,17 @@ final class WindowControl implements Function<String, String> {
             }
         }
         throw new IllegalArgumentException("no field '" + args.get(1) + "' in '" + args.get(0) + "'");
+    }
+
+    /** The texts a panel shows in labels (its status lines, headings), one a line; the panel is opened if needed. */
+    private String texts(String panelId) {
+        Control c = window.shelf().control(panelId)
+                .orElseThrow(() -> new IllegalArgumentException("no panel '" + panelId + "'"));
+        if (!(c instanceof org.eclipse.swt.widgets.Composite root)) {
+            return c instanceof Label l ? l.getText() : "";
+        }
+        return WidgetFinder.visible(root).stream().filter(x -> x instanceof Label).map(x -> ((Label) x).getText())
+                .filter(t -> !t.isEmpty()).collect(Collectors.joining("\n"));
     }
 
     /** Each labelled field of a group as "label text = value". */
