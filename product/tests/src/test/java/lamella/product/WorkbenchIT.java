@@ -53,7 +53,9 @@ class WorkbenchIT {
         assumeTrue(System.getenv("DISPLAY") != null, "the workbench tests need a display; ./run-tests provides one");
         RuntimeCopy.into(home);
         copyDemo(home);
-        runtime = FelixRuntime.start(home, Map.of("lamella.user.dir", user.toString()));
+        runtime = FelixRuntime.start(home, Map.of("lamella.user.dir", user.toString(),
+                "lamella.materials.facility", RuntimeCopy.assembled().resolve("demo/materials/fenwick-hall")
+                        .toString(), "lamella.materials.user", userLibrary(user.resolve("materials")).toString()));
         context = runtime.framework().getBundleContext();
         window = openWindow();
     }
@@ -344,6 +346,64 @@ class WorkbenchIT {
     }
 
     @Test
+    void theDatasetsPanelShowsEachDatasetsOwnSettingsRowsAndSigmaSource() throws Exception {
+        assertEquals("ok", ask("front datasets"));
+        String table = waitFor(() -> ask("table Fitted x range"), t -> lines(t).size() == 4 && !t.contains("…"));
+        List<String> rows = lines(table);
+        assertEquals("Dataset\tData file\tTechnique\tSignal\tPoints\tFitted x range\tLeft out\tσ from",
+                rows.get(0));
+        assertTrue(rows.get(1).startsWith("0\ttdtr-9.8mhz.csv\ttdtr\tratio\t40\tall: 100 ps to 4 ns\tnone"),
+                rows.get(1));
+        assertTrue(rows.get(3).startsWith("2\tfdtr.csv\tfdtr\tphase_deg\t"), rows.get(3));
+        assertEquals("selected 2", ask("table-select Fitted x range | 2"));
+        String geometry = ask("fields Heating geometry of dataset 2 · fdtr.csv");
+        assertTrue(geometry.contains("pump radius: = 3.2 µm"), geometry);
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("datasets-" + size.replace(' ', 'x') + ".png"));
+        }
+        assertEquals("selected 0", ask("table-select Fitted x range | 0"));
+        ask("field Fitted points of dataset 0 · tdtr-9.8mhz.csv | fit from | 200 ps");
+        assertEquals("Undo set the fitted x range of dataset 0", lines(ask("edit-menu")).get(0));
+        waitFor(() -> ask("table Fitted x range"), t -> lines(t).get(1).contains("\t200 ps to 4 ns\t"));
+        ask("undo");
+        waitFor(() -> ask("table Fitted x range"), t -> lines(t).get(1).contains("\tall: 100 ps to 4 ns\t"));
+        ask("size 1600 1000");
+    }
+
+    @Test
+    void theMaterialsPanelAndTheStacksPickerFindTheShippedFacilityAndUserLibraries() throws Exception {
+        assertEquals("ok", ask("front materials"));
+        assertEquals("silicon", ask("search materials | silicon"));
+        List<String> found = lines(ask("table library (tier)"));
+        assertTrue(found.stream().anyMatch(r -> r.startsWith("silicon\t") && r.contains("shipped")),
+                found + "\n" + ask("texts materials") + "\n" + ask("messages"));
+        assertTrue(found.stream().anyMatch(r -> r.startsWith("fh-pecvd-oxide\t") && r.contains("facility")),
+                found.toString());
+        assertTrue(found.stream().anyMatch(r -> r.startsWith("bench-a-si\t") && r.contains("user")),
+                found.toString());
+        for (String size : List.of("1280 800", "1920 1080")) {
+            ask("size " + size);
+            ask("screenshot " + SHOTS.resolve("materials-silicon-" + size.replace(' ', 'x') + ".png"));
+        }
+        ask("search materials | ");
+
+        assertEquals("ok", ask("front stack"));
+        List<String> layers = lines(ask("table layer"));
+        assertTrue(layers.get(3).startsWith("substrate\t"), layers.toString());
+        ask("cell-click layer | 2 | material");
+        ask("screenshot " + SHOTS.resolve("stack-material-picker.png"));
+        assertEquals("chosen silicon — ", ask("editor-choose silicon — ").substring(0, "chosen silicon — ".length()));
+        String picked = waitFor(() -> ask("table layer"), t -> lines(t).get(3).startsWith("substrate\tsilicon\t"));
+        assertTrue(lines(picked).get(3).contains("(material)"), "the library's values are shown: " + picked);
+        assertTrue(lines(ask("edit-menu")).get(0).contains("silicon"), ask("edit-menu"));
+        ask("screenshot " + SHOTS.resolve("stack-material-picked.png"));
+        ask("undo");
+        waitFor(() -> ask("table layer"), t -> lines(t).get(3).startsWith("substrate\t(own values)\t"));
+        ask("size 1600 1000");
+    }
+
+    @Test
     void theWorkbenchPaintsQuickly() {
         String ms = ask("first-paint-ms");
         System.out.println("workbench: first paint " + ms + " ms after the display was created");
@@ -363,6 +423,22 @@ class WorkbenchIT {
         }
         assertTrue(ok.test(answer), answer);
         return answer;
+    }
+
+    /** A user's own library of one entry; its values are invented for this test and checked only as shown. */
+    private static Path userLibrary(Path folder) throws IOException {
+        Files.createDirectories(folder);
+        Files.writeString(folder.resolve("library.json"), """
+                {"library_format": 1, "id": "bench-notes", "name": "A user's own films (invented for a test)",
+                 "maintainer": "the test", "description": "Invented for a workbench test."}
+                """);
+        Files.writeString(folder.resolve("films.json"), """
+                {"materials": [{"id": "bench-a-si", "name": "Amorphous silicon film, e-beam (invented)",
+                  "version": 1, "source": "Invented for a workbench test; not a measurement",
+                  "properties": {"k_w_mk": {"value": 1.8, "range_k": [290, 310]},
+                                 "heat_capacity_j_m3k": {"value": 1.6e6, "range_k": [290, 310]}}}]}
+                """);
+        return folder;
     }
 
     private static List<String> datasetRows() {

@@ -23,9 +23,10 @@ public final class InputNames {
     private InputNames() {
     }
 
-    /** "film · Λ through", "geometry · pump radius", "dataset 3 · geometry · pump radius". */
+    /** "film · Λ through", "geometry · pump radius", "dataset 2 · geometry · pump radius" (datasets numbered as the case file
+     * numbers them, from 0). */
     public static String of(ParameterRef ref) {
-        String prefix = ref.dataset() >= 0 ? "dataset " + (ref.dataset() + 1) + " · " : "";
+        String prefix = ref.dataset() >= 0 ? "dataset " + ref.dataset() + " · " : "";
         return switch (ref.scope()) {
             case LAYER -> ref.layer() + " · " + LAYER_KEYS.getOrDefault(ref.key(), key(ref.key()));
             case GEOMETRY -> prefix + "geometry · " + key(ref.key());

@@ -347,7 +347,7 @@ public final class Project {
         if (!block.equals("geometry") && !block.equals("measurement")) {
             throw new IllegalArgumentException("geometry or measurement, not " + block);
         }
-        String where = dataset >= 0 ? " of dataset " + (dataset + 1) : "";
+        String where = dataset >= 0 ? " of dataset " + dataset : "";
         edit("switch the " + blockWords(block) + where + " to " + type, d -> {
             ObjectNode holder = dataset >= 0 ? (ObjectNode) fitArray(d, "datasets").get(dataset) : d;
             ObjectNode old = holder.get(block) instanceof ObjectNode o ? o : holder.objectNode();
@@ -448,10 +448,48 @@ public final class Project {
         });
     }
 
+    /**
+     * Gives a dataset a measurement or geometry block of its own, a copy of the case's to change there, or (own
+     * false) takes its own away so that it uses the case's again.
+     */
+    public void setDatasetBlock(int index, String block, boolean own) {
+        if (!block.equals("geometry") && !block.equals("measurement")) {
+            throw new IllegalArgumentException("geometry or measurement, not " + block);
+        }
+        String words = own ? "give dataset " + index + " its own " + blockWords(block)
+                : "let dataset " + index + " take the case's " + blockWords(block);
+        edit(words, d -> {
+            ObjectNode ds = (ObjectNode) fitArray(d, "datasets").get(index);
+            if (!own) {
+                ds.remove(block);
+            } else if (!ds.has(block)) {
+                ds.set(block, d.get(block) instanceof ObjectNode o ? o.deepCopy() : ds.objectNode());
+            }
+        });
+    }
+
+    /**
+     * Sets a key of a dataset itself ({@code signal}, {@code x_range}, {@code exclude}, {@code weights}), or
+     * removes it with null, as one step named in words ("set the fitted x range").
+     */
+    public void setDatasetKey(int index, String key, JsonNode value, String words) {
+        if (key.equals("data") || key.equals("measurement") || key.equals("geometry")) {
+            throw new IllegalArgumentException(key + " is not changed this way");
+        }
+        edit(words + " of dataset " + index, d -> {
+            ObjectNode ds = (ObjectNode) fitArray(d, "datasets").get(index);
+            if (value == null) {
+                ds.remove(key);
+            } else {
+                ds.set(key, value.deepCopy());
+            }
+        });
+    }
+
     public void removeDataset(int index) {
         String data = Path.of(fitArrayOrEmpty("datasets").get(index).path("data").asText("?")).getFileName()
                 .toString();
-        edit("remove dataset " + (index + 1) + " (" + data + ")", d -> fitArray(d, "datasets").remove(index));
+        edit("remove dataset " + index + " (" + data + ")", d -> fitArray(d, "datasets").remove(index));
     }
 
     /** The data file of a dataset, resolved against the project's folder. */

@@ -18,7 +18,7 @@ record CurveChoice(int dataset, String label) {
             String technique = d.path("measurement").path("type").asText(
                     project.tree().path("measurement").path("type").asText("?"));
             String signal = d.path("signal").asText("");
-            out.add(new CurveChoice(i, "dataset " + (i + 1) + ": " + file + " (" + technique
+            out.add(new CurveChoice(i, "dataset " + i + ": " + file + " (" + technique
                     + (signal.isEmpty() ? "" : ", " + signal) + ")"));
         }
         out.add(new CurveChoice(-1, "case measurement (model only)"));

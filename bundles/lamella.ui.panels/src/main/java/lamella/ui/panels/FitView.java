@@ -360,7 +360,7 @@ final class FitView implements PanelView {
         Tables.fill(correlation, ch, corr);
         FitTables shares = FitTables.budget(o);
         Tables.fill(budget, shares.headings(), shares.rows());
-        residualPick.setItems(o.datasets().stream().map(d -> "dataset " + (d.index() + 1) + ": "
+        residualPick.setItems(o.datasets().stream().map(d -> "dataset " + d.index() + ": "
                 + Path.of(d.source()).getFileName() + " (" + d.signal() + ")").toArray(String[]::new));
         residualPick.select(0);
         drawResiduals();

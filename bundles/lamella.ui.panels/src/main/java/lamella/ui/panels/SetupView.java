@@ -1,14 +1,9 @@
 package lamella.ui.panels;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.function.Function;
 import lamella.api.CaseModel;
 import lamella.api.HeatingGeometry;
-import lamella.api.ParameterRef;
-import lamella.api.ParameterSpec;
 import lamella.api.Technique;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
@@ -16,7 +11,6 @@ import lamella.ui.api.Workbench;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
-import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Group;
@@ -50,11 +44,11 @@ final class SetupView implements PanelView {
         this.work = new LatestOnly<>(workbench, "Steady temperature rise");
         root = new Composite(parent, SWT.NONE);
         root.setLayout(new GridLayout(1, false));
-        technique = new BlockEditor(root, "Technique", "measurement",
+        technique = new BlockEditor(root, project, "Technique", "measurement", -1,
                 workbench.catalog().techniques().stream().map(Technique::type).toList(),
                 type -> workbench.catalog().technique(type).map(Technique::parameters).orElse(List.of()),
                 type -> workbench.catalog().technique(type).map(Technique::summary).orElse(""));
-        geometry = new BlockEditor(root, "Heating geometry", "geometry",
+        geometry = new BlockEditor(root, project, "Heating geometry", "geometry", -1,
                 workbench.catalog().geometries().stream().map(HeatingGeometry::type).toList(),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::parameters).orElse(List.of()),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::summary).orElse(""));
@@ -107,7 +101,7 @@ final class SetupView implements PanelView {
     }
 
     String problemText(String block) {
-        return (block.equals("geometry") ? geometry : technique).problem.text();
+        return (block.equals("geometry") ? geometry : technique).problemText();
     }
 
     private void refresh() {
@@ -181,92 +175,6 @@ final class SetupView implements PanelView {
                     StatusLine.Tone.CAUTION);
         } else {
             rise.show(text, StatusLine.Tone.PLAIN);
-        }
-    }
-
-    /** A chooser of the service type and a field per parameter of one case block. */
-    private final class BlockEditor {
-
-        private final String block;
-        private final Function<String, List<ParameterSpec>> specs;
-        private final Function<String, String> summary;
-        private final Combo type;
-        private final Label about;
-        private final Composite fields;
-        private final StatusLine problem;
-        private final List<QuantityField> inputs = new ArrayList<>();
-        private String shownType;
-
-        BlockEditor(Composite parent, String title, String block, List<String> types,
-                    Function<String, List<ParameterSpec>> specs, Function<String, String> summary) {
-            this.block = block;
-            this.specs = specs;
-            this.summary = summary;
-            Group g = new Group(parent, SWT.NONE);
-            g.setText(title);
-            g.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-            g.setLayout(new GridLayout(2, false));
-            Label tl = new Label(g, SWT.NONE);
-            tl.setText("type:");
-            type = new Combo(g, SWT.READ_ONLY);
-            type.setItems(types.stream().sorted().toArray(String[]::new));
-            type.addListener(SWT.Selection, e -> changeType(type.getText()));
-            about = new Label(g, SWT.WRAP);
-            GridData agd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
-            agd.widthHint = 300;
-            about.setLayoutData(agd);
-            fields = new Composite(g, SWT.NONE);
-            fields.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1));
-            GridLayout fl = new GridLayout(3, false);
-            fl.marginWidth = 0;
-            fields.setLayout(fl);
-            problem = new StatusLine(g, 2);
-        }
-
-        void show(JsonNode values) {
-            String t = values.path("type").asText("");
-            if (!t.equals(shownType)) {
-                build(t);
-            }
-            List<ParameterSpec> ps = specs.apply(t);
-            for (int i = 0; i < ps.size() && i < inputs.size(); i++) {
-                inputs.get(i).show(values.path(ps.get(i).key()));
-            }
-        }
-
-        QuantityField field(String key) {
-            List<ParameterSpec> ps = specs.apply(shownType);
-            for (int i = 0; i < ps.size(); i++) {
-                if (ps.get(i).key().equals(key)) {
-                    return inputs.get(i);
-                }
-            }
-            throw new IllegalArgumentException("no field " + key);
-        }
-
-        private void build(String t) {
-            shownType = t;
-            type.select(List.of(type.getItems()).indexOf(t));
-            about.setText(summary.apply(t));
-            for (Control c : fields.getChildren()) {
-                c.dispose();
-            }
-            inputs.clear();
-            problem.show("", StatusLine.Tone.PLAIN);
-            for (ParameterSpec s : specs.apply(t)) {
-                ParameterRef ref = block.equals("geometry") ? ParameterRef.geometry(s.key())
-                        : ParameterRef.measurement(s.key());
-                inputs.add(new QuantityField(fields, s, block + "." + s.key(),
-                        (value, visit) -> project.put(ref, value, visit), problem));
-            }
-        }
-
-        /**
-         * The new type takes the values it had when last chosen and those of the old type it also reads; the old
-         * type's values are remembered with the project for the way back.
-         */
-        private void changeType(String t) {
-            project.switchType(block, -1, t, specs.apply(t).stream().map(ParameterSpec::key).toList());
         }
     }
 }

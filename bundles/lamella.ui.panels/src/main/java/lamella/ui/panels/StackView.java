@@ -11,7 +11,6 @@ import java.util.concurrent.ConcurrentHashMap;
 import lamella.api.CaseModel;
 import lamella.api.Layer;
 import lamella.api.ParameterRef;
-import lamella.api.material.Material;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
 import lamella.ui.api.Workbench;
@@ -368,14 +367,22 @@ final class StackView implements PanelView {
     private void editMaterial(TableItem item, int row) {
         disposeEditor();
         Combo combo = new Combo(table, SWT.READ_ONLY);
+        // Each entry in effect, by id with its name and library, so that "silicon" is told from a film of the same
+        // name in the facility's library; the cell keeps the id, as the case file does.
         List<String> ids = new ArrayList<>();
+        List<String> shown = new ArrayList<>();
         ids.add(EXPLICIT);
-        workbench.materials().ifPresent(m -> m.effective().stream().map(Material::id).forEach(ids::add));
-        combo.setItems(ids.toArray(String[]::new));
+        shown.add(EXPLICIT);
+        workbench.materials().ifPresent(m -> m.effective().forEach(x -> {
+            ids.add(x.id());
+            shown.add(x.id() + " — " + x.name() + " (" + x.library().label() + ")");
+        }));
+        combo.setItems(shown.toArray(String[]::new));
+        combo.setVisibleItemCount(Math.min(20, shown.size()));
         combo.select(Math.max(0, ids.indexOf(item.getText(MATERIAL))));
         combo.addListener(SWT.Selection, e -> {
             String layer = names.get(row);
-            String choice = combo.getText();
+            String choice = ids.get(Math.max(0, combo.getSelectionIndex()));
             disposeEditor();
             if (choice.equals(EXPLICIT)) {
                 project.clearLayerKey(layer, "material");

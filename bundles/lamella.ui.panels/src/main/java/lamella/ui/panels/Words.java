@@ -48,7 +48,7 @@ final class Words {
         return phaseLike ? "∂φ/∂ln p (°)" : "S = ∂ln(signal)/∂ln p (dimensionless)";
     }
 
-    /** "film · Λ through", "geometry · pump radius", "dataset 3 · geometry · pump radius". */
+    /** "film · Λ through", "geometry · pump radius", "dataset 2 · geometry · pump radius". */
     static String parameter(ParameterRef ref) {
         return InputNames.of(ref);
     }

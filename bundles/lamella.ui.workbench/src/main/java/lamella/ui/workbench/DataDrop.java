@@ -125,7 +125,7 @@ final class DataDrop {
             return;
         }
         workbench.project().addDataset(target, null, node(settings.measurement()), node(settings.geometry()));
-        int number = workbench.project().datasets().size();
+        int number = workbench.project().datasets().size() - 1;
         String own = settings.settings().stream()
                 .filter(s -> s.origin() == DatasetSettings.Origin.FILE && !s.block().isEmpty())
                 .map(s -> ImportPreview.words(s.key()) + " " + (s.value() instanceof Double d

@@ -81,7 +81,7 @@ public final class ProjectPanel implements WorkbenchPanel {
         for (int i = 0; i < datasets.size(); i++) {
             Path data = p.dataFile(i);
             String signal = p.datasets().get(i).path("signal").asText("");
-            row(table, "Dataset " + (i + 1) + (signal.isEmpty() ? "" : " (" + signal + ")"), shortName(p, data),
+            row(table, "Dataset " + i + (signal.isEmpty() ? "" : " (" + signal + ")"), shortName(p, data),
                     Files.isRegularFile(data) ? "found" : "missing", ownSettings(p.datasets().get(i)));
         }
         if (datasets.isEmpty()) {

@@ -36,7 +36,9 @@ import org.eclipse.swt.widgets.Text;
  * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
  * {@code key ctrl+shift+z}; controls found by what they show: {@code press LABEL} (without waiting, so that a dialog
  * it opens can be answered), {@code dialog}, {@code dialog-press LABEL}, {@code table HEADING},
- * {@code table-select HEADING | ROW}, {@code texts PANEL_ID} (its labels), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * {@code table-select HEADING | ROW}, {@code cell-click HEADING | ROW | COLUMN} (a click into a table's cell, as
+ * the mouse gives it), {@code editor-choose TEXT} (the item of an open cell chooser that starts with TEXT),
+ * {@code search PANEL_ID | TEXT} (typed into the panel's search field), {@code texts PANEL_ID} (its labels), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
  * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
@@ -141,6 +143,12 @@ final class WindowControl implements Function<String, String> {
                 return choose(parts(w));
             case "field":
                 return field(parts(w));
+            case "search":
+                return search(parts(w));
+            case "cell-click":
+                return cellClick(parts(w));
+            case "editor-choose":
+                return editorChoose(rest(w, 1));
             case "texts":
                 return texts(w[1]);
             case "fields":
@@ -288,6 +296,57 @@ final class WindowControl implements Function<String, String> {
             }
         }
         throw new IllegalArgumentException("no field '" + args.get(1) + "' in '" + args.get(0) + "'");
+    }
+
+    private String search(List<String> args) {
+        Control c = window.shelf().control(args.get(0))
+                .orElseThrow(() -> new IllegalArgumentException("no panel '" + args.get(0) + "'"));
+        Text t = WidgetFinder.first((org.eclipse.swt.widgets.Composite) c, Text.class,
+                x -> (x.getStyle() & SWT.SEARCH) != 0)
+                .orElseThrow(() -> new IllegalArgumentException("no search field in '" + args.get(0) + "'"));
+        t.setText(args.size() > 1 ? args.get(1) : "");
+        settle(100);
+        return t.getText();
+    }
+
+    /** A mouse press in the middle of a table cell, as the user's click delivers it to the table's listeners. */
+    private String cellClick(List<String> args) {
+        Table t = WidgetFinder.tableWithColumn(window.shell(), args.get(0))
+                .orElseThrow(() -> new IllegalArgumentException("no table with a column '" + args.get(0) + "'"));
+        int row = Integer.parseInt(args.get(1));
+        int column = Arrays.asList(t.getColumns()).stream().map(TableColumn::getText).toList().indexOf(args.get(2));
+        if (column < 0) {
+            throw new IllegalArgumentException("no column '" + args.get(2) + "'");
+        }
+        Rectangle cell = t.getItem(row).getBounds(column);
+        org.eclipse.swt.widgets.Event e = new org.eclipse.swt.widgets.Event();
+        e.x = cell.x + cell.width / 2;
+        e.y = cell.y + cell.height / 2;
+        e.button = 1;
+        t.notifyListeners(SWT.MouseDown, e);
+        settle(100);
+        return "clicked " + t.getItem(row).getText(column);
+    }
+
+    /** Chooses in the chooser a table cell opened for editing, by the start of the item's text. */
+    private String editorChoose(String start) {
+        Combo c = WidgetFinder.first(window.shell(), Combo.class, x -> x.getParent() instanceof Table)
+                .orElseThrow(() -> new IllegalStateException("no cell chooser is open"));
+        List<String> items = Arrays.asList(c.getItems());
+        int i = -1;
+        for (int k = 0; k < items.size() && i < 0; k++) {
+            if (items.get(k).startsWith(start)) {
+                i = k;
+            }
+        }
+        if (i < 0) {
+            throw new IllegalArgumentException("'" + start + "' starts none of " + items);
+        }
+        c.select(i);
+        String chosen = c.getText();
+        c.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        settle(100);
+        return "chosen " + chosen;
     }
 
     /** The texts a panel shows in labels (its status lines, headings), one a line; the panel is opened if needed. */

@@ -17,6 +17,7 @@ import lamella.api.data.DataImporter;
 import lamella.api.fit.FitService;
 import lamella.api.fit.ReportWriter;
 import lamella.api.material.MaterialCatalog;
+import lamella.api.material.MaterialLibrary;
 import lamella.ui.api.WorkbenchPanel;
 import org.eclipse.swt.widgets.Display;
 import org.osgi.framework.Bundle;
@@ -52,8 +53,8 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
     private volatile FitService fitter;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
     private volatile ReportWriter reports;
-    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
-    private volatile MaterialCatalog materials;
+    /** Every live library (shipped, data bundles, the facility's and the user's folders), as the case reader has them. */
+    private final List<MaterialLibrary> libraries = new CopyOnWriteArrayList<>();
 
     private BundleContext context;
     private UserFolder user;
@@ -130,9 +131,20 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
         return Optional.ofNullable(reports);
     }
 
+    /** The libraries live now, in one catalog with their precedence; empty when none is live. */
     @Override
     public Optional<MaterialCatalog> materials() {
-        return Optional.ofNullable(materials);
+        return libraries.isEmpty() ? Optional.empty() : Optional.of(new MaterialCatalog(List.copyOf(libraries)));
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            unbind = "removeLibrary")
+    void addLibrary(MaterialLibrary library) {
+        libraries.add(library);
+    }
+
+    void removeLibrary(MaterialLibrary library) {
+        libraries.remove(library);
     }
 
     @Override
