@@ -11,7 +11,7 @@ import java.util.stream.Collectors;
 /**
  * Validated parameters of one geometry or technique: numbers and number lists by key, with the JSON path of the
  * block they came from. Built by {@link #bind}, which rejects unknown keys, wrong types and values outside a
- * parameter's constraint.
+ * parameter's constraint or outside the {@link PhysicalRange} of the unit its key ends in.
  */
 public final class Parameters {
 
@@ -90,6 +90,7 @@ public final class Parameters {
         if (!s.constraint().admits(d)) {
             throw InputException.at(at, "expected " + s.constraint().wording() + ", got " + d);
         }
+        PhysicalRange.checkKey(s.key(), d, at);
         return d;
     }
 

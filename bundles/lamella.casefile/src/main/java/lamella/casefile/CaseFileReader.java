@@ -19,6 +19,7 @@ import lamella.api.ExplainingCaseFormat;
 import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.Names;
+import lamella.api.PhysicalRange;
 import lamella.api.Stack;
 import lamella.api.ValueOrigin;
 import lamella.api.material.MaterialCatalog;
@@ -156,6 +157,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         if (!(d > 0)) {
             throw InputException.at(b.pathOf(key), "expected a positive number (" + what + "), got " + d);
         }
+        PhysicalRange.checkKey(key, d, b.pathOf(key));
         return d;
     }
 

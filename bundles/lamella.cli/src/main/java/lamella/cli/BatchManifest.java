@@ -1,13 +1,8 @@
 package lamella.cli;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -19,8 +14,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.Names;
+import lamella.api.json.JsonProblem;
+import lamella.api.json.StrictJson;
 
 /**
  * The cases of a batch: every {@code *.json} file directly inside a folder (by name), or the list of a manifest file
@@ -105,36 +103,25 @@ final class BatchManifest {
     }
 
     private static List<Entry> manifest(Path file) throws InputException {
-        String text;
+        byte[] bytes;
         try {
             if (Files.size(file) > 64L * 1024 * 1024) {
                 throw new InputException(file, null, -1, "the file is larger than 64 MiB; not a batch manifest");
             }
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            bytes = Files.readAllBytes(file);
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read the file: " + e.getMessage());
+            throw new InputException(file, null, -1, FileProblems.cannotRead(e));
         }
-        Map<String, Integer> lines = new HashMap<>();
+        Map<String, Integer> lines;
         JsonNode root;
         try {
-            JsonFactory factory = new JsonFactory();
-            try (JsonParser p = factory.createParser(text)) {
-                JsonToken t = p.nextToken();
-                if (t == null) {
-                    throw new InputException(file, null, 1, "the file is empty; expected a batch manifest");
-                }
-                walk(p, t, "", lines);
-                if (p.nextToken() != null) {
-                    throw new InputException(file, null, p.currentTokenLocation().getLineNr(),
-                            "text after the manifest's closing brace");
-                }
-            }
-            root = new ObjectMapper().readTree(text);
-        } catch (JsonProcessingException e) {
-            throw new InputException(file, null, e.getLocation() == null ? -1 : e.getLocation().getLineNr(),
-                    "not valid JSON: " + e.getOriginalMessage());
+            String text = StrictJson.decode(bytes);
+            lines = StrictJson.read(text).lines();
+            root = new ObjectMapper().readTree(text.startsWith("\uFEFF") ? text.substring(1) : text);
+        } catch (JsonProblem e) {
+            throw new InputException(file, e.path(), e.line(), e.problem());
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read the file: " + e.getMessage());
+            throw new InputException(file, null, -1, FileProblems.cannotRead(e));
         }
         Located at = new Located(file, lines);
         if (!root.isObject()) {
@@ -212,23 +199,6 @@ final class BatchManifest {
                 String hint = Names.closest(key, known).map(h -> " (did you mean '" + h + "'?)").orElse("");
                 throw at.problem(path.isEmpty() ? key : path + "." + key, "unknown key in " + what + hint
                         + "; expected one of: " + String.join(", ", new TreeSet<>(known)));
-            }
-        }
-    }
-
-    /** Records the line of every JSON path's key or list element. */
-    private static void walk(JsonParser p, JsonToken t, String path, Map<String, Integer> lines) throws IOException {
-        lines.putIfAbsent(path, p.currentTokenLocation().getLineNr());
-        if (t == JsonToken.START_OBJECT) {
-            while ((t = p.nextToken()) == JsonToken.FIELD_NAME) {
-                String child = path.isEmpty() ? p.currentName() : path + "." + p.currentName();
-                lines.put(child, p.currentTokenLocation().getLineNr());
-                walk(p, p.nextToken(), child, lines);
-            }
-        } else if (t == JsonToken.START_ARRAY) {
-            int i = 0;
-            while ((t = p.nextToken()) != JsonToken.END_ARRAY) {
-                walk(p, t, path + "[" + i++ + "]", lines);
             }
         }
     }

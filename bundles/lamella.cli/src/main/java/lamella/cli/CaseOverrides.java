@@ -10,6 +10,7 @@ import lamella.api.Layer;
 import lamella.api.Names;
 import lamella.api.ParameterRef;
 import lamella.api.ValueOrigin;
+import lamella.api.PhysicalRange;
 
 /**
  * A batch entry's {@code set}: inputs of a case replaced by their parameter paths ({@code film.thickness_m},
@@ -34,6 +35,7 @@ final class CaseOverrides {
             ParameterRef ref = parse(e.getKey(), at);
             Layer.Tie tie = tieOf(doc, ref);
             origins.removeIf(o -> sets(ref, tie, o));
+            PhysicalRange.checkKey(ref.key(), e.getValue(), at);
             try {
                 model.value(ref, at);
                 model = model.with(ref, e.getValue());

@@ -16,6 +16,6 @@ final class Origins {
             // The service was unregistered while it was being bound; it is about to be unbound again.
             return new PluginOrigin("(unregistered)", "?");
         }
-        return new PluginOrigin(bundle.getSymbolicName(), bundle.getVersion().toString());
+        return PluginOrigin.of(bundle.getSymbolicName(), bundle.getVersion().toString(), bundle.getLocation());
     }
 }

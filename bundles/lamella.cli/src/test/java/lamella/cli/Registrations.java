@@ -7,7 +7,7 @@ import org.osgi.framework.Version;
 
 /**
  * Service references as Declarative Services hands them to a bind method, for tests without a framework: they know
- * the registering bundle's name and version and nothing else.
+ * the registering bundle's name, version and location and nothing else.
  */
 final class Registrations {
 
@@ -15,9 +15,15 @@ final class Registrations {
     }
 
     static <S> ServiceReference<S> by(String symbolicName, String version) {
+        return at(symbolicName, version, "file:/plugins/" + symbolicName + ".jar");
+    }
+
+    /** A reference whose bundle was installed from a location: the runtime installs its own by reference. */
+    static <S> ServiceReference<S> at(String symbolicName, String version, String location) {
         Bundle bundle = proxy(Bundle.class, method -> switch (method) {
             case "getSymbolicName" -> symbolicName;
             case "getVersion" -> Version.parseVersion(version);
+            case "getLocation" -> location;
             default -> null;
         });
         @SuppressWarnings("unchecked")
@@ -28,7 +34,7 @@ final class Registrations {
 
     /** A reference from one of Lamella's own bundles. */
     static <S> ServiceReference<S> shipped(String symbolicName) {
-        return by(symbolicName, "0.1.0");
+        return at(symbolicName, "0.1.0", "reference:file:/bundle/" + symbolicName + ".jar");
     }
 
     private interface Answers {

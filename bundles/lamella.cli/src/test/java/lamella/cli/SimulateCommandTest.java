@@ -414,6 +414,39 @@ class SimulateCommandTest {
             bad(json, "geometry.probe_radius_m", "-4e-6", "positive", "got -4.0E-6");
         }
 
+        /**
+         * Values no sample or instrument has stop at their path before any model sees them, and the message blames
+         * the input, not the bundle that would have failed on it.
+         */
+        @ParameterizedTest
+        @ValueSource(strings = {"1e308", "1e-308", "4.9e-324"})
+        void valuesOutsideThePhysicalRangeNeverReachTheModel(String extreme) throws Exception {
+            String[][] cases = {
+                {"\"k_through_w_mk\": 200", "stack.layers[0].k_through_w_mk", "a thermal conductivity"},
+                {"\"thickness_m\": 9e-8", "stack.layers[0].thickness_m", "a length"},
+                {"\"heat_capacity_j_m3k\": 1.63e6", "stack.layers[1].heat_capacity_j_m3k", "a volumetric heat"},
+                {"\"conductance_below_w_m2k\": 1.2e8", "stack.layers[0].conductance_below_w_m2k", "a thermal boundary"},
+                {"\"pump_radius_m\": 6e-6", "geometry.pump_radius_m", "a length"},
+                {"1e5", "measurement.frequencies_hz[1]", "a frequency"}};
+            for (String[] c : cases) {
+                String piece = c[0];
+                String replaced = piece.substring(0, piece.lastIndexOf(' ') + 1) + extreme;
+                if (!piece.contains(":")) {
+                    replaced = extreme;
+                }
+                String json = caseOf(GAUSSIAN, FDTR).replace(piece, replaced);
+                Run r = bad(json, c[1], replaced, "is outside the range Lamella accepts for " + c[2]);
+                assertFalse(r.err().contains("bundle"), r.err());
+                assertFalse(r.err().contains("Exception"), r.err());
+            }
+        }
+
+        @Test
+        void aRingOfAstronomicalRadiusStopsAtItsPath() throws Exception {
+            String json = caseOf("{\"type\": \"ring\", \"ring_radius_m\": 1e308, \"probe_radius_m\": 4e-6}", FDTR);
+            bad(json, "geometry.ring_radius_m", "ring_radius_m", "outside the range", "a length");
+        }
+
         @Test
         void aNegativeFrequencyInAList() throws Exception {
             String json = caseOf(GAUSSIAN, "{\"type\": \"fdtr\", \"frequencies_hz\": [\n    1e3,\n    0,\n    1e5]}");

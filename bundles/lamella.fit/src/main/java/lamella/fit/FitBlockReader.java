@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import lamella.api.Block;
@@ -11,6 +12,7 @@ import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
 import lamella.api.InputException;
 import lamella.api.Names;
+import lamella.api.PhysicalRange;
 import lamella.api.ParameterRef;
 
 /**
@@ -87,7 +89,7 @@ final class FitBlockReader {
                 throw InputException.at(e.path(), ref + " is already free or uncertain; an input is one or the other");
             }
             double v = value(base, datasets, ref, e.path());
-            uncertain.add(new UncertainInput(ref, v, sigma(e, v),
+            uncertain.add(new UncertainInput(ref, v, sigma(e, ref, v),
                     e.has("sigma_relative") ? finite(e, "sigma_relative") : Double.NaN, e.path()));
         }
         checkDirectionsNamedOnce(free, uncertain);
@@ -278,8 +280,11 @@ final class FitBlockReader {
             double current = value(base, datasets, ref, e.path());
             initial = startGiven ? finite(e, "initial") : current;
         }
-        double min = e.has("min") ? finite(e, "min") : Double.NEGATIVE_INFINITY;
-        double max = e.has("max") ? finite(e, "max") : Double.POSITIVE_INFINITY;
+        if (startGiven) {
+            PhysicalRange.checkKey(ref.key(), initial, e.pathOf("initial"));
+        }
+        double min = e.has("min") ? inRange(e, "min", ref) : Double.NEGATIVE_INFINITY;
+        double max = e.has("max") ? inRange(e, "max", ref) : Double.POSITIVE_INFINITY;
         if (min >= max) {
             throw InputException.at(e.pathOf("max"), "the upper bound " + max + " must exceed the lower bound " + min);
         }
@@ -299,17 +304,26 @@ final class FitBlockReader {
         return new FreeInput(ref, initial, min, max, positive, scale > 0 ? scale : 1.0, e.path());
     }
 
-    private static double sigma(Block e, double value) throws InputException {
+    private static double sigma(Block e, ParameterRef ref, double value) throws InputException {
         if (e.has("sigma") == e.has("sigma_relative")) {
             throw InputException.at(e.path(), "give either \"sigma\" (absolute, in the input's unit) or"
                     + " \"sigma_relative\" (a fraction of its value)");
         }
-        double s = e.has("sigma") ? finite(e, "sigma") : finite(e, "sigma_relative") * Math.abs(value);
-        if (!(s > 0)) {
-            throw InputException.at(e.pathOf(e.has("sigma") ? "sigma" : "sigma_relative"),
-                    "an uncertainty must be positive");
+        String key = e.has("sigma") ? "sigma" : "sigma_relative";
+        double given = finite(e, key);
+        if (!(given > 0)) {
+            throw InputException.at(e.pathOf(key), "an uncertainty must be positive");
         }
-        return s;
+        if (key.equals("sigma_relative")) {
+            PhysicalRange.RELATIVE_UNCERTAINTY.check(given, e.pathOf(key));
+            return given * Math.abs(value);
+        }
+        Optional<PhysicalRange> range = PhysicalRange.forKey(ref.key());
+        if (range.isPresent() && given > range.get().max()) {
+            throw InputException.at(e.pathOf(key), "the uncertainty " + given + " exceeds every value Lamella"
+                    + " accepts for " + range.get().wording());
+        }
+        return given;
     }
 
     static List<Block> objects(Block parent, String key, boolean required) throws InputException {
@@ -352,6 +366,13 @@ final class FitBlockReader {
             throw InputException.at(b.pathOf(key), "expected a number, got " + Block.describe(v));
         }
         return d;
+    }
+
+    /** A bound of a free input: zero, or a value within the range of the input's key. */
+    private static double inRange(Block e, String key, ParameterRef ref) throws InputException {
+        double v = finite(e, key);
+        PhysicalRange.checkKey(ref.key(), v, e.pathOf(key));
+        return v;
     }
 
     static int count(Block b, String key) throws InputException {

@@ -76,7 +76,7 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
     private static PluginOrigin origin(ServiceReference<?> reference) {
         Bundle b = reference.getBundle();
         return b == null ? new PluginOrigin("(unregistered)", "?")
-                : new PluginOrigin(b.getSymbolicName(), b.getVersion().toString());
+                : PluginOrigin.of(b.getSymbolicName(), b.getVersion().toString(), b.getLocation());
     }
 
     private ModelCatalog catalog() {

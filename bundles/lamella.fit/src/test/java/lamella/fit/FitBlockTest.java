@@ -84,6 +84,37 @@ class FitBlockTest {
     }
 
     @Test
+    void aRelativeUncertaintyBeyondTheValueItselfIsRefusedAtItsPath() {
+        for (String sigma : new String[] {"1e308", "2", "1e-12"}) {
+            InputException e = fails("{\"datasets\": [{\"data\": \"fdtr.csv\"}], \"free\": [" + FREE_K + "],"
+                    + " \"uncertain\": [{\"layer\": \"film\", \"property\": \"heat_capacity_j_m3k\","
+                    + " \"sigma_relative\": " + sigma + "}]}");
+            assertEquals("fit.uncertain[0].sigma_relative", e.path(), e.getMessage());
+            assertTrue(e.getMessage().contains("a relative uncertainty between 1e-9 and 1"), e.getMessage());
+            assertTrue(e.line() > 0, "located on its line");
+        }
+    }
+
+    @Test
+    void anAbsoluteUncertaintyLargerThanAnyValueIsRefused() {
+        InputException e = fails("{\"datasets\": [{\"data\": \"fdtr.csv\"}], \"free\": [" + FREE_K + "],"
+                + " \"uncertain\": [{\"geometry\": \"pump_radius_m\", \"sigma\": 1e308}]}");
+        assertEquals("fit.uncertain[0].sigma", e.path(), e.getMessage());
+        assertTrue(e.getMessage().contains("exceeds every value Lamella accepts for a length between"), e.getMessage());
+    }
+
+    @Test
+    void startsAndBoundsOutsideThePhysicalRangeAreRefused() {
+        InputException start = fails("{\"datasets\": [{\"data\": \"fdtr.csv\"}], \"free\": [{\"layer\": \"film\","
+                + " \"property\": \"k_through_w_mk\", \"initial\": 1e-308}]}");
+        assertEquals("fit.free[0].initial", start.path());
+        assertTrue(start.getMessage().contains("a thermal conductivity between"), start.getMessage());
+        InputException max = fails("{\"datasets\": [{\"data\": \"fdtr.csv\"}], \"free\": [{\"layer\": \"film\","
+                + " \"property\": \"k_through_w_mk\", \"min\": 0, \"max\": 1e308}]}");
+        assertEquals("fit.free[0].max", max.path());
+    }
+
+    @Test
     void weightsFromDataNeedASigmaColumn() {
         InputException e = fails("{\"datasets\": [{\"data\": \"fdtr.csv\"}], \"free\": [" + FREE_K + "],"
                 + " \"weights\": \"data\"}");

@@ -188,7 +188,7 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
     private static PluginOrigin origin(ServiceReference<?> reference) {
         Bundle bundle = reference.getBundle();
         return bundle == null ? new PluginOrigin("(unregistered)", "?")
-                : new PluginOrigin(bundle.getSymbolicName(), bundle.getVersion().toString());
+                : PluginOrigin.of(bundle.getSymbolicName(), bundle.getVersion().toString(), bundle.getLocation());
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
