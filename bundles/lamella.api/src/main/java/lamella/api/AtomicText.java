@@ -6,11 +6,14 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.util.Set;
 import java.util.UUID;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Text files written so that nobody ever sees half of one: into a temporary file beside the target, then moved into
@@ -18,7 +21,27 @@ import java.util.UUID;
  */
 public final class AtomicText {
 
+    /**
+     * Temporary files being written. A process ended by a signal (Ctrl-C, SIGTERM) runs its shutdown hooks but not
+     * the {@code finally} of the writing thread, so the hook removes them: an interrupted write leaves nothing.
+     */
+    private static final Set<Path> UNFINISHED = ConcurrentHashMap.newKeySet();
+
+    static {
+        Runtime.getRuntime().addShutdownHook(new Thread(AtomicText::removeUnfinished, "lamella-unfinished-writes"));
+    }
+
     private AtomicText() {
+    }
+
+    private static void removeUnfinished() {
+        for (Path tmp : UNFINISHED) {
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException e) {
+                // The process is ending; a hidden temporary file that cannot be removed is all that is left.
+            }
+        }
     }
 
     /**
@@ -31,9 +54,13 @@ public final class AtomicText {
 
     /** Writes bytes (an image, say) the same way. */
     public static void writeBytes(Path target, byte[] content) throws IOException {
+        if (Files.isDirectory(target)) {
+            throw new FileSystemException(target.toString(), null, "Is a directory");
+        }
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
         Path tmp = dir.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".part");
+        UNFINISHED.add(tmp);
         try {
             Files.write(tmp, content, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
             keepPermissions(target, tmp);
@@ -44,6 +71,7 @@ public final class AtomicText {
             }
         } finally {
             Files.deleteIfExists(tmp);
+            UNFINISHED.remove(tmp);
         }
     }
 

@@ -10,6 +10,7 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.CancellationException;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.OwnInputs;
 import lamella.api.command.Command;
@@ -104,7 +105,7 @@ public final class BatchCommand implements Command {
             io.err().println("lamella batch: interrupted; the cases done so far are kept, run again to resume");
             return FAILED;
         } catch (IOException e) {
-            io.err().println("lamella batch: cannot write into " + out + ": " + e.getMessage());
+            io.err().println("lamella batch: cannot write into " + out + ": " + FileProblems.reason(e));
             return FAILED;
         }
     }

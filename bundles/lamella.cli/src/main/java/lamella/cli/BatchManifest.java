@@ -89,7 +89,7 @@ final class BatchManifest {
                 }
             }
         } catch (IOException e) {
-            throw new InputException(dir, null, -1, "cannot list the folder: " + e.getMessage());
+            throw new InputException(dir, null, -1, "cannot list the folder: " + FileProblems.reason(e));
         }
         if (files.isEmpty()) {
             throw new InputException(dir, null, -1, "the folder holds no case files (*.json)");

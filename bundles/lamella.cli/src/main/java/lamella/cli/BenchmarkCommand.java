@@ -1,6 +1,5 @@
 package lamella.cli;
 
-import lamella.api.guard.LiveModels;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -11,6 +10,7 @@ import java.util.Map;
 import lamella.api.Block;
 import lamella.api.BottomBoundary;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.Layer;
@@ -23,6 +23,7 @@ import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitService;
 import lamella.api.plan.PlanService;
+import lamella.api.guard.LiveModels;
 import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -133,7 +134,7 @@ public final class BenchmarkCommand implements Command {
             PlanBenchmark.run(io, caseFormat, planner, threads);
             return OK;
         } catch (IOException e) {
-            io.err().println("lamella benchmark: cannot write its temporary data: " + e.getMessage());
+            io.err().println("lamella benchmark: cannot write its temporary data: " + FileProblems.reason(e));
             return FAILED;
         } catch (InputException e) {
             io.err().println("lamella benchmark: the built-in cases need the gaussian geometry and the fdtr and tdtr"

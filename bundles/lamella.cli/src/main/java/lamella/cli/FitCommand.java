@@ -6,11 +6,12 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import lamella.api.AtomicText;
-import lamella.api.OwnInputs;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
+import lamella.api.OwnInputs;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitOutcome;
@@ -96,7 +97,7 @@ public final class FitCommand implements Command {
             io.err().println("lamella fit: cannot format the result: " + e.getMessage());
             return FAILED;
         } catch (IOException e) {
-            io.err().println("lamella fit: cannot write the result: " + e.getMessage());
+            io.err().println("lamella fit: cannot write " + io.resolve(o.value("--out")) + ": " + FileProblems.reason(e));
             return FAILED;
         }
     }

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.CancellationException;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.OwnInputs;
@@ -52,7 +53,7 @@ final class FitReportRun {
             return Command.FAILED;
         } catch (IOException e) {
             io.err().println("lamella " + command + ": cannot write the report into " + folder + ": "
-                    + e.getMessage());
+                    + FileProblems.reason(e));
             return Command.FAILED;
         }
     }

@@ -8,6 +8,7 @@ import java.util.concurrent.CancellationException;
 import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.OwnInputs;
@@ -95,7 +96,7 @@ public final class PlanCommand implements Command {
             io.err().println("lamella plan: cannot format the plans: " + e.getMessage());
             return FAILED;
         } catch (IOException e) {
-            io.err().println("lamella plan: cannot write the plans: " + e.getMessage());
+            io.err().println("lamella plan: cannot write the plans: " + FileProblems.reason(e));
             return FAILED;
         }
     }

@@ -7,12 +7,13 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import lamella.api.AtomicText;
-import lamella.api.OwnInputs;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.ValueOrigin;
+import lamella.api.OwnInputs;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.fit.FitService;
@@ -97,7 +98,8 @@ public final class SensitivityCommand implements Command {
             io.err().println("lamella sensitivity: " + casePath + ": the model cannot be evaluated: " + e.getMessage());
             return BAD_INPUT;
         } catch (IOException e) {
-            io.err().println("lamella sensitivity: cannot write: " + e.getMessage());
+            io.err().println("lamella sensitivity: cannot write " + io.resolve(o.value("--out")) + ": "
+                    + FileProblems.reason(e));
             return FAILED;
         }
     }

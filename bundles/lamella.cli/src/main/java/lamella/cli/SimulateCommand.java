@@ -1,22 +1,23 @@
 package lamella.cli;
 
-import lamella.api.AtomicText;
-import lamella.api.OwnInputs;
-import lamella.api.guard.LiveModels;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.FileProblems;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
+import lamella.api.OwnInputs;
 import lamella.api.SignalTable;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
+import lamella.api.guard.LiveModels;
 import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -144,7 +145,7 @@ public final class SimulateCommand implements Command {
         try {
             AtomicText.write(out, csv);
         } catch (IOException e) {
-            io.err().println("lamella simulate: cannot write " + out + ": " + e.getMessage());
+            io.err().println("lamella simulate: cannot write " + out + ": " + FileProblems.reason(e));
             return FAILED;
         }
         io.err().println("wrote " + table.rows() + " rows to " + out);

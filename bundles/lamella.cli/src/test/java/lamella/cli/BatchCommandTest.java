@@ -150,7 +150,7 @@ class BatchCommandTest {
         }
         String failed = t.stream().filter(l -> l.startsWith("c-broken,")).findFirst().orElseThrow();
         assertTrue(failed.contains(",failed,"), failed);
-        assertTrue(failed.contains("missing.csv") && failed.contains("no such data file"), failed);
+        assertTrue(failed.contains("missing.csv") && failed.contains("no such file"), failed);
         assertFalse(Files.exists(out.resolve("results/c-broken.json")));
         assertTrue(r.err().contains("batch 3/3 c-broken: FAILED: "), r.err());
         assertTrue(r.err().contains("batch 1/3 a-film: fitted") && r.err().contains("left"), r.err());

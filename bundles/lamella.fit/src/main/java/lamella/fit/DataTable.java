@@ -1,60 +1,45 @@
 package lamella.fit;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStreamReader;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import lamella.api.InputException;
+import lamella.api.data.Decimals;
+import lamella.api.data.ScanBuilder;
+import lamella.api.data.TextLines;
 
 /**
  * A dataset in Lamella's normalised CSV — what {@code simulate} and {@code import} write: a header of column names
  * ({@code delay_s,ratio,sigma_ratio,…}), then one row of numbers per x value; lines starting with {@code #} are
- * comments. Strict: every cell a finite number, every row as long as the header.
+ * comments. Read by the same rules as {@code import} reads instrument files ({@link TextLines}: size and line limits,
+ * strict UTF-8, a byte-order mark skipped, LF, CRLF or CR line ends; {@link Decimals}: plain or scientific numbers
+ * only), and its x column checked as {@link ScanBuilder} checks an imported scan (no repeated x, no change of
+ * direction), so that a file gets the same message here as there. Strict: every cell a finite number, every row as
+ * long as the header.
  */
 final class DataTable {
 
-    /** A normalised dataset is small; a file beyond this is not one. */
-    static final long MAX_BYTES = 64L * 1024 * 1024;
-
     private final Path file;
     private final Map<String, double[]> columns;
+    private final int[] lines;
 
-    private DataTable(Path file, Map<String, double[]> columns) {
+    private DataTable(Path file, Map<String, double[]> columns, int[] lines) {
         this.file = file;
         this.columns = columns;
+        this.lines = lines;
     }
 
     static DataTable read(Path file) throws InputException {
-        try {
-            if (!Files.isRegularFile(file)) {
-                throw new InputException(file, null, -1, "no such data file");
-            }
-            long size = Files.size(file);
-            if (size > MAX_BYTES) {
-                throw new InputException(file, null, -1, "the file is " + size + " bytes; a normalised dataset may"
-                        + " have at most " + MAX_BYTES + " (import large raw files with `lamella import` first)");
-            }
-        } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read the file: " + e.getMessage());
-        }
         List<String> header = null;
         List<double[]> rows = new ArrayList<>();
+        List<Integer> rowLines = new ArrayList<>();
         int headerLine = 0;
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(Files.newInputStream(file),
-                StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)))) {
+        try (TextLines in = TextLines.open(file)) {
             String line;
-            int n = 0;
-            while ((line = r.readLine()) != null) {
-                n++;
+            while ((line = in.next()) != null) {
+                int n = in.line();
                 String t = line.strip();
                 if (t.isEmpty() || t.startsWith("#")) {
                     continue;
@@ -65,7 +50,7 @@ final class DataTable {
                     for (String c : cells) {
                         String name = c.strip();
                         if (name.isEmpty() || header.contains(name)) {
-                            throw new InputException(file, null, n, "the header " + (name.isEmpty()
+                            throw in.error(n, "the header " + (name.isEmpty()
                                     ? "has an empty column name" : "names '" + name + "' twice"));
                         }
                         header.add(name);
@@ -74,22 +59,23 @@ final class DataTable {
                     continue;
                 }
                 if (cells.length != header.size()) {
-                    throw new InputException(file, null, n, "the row has " + cells.length + " cells; the header"
-                            + " (line " + headerLine + ") has " + header.size());
+                    throw in.error(n, "the row has " + cells.length + " cells; the header (line " + headerLine
+                            + ") has " + header.size());
                 }
                 double[] row = new double[cells.length];
                 for (int i = 0; i < cells.length; i++) {
-                    row[i] = number(cells[i].strip(), file, n, header.get(i));
+                    try {
+                        row[i] = Decimals.parse(cells[i], '.');
+                    } catch (NumberFormatException e) {
+                        throw in.error(n, "column '" + header.get(i) + "': " + e.getMessage());
+                    }
                 }
                 rows.add(row);
+                rowLines.add(n);
             }
-        } catch (CharacterCodingException e) {
-            throw new InputException(file, null, -1, "not a text file (invalid UTF-8)");
-        } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read the file: " + e.getMessage());
         }
         if (header == null) {
-            throw new InputException(file, null, 1, "the file is empty; expected a header of column names");
+            throw new InputException(file, null, 1, "the file holds no header; expected a header of column names");
         }
         if (rows.isEmpty()) {
             throw new InputException(file, null, headerLine, "the file has a header but no data rows");
@@ -102,21 +88,24 @@ final class DataTable {
             }
             columns.put(header.get(c), v);
         }
-        return new DataTable(file, columns);
+        return new DataTable(file, columns, rowLines.stream().mapToInt(Integer::intValue).toArray());
     }
 
-    private static double number(String cell, Path file, int line, String column) throws InputException {
-        double v;
-        try {
-            v = Double.parseDouble(cell);
-        } catch (NumberFormatException e) {
-            v = Double.NaN;
+    /**
+     * Checks the x column as an imported scan is checked: each x once, in one direction (up or down); the error
+     * names the line where it is not.
+     */
+    void checkX(String xColumn) throws InputException {
+        ScanBuilder scan = new ScanBuilder(file, xColumn, List.of(), List.of());
+        double[] x = columns.get(xColumn);
+        for (int i = 0; i < x.length; i++) {
+            scan.add(lines[i], x[i], new double[0], new double[0]);
         }
-        if (!Double.isFinite(v)) {
-            throw new InputException(file, null, line, "column '" + column + "': '" + cell
-                    + "' is not a finite number");
-        }
-        return v;
+    }
+
+    /** The line of a data row (0-based row index). */
+    int lineOf(int row) {
+        return lines[row];
     }
 
     Path file() {

@@ -78,6 +78,7 @@ final class FitProblem {
                         + "; the file has " + String.join(", ", table.names()));
             }
         }
+        table.checkX(xColumn);
         if (d.weighting() != null) {
             weighting = d.weighting();
         }
@@ -93,8 +94,8 @@ final class FitProblem {
             double[] all = table.column(sigmaColumn);
             for (int i = 0; i < all.length; i++) {
                 if (keep[i] && !(all[i] > 0)) {
-                    throw new InputException(d.file(), null, -1, "column '" + sigmaColumn + "', row " + (i + 1)
-                            + ": a standard deviation must be positive, got " + all[i]);
+                    throw new InputException(d.file(), null, table.lineOf(i), "column '" + sigmaColumn
+                            + "': a standard deviation must be positive, got " + all[i]);
                 }
             }
             sigma = RowSelection.select(all, keep);

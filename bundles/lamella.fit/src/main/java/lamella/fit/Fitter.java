@@ -8,6 +8,7 @@ import lamella.api.CaseModel;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.ModelCatalog;
+import lamella.api.Names;
 import lamella.api.ParameterRef;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
@@ -149,7 +150,8 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
             }
             FitProblem problem = FitProblem.of(doc, spec, catalog);
             PreparedDataset d = problem.datasets.get(dataset);
-            SensitivityTable t = Sensitivities.of(d.model, catalog, d.xColumn, d.x, signal != null ? signal : d.signal);
+            String s = signal != null ? chosen(d.model.simulation(catalog).technique(), signal) : d.signal;
+            SensitivityTable t = Sensitivities.of(d.model, catalog, d.xColumn, d.x, s);
             return new SensitivityTable(t.xColumn(), t.x(), t.signal(), t.phaseLike(),
                     t.parameters().stream().map(r -> named(r, d.spec)).toList(), t.quantities(), t.values());
         } catch (InputException e) {
@@ -167,8 +169,9 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
     private static String chosen(Technique t, String signal) throws InputException {
         String s = signal != null ? signal : Signals.usual(t.type()).orElse(t.signalColumns().get(0));
         if (!t.signalColumns().contains(s)) {
-            throw InputException.at("signal", "technique '" + t.type() + "' has no signal '" + s + "'; it gives "
-                    + String.join(", ", t.signalColumns()));
+            throw InputException.at("--signal", "technique '" + t.type() + "' has no signal '" + s + "'"
+                    + Names.closest(s, t.signalColumns()).map(c -> " (did you mean '" + c + "'?)").orElse("")
+                    + "; it gives " + String.join(", ", t.signalColumns()));
         }
         return s;
     }

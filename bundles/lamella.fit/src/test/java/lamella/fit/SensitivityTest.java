@@ -106,6 +106,19 @@ class SensitivityTest {
         assertTrue(tdtr.parameters().contains(ParameterRef.geometry("pump_radius_m")));
     }
 
+    /** An unknown --signal lists the technique's signals, for the TDTR and the FDTR dataset of the demo. */
+    @Test
+    void anUnknownSignalListsTheValidOnes() throws Exception {
+        CaseDocument doc = Synthetic.readExisting(DemoDataTest.DEMO);
+        for (int dataset : new int[] {0, 2}) {
+            lamella.api.InputException e = org.junit.jupiter.api.Assertions.assertThrows(
+                    lamella.api.InputException.class, () -> Synthetic.fitter().sensitivity(doc, dataset, "phse_deg"));
+            assertTrue(e.getMessage().contains("has no signal 'phse_deg'"), e.getMessage());
+            assertTrue(e.getMessage().contains("; it gives "), e.getMessage());
+            assertTrue(e.getMessage().contains("phase_deg"), e.getMessage());
+        }
+    }
+
     private static double value(SensitivityTable t, ParameterRef r) {
         int j = t.parameters().indexOf(r);
         assertTrue(j >= 0, r + " in " + t.parameters());

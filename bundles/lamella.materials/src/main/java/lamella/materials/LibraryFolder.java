@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
+import lamella.api.FileProblems;
 import lamella.api.material.LibraryFinding;
 import lamella.api.material.LibraryInfo;
 import lamella.api.material.LibraryTier;
@@ -26,7 +27,7 @@ final class LibraryFolder {
                     .map(p -> new SourceFile(p.toString(), p.getFileName().toString(), () -> Files.newInputStream(p)))
                     .toList();
         } catch (IOException e) {
-            return unusable(tier, location, "cannot be listed: " + e.getMessage());
+            return unusable(tier, location, "cannot be listed: " + FileProblems.reason(e));
         }
         return LibraryReader.read(tier, location, files);
     }

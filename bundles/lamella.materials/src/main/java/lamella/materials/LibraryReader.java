@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import lamella.api.Block;
+import lamella.api.FileProblems;
 import lamella.api.Names;
 import lamella.api.material.LibraryFinding;
 import lamella.api.material.LibraryInfo;
@@ -155,7 +156,7 @@ final class LibraryReader {
         try (InputStream in = f.opener().open()) {
             return json.read(in);
         } catch (IOException e) {
-            throw new FindingException(f.label(), -1, "", "cannot read the file: " + e.getMessage());
+            throw new FindingException(f.label(), -1, "", FileProblems.cannotRead(e));
         }
     }
 

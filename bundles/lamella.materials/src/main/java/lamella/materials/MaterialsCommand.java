@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 import lamella.api.AtomicText;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.OwnInputs;
 import lamella.api.command.Command;
@@ -179,7 +180,7 @@ public final class MaterialsCommand implements Command {
         try {
             AtomicText.write(target, json);
         } catch (IOException e) {
-            io.err().println("lamella materials: cannot write " + target + ": " + e.getMessage());
+            io.err().println("lamella materials: cannot write " + target + ": " + FileProblems.reason(e));
             return FAILED;
         }
         io.err().println("wrote " + m.label() + " to " + target);

@@ -1,6 +1,7 @@
 package lamella.launcher;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -26,11 +27,13 @@ public final class FelixRuntime implements AutoCloseable {
     private final Path pluginsDir;
     private final List<Path> pluginsAtLaunch;
     private final List<String> startProblems;
+    private final StandardErrorLog log;
     private boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
-            List<String> startProblems) {
+            List<String> startProblems, StandardErrorLog log) {
         this.framework = framework;
+        this.log = log;
         this.storage = storage;
         this.pluginsDir = pluginsDir;
         this.pluginsAtLaunch = pluginsAtLaunch;
@@ -70,13 +73,15 @@ public final class FelixRuntime implements AutoCloseable {
             }
 
             Map<String, Object> config = new HashMap<>(properties);
-            config.put(FelixConstants.LOG_LOGGER_PROP, new StandardErrorLog());
+            StandardErrorLog log = new StandardErrorLog();
+            config.put(FelixConstants.LOG_LOGGER_PROP, log);
+            PluginFolderLog.install();
             framework = new Felix(config);
             framework.start();
             // Started once the framework runs, so that a bundle that cannot start says why here.
             List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped,
                     installedOnly);
-            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems));
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems), log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -104,17 +109,40 @@ public final class FelixRuntime implements AutoCloseable {
         return startProblems;
     }
 
-    /** Stops the framework and deletes its storage; safe to call again, also from a shutdown hook. */
+    /**
+     * Stops the framework and deletes its storage; safe to call again. The framework's and the plugins folder's
+     * messages stop first: bundles stopping, or a jar dropped into plugins/ meanwhile, are nothing to report.
+     */
     @Override
     public synchronized void close() {
         if (closed) {
             return;
         }
         closed = true;
+        log.silence();
+        PluginFolderLog.silence();
         try {
             stop(framework);
         } finally {
             storage.delete();
+        }
+    }
+
+    /**
+     * Ends the runtime of a process that a signal is ending: the framework is left as it is — stopping it would
+     * deactivate the command under way and have it report that — nothing more is logged, and the storage goes.
+     */
+    public synchronized void discard() {
+        if (closed) {
+            return;
+        }
+        closed = true;
+        log.silence();
+        PluginFolderLog.silence();
+        try {
+            storage.delete();
+        } catch (UncheckedIOException stillInUse) {
+            // The cache is a temporary folder; a file the running framework still writes is left to the system.
         }
     }
 

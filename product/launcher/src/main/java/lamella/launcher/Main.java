@@ -23,6 +23,9 @@ public final class Main {
     private static final long POLL_MS = 20;
     private static final int FAILED = 1;
 
+    /** Set once the command (or the workbench) has ended by itself, before the runtime is closed. */
+    private static volatile boolean finished;
+
     private Main() {
     }
 
@@ -44,7 +47,7 @@ public final class Main {
             System.err.println("lamella: could not start the runtime: " + e.getMessage());
             return FAILED;
         }
-        Runtime.getRuntime().addShutdownHook(new Thread(runtime::close, "lamella-shutdown"));
+        Runtime.getRuntime().addShutdownHook(new Thread(() -> ending(runtime), "lamella-shutdown"));
         try {
             runtime.startProblems().forEach(p -> System.err.println("lamella: " + p));
             BundleContext context = runtime.framework().getBundleContext();
@@ -58,7 +61,29 @@ public final class Main {
             Thread.currentThread().interrupt();
             return FAILED;
         } finally {
+            finished = true;
             runtime.close();
+        }
+    }
+
+    /**
+     * The JVM is ending. After the command's own end this does nothing more; otherwise a signal (Ctrl-C, SIGTERM)
+     * is ending it, and the JVM exits with 128 + the signal's number (130, 143) once this returns. The user gets one
+     * line, and nothing after it: standard output and error are held while the runtime is discarded, so the
+     * command under way cannot print about its own end; its outputs are written atomically, so none is half there.
+     */
+    private static void ending(FelixRuntime runtime) {
+        if (finished) {
+            runtime.close();
+            return;
+        }
+        synchronized (System.out) {
+            synchronized (System.err) {
+                System.out.flush();
+                runtime.discard();
+                System.err.println("lamella: interrupted");
+                System.err.flush();
+            }
         }
     }
 

@@ -4,11 +4,24 @@ import org.apache.felix.framework.Logger;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.ServiceReference;
 
-/** Sends the framework's own messages to standard error: standard output carries command results only. */
+/**
+ * Sends the framework's own messages to standard error (standard output carries command results only), and none
+ * once the runtime is stopping: bundles going away then say nothing a user needs.
+ */
 final class StandardErrorLog extends Logger {
+
+    private volatile boolean quiet;
+
+    /** From now on nothing is printed. */
+    void silence() {
+        quiet = true;
+    }
 
     @Override
     protected void doLog(Bundle bundle, ServiceReference sr, int level, String message, Throwable failure) {
+        if (quiet) {
+            return;
+        }
         StringBuilder line = new StringBuilder("lamella: framework ").append(levelName(level)).append(": ");
         if (bundle != null) {
             line.append('[').append(bundle.getSymbolicName()).append("] ");

@@ -11,6 +11,7 @@ import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 
 /**
@@ -44,7 +45,7 @@ public final class TextLines implements Closeable {
         try {
             return new TextLines(file, Files.newInputStream(file));
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read: " + e.getMessage());
+            throw new InputException(file, null, -1, "cannot read: " + FileProblems.reason(e));
         }
     }
 
@@ -53,6 +54,9 @@ public final class TextLines implements Closeable {
         if (!Files.exists(file)) {
             throw new InputException(file, null, -1, "no such file");
         }
+        if (Files.isDirectory(file)) {
+            throw new InputException(file, null, -1, "is a directory; expected a data file");
+        }
         if (!Files.isRegularFile(file)) {
             throw new InputException(file, null, -1, "not a regular file");
         }
@@ -60,7 +64,7 @@ public final class TextLines implements Closeable {
         try {
             size = Files.size(file);
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read its size: " + e.getMessage());
+            throw new InputException(file, null, -1, "cannot read its size: " + FileProblems.reason(e));
         }
         if (size == 0) {
             throw new InputException(file, null, -1, "the file is empty; expected a data file");
@@ -124,7 +128,7 @@ public final class TextLines implements Closeable {
                 buffer[length++] = (byte) b;
             }
         } catch (IOException e) {
-            throw error(line + 1, "cannot read: " + e.getMessage());
+            throw error(line + 1, "cannot read: " + FileProblems.reason(e));
         }
         line++;
         if (line > ImportLimits.MAX_LINES) {

@@ -6,15 +6,16 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
 import lamella.api.AtomicText;
+import lamella.api.FileProblems;
 import lamella.api.HeatingGeometry;
 import lamella.api.InputException;
 import lamella.api.Technique;
 import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 import lamella.api.data.DataImporter;
-import lamella.api.data.DatasetSettings;
 import lamella.api.data.Dataset;
 import lamella.api.data.ImporterProfiles;
+import lamella.api.data.DatasetSettings;
 import lamella.api.data.SignalNames;
 import lamella.api.data.StatedSettings;
 import lamella.conditioning.ConditionedTable;
@@ -214,7 +215,7 @@ public final class ImportCommand implements Command {
             try {
                 AtomicText.write(out, csv);
             } catch (IOException e) {
-                io.err().println("lamella import: cannot write " + out + ": " + e.getMessage());
+                io.err().println("lamella import: cannot write " + out + ": " + FileProblems.reason(e));
                 return FAILED;
             }
             io.err().println("wrote " + table.rows() + " rows to " + out);

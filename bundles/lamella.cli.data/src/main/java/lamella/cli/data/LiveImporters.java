@@ -9,6 +9,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.TreeSet;
 import java.util.concurrent.CopyOnWriteArrayList;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.Names;
 import lamella.api.data.DataImporter;
@@ -104,7 +105,7 @@ final class LiveImporters {
         try (InputStream in = Files.newInputStream(file)) {
             head = in.readNBytes(ImportLimits.HEAD_BYTES);
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read: " + e.getMessage());
+            throw new InputException(file, null, -1, "cannot read: " + FileProblems.reason(e));
         }
         int line = 1;
         for (int k = 0; k < head.length; k++) {

@@ -23,6 +23,7 @@ import java.util.function.Predicate;
 import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ParameterRef;
 import lamella.api.fit.FitOutcome;
@@ -659,7 +660,7 @@ public final class Project {
         } catch (InputException e) {
             problem = new InputException(file, e.path(), e.line(), e.problem());
         } catch (IOException e) {
-            problem = new InputException(file, null, -1, "cannot check the case: " + e.getMessage());
+            problem = new InputException(file, null, -1, "cannot check the case: " + FileProblems.reason(e));
         } finally {
             if (tmp != null) {
                 try {

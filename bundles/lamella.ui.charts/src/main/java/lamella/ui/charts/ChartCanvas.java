@@ -7,6 +7,7 @@ import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Path;
+import lamella.api.FileProblems;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.events.MouseEvent;
 import org.eclipse.swt.graphics.GC;
@@ -357,7 +358,8 @@ public final class ChartCanvas extends Composite {
         } catch (IOException | RuntimeException ex) {
             MessageBox box = new MessageBox(getShell(), SWT.ICON_ERROR | SWT.OK);
             box.setText("Export failed");
-            box.setMessage("Could not write " + target + ": " + ex.getMessage());
+            box.setMessage("Could not write " + target + ": " + (ex instanceof IOException io ? FileProblems.reason(io)
+                    : ex.getMessage()));
             box.open();
         }
     }

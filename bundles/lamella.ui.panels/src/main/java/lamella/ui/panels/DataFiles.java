@@ -8,6 +8,7 @@ import java.nio.file.attribute.FileTime;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.data.DataImporter;
 import lamella.api.data.Dataset;
@@ -33,7 +34,7 @@ final class DataFiles {
                 head = in.readNBytes(ImportLimits.HEAD_BYTES);
             }
         } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read the data file: " + e.getMessage());
+            throw new InputException(file, null, -1, "cannot read the data file: " + FileProblems.reason(e));
         }
         Read known = cache.get(file);
         if (known != null && known.modified().equals(modified)) {

@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.Optional;
 import java.util.function.Consumer;
+import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.ui.api.CaseReader;
 import lamella.ui.api.JsonFiles;
@@ -238,7 +239,7 @@ final class ProjectSession {
             Files.deleteIfExists(recoveryCase());
             Files.deleteIfExists(recoveryInfo());
         } catch (IOException e) {
-            messages.warning("Could not delete the old recovery copy in " + user.recovery() + ": " + e.getMessage());
+            messages.warning("Could not delete the old recovery copy in " + user.recovery() + ": " + FileProblems.reason(e));
         }
     }
 
