@@ -33,7 +33,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
-import org.osgi.framework.InvalidSyntaxException;
 import org.osgi.framework.ServiceReference;
 
 import lamella.launcher.FelixRuntime;
@@ -219,31 +218,10 @@ class ImporterDropInIT {
     }
 
     private ServiceReference<?> command(String name) {
-        for (ServiceReference<?> reference : references(COMMAND)) {
-            Bundle bundle = reference.getBundle();
-            Object service = bundle == null ? null : context.getService(reference);
-            if (service == null) {
-                continue;
-            }
-            try {
-                if (name.equals(bundle.loadClass(COMMAND).getMethod("name").invoke(service))) {
-                    return reference;
-                }
-            } catch (ReflectiveOperationException e) {
-                throw new AssertionError("cannot call name() of a command", e);
-            } finally {
-                context.ungetService(reference);
-            }
-        }
-        return null;
+        return LiveCommands.command(context, name);
     }
 
     private List<ServiceReference<?>> references(String type) {
-        try {
-            ServiceReference<?>[] found = context.getAllServiceReferences(type, null);
-            return found == null ? List.of() : List.of(found);
-        } catch (InvalidSyntaxException e) {
-            throw new AssertionError(e);
-        }
+        return LiveCommands.references(context, type);
     }
 }

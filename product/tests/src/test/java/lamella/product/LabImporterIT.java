@@ -21,7 +21,6 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.osgi.framework.BundleContext;
-import org.osgi.framework.InvalidSyntaxException;
 import org.osgi.framework.ServiceReference;
 
 import lamella.launcher.FelixRuntime;
@@ -149,30 +148,6 @@ class LabImporterIT {
     }
 
     private ServiceReference<?> command(String name) {
-        try {
-            ServiceReference<?>[] found = context.getAllServiceReferences(COMMAND, null);
-            if (found == null) {
-                return null;
-            }
-            for (ServiceReference<?> reference : found) {
-                Object service = context.getService(reference);
-                if (service == null) {
-                    continue;
-                }
-                try {
-                    Object named = reference.getBundle().loadClass(COMMAND).getMethod("name").invoke(service);
-                    if (name.equals(named)) {
-                        return reference;
-                    }
-                } catch (ReflectiveOperationException e) {
-                    throw new AssertionError("cannot call name() of a command", e);
-                } finally {
-                    context.ungetService(reference);
-                }
-            }
-            return null;
-        } catch (InvalidSyntaxException e) {
-            throw new AssertionError(e);
-        }
+        return LiveCommands.command(context, name);
     }
 }
