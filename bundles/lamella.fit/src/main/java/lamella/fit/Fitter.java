@@ -23,6 +23,9 @@ import lamella.api.fit.SensitivityTable;
 import lamella.api.guard.LiveModels;
 import lamella.api.plan.PlanOutcome;
 import lamella.api.plan.PlanService;
+import lamella.api.plan.PlanSetting;
+import lamella.api.plan.PlannedResult;
+import lamella.api.plan.PlannedSensitivity;
 import lamella.api.guard.PluginOrigin;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.ServiceReference;
@@ -112,6 +115,24 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
     public PlanOutcome plan(CaseDocument doc, int threads, Progress progress) throws InputException {
         try {
             return Planner.run(doc, catalog(), threads, progress);
+        } catch (InputException e) {
+            throw doc.locate(e);
+        }
+    }
+
+    @Override
+    public List<PlanSetting> settings(CaseDocument doc, PlannedResult plan) throws InputException {
+        try {
+            return Planner.settings(doc, catalog(), plan);
+        } catch (InputException e) {
+            throw doc.locate(e);
+        }
+    }
+
+    @Override
+    public List<PlannedSensitivity> sensitivity(CaseDocument doc, PlannedResult plan) throws InputException {
+        try {
+            return Planner.sensitivity(doc, catalog(), plan);
         } catch (InputException e) {
             throw doc.locate(e);
         }

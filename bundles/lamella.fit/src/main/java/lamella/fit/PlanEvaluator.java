@@ -16,6 +16,9 @@ import lamella.api.ModelEvaluationException;
 import lamella.api.ParameterRef;
 import lamella.api.Simulation;
 import lamella.api.fit.BudgetLine;
+import lamella.api.fit.SensitivityTable;
+import lamella.api.plan.PlanSetting;
+import lamella.api.plan.PlannedSensitivity;
 import lamella.api.plan.PlannedResult;
 import lamella.api.plan.PredictedSigma;
 
@@ -205,6 +208,101 @@ final class PlanEvaluator {
             }
         }
         return out;
+    }
+
+    /** The choice a plan of the outcome stands for (null for the baseline), from its values. */
+    Choice choiceOf(PlannedResult p) throws InputException {
+        if (p.status() == PlannedResult.Status.BASELINE) {
+            return null;
+        }
+        List<PlanSpec.Variable> vars = plan.variables();
+        if (p.values().size() != vars.size()) {
+            throw InputException.at("plan.vary", "the plan has " + p.values().size() + " values but the plan block"
+                    + " varies " + vars.size() + " keys; plan the case again");
+        }
+        double[][] values = new double[vars.size()][];
+        for (int i = 0; i < values.length; i++) {
+            Object v = p.values().get(i);
+            if (v instanceof Double d) {
+                values[i] = new double[] {d};
+            } else if (v instanceof List<?> l && !l.isEmpty() && l.stream().allMatch(Double.class::isInstance)) {
+                values[i] = l.stream().mapToDouble(Double.class::cast).toArray();
+            } else {
+                throw InputException.at(vars.get(i).path(), "the plan's value of " + vars.get(i).label() + " is "
+                        + v + "; expected a number or a list of numbers");
+            }
+        }
+        return new Choice(values);
+    }
+
+    /** The value each varied key takes in the case under one plan (a moved end: the whole list). */
+    List<PlanSetting> settings(Choice c) throws InputException {
+        List<PlanSetting> out = new ArrayList<>();
+        if (c == null) {
+            return out;
+        }
+        List<PlanSpec.Variable> vars = plan.variables();
+        for (int i = 0; i < vars.size(); i++) {
+            PlanSpec.Variable v = vars.get(i);
+            double[] values = c.values()[i];
+            if (values.length > 1) {
+                StringBuilder list = new StringBuilder();
+                for (double x : values) {
+                    list.append(list.length() == 0 ? "" : ", ").append(number(x));
+                }
+                throw InputException.at(v.path(), "this plan measures " + v.label() + " at " + list + " together,"
+                        + " and a case holds one value of it per dataset: give each measurement a dataset of its"
+                        + " own and set the value there");
+            }
+            if (v.end() == null) {
+                out.add(new PlanSetting(v.ref(), values[0]));
+                continue;
+            }
+            CaseModel moved = Designs.apply(modelOf(v.ref()), v.ref(), v.end(), values[0]);
+            Block block = v.ref().scope() == ParameterRef.Scope.GEOMETRY ? moved.geometry() : moved.measurement();
+            out.add(new PlanSetting(v.ref(), block.get(v.ref().key())));
+        }
+        return out;
+    }
+
+    /** The case, or for a key of a dataset's own block that dataset's blocks, as written. */
+    private CaseModel modelOf(ParameterRef ref) throws InputException {
+        if (ref.dataset() >= 0) {
+            for (DatasetSpec d : fit.datasets()) {
+                if (d.index() == ref.dataset()) {
+                    return new CaseModel(doc.stack(), d.geometry() != null ? d.geometry() : doc.geometry(),
+                            d.measurement() != null ? d.measurement() : doc.measurement());
+                }
+            }
+            throw InputException.at("plan.vary", ref + " names dataset " + ref.dataset() + ", which the fit block"
+                    + " does not have");
+        }
+        return new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+    }
+
+    /** The sensitivities of each of a plan's measurements at its x values. */
+    List<PlannedSensitivity> sensitivity(Choice c) throws InputException {
+        List<PlannedSensitivity> out = new ArrayList<>();
+        for (Measurement m : measurements(c)) {
+            EvaluationCancelledException.checkpoint();
+            Simulation sim = m.model.simulation(catalog);
+            String signal = Designs.signal(m.source, sim.technique());
+            SensitivityTable t = Sensitivities.of(m.model, catalog, sim.technique().xColumn().orElse("x"),
+                    x(m, sim), signal);
+            List<ParameterRef> refs = t.parameters().stream().map(r -> named(r, m.source)).toList();
+            String words = "dataset " + m.source.index()
+                    + (m.replica == null ? "" : ", " + m.replica.substring("of the ".length()));
+            out.add(new PlannedSensitivity(words, new SensitivityTable(t.xColumn(), t.x(), t.signal(),
+                    t.phaseLike(), refs, t.quantities(), t.values())));
+        }
+        return out;
+    }
+
+    /** A dataset's own geometry or measurement block is addressed through the dataset, as the fit block does. */
+    private static ParameterRef named(ParameterRef r, DatasetSpec d) {
+        boolean own = (r.scope() == ParameterRef.Scope.GEOMETRY && d.geometry() != null)
+                || (r.scope() == ParameterRef.Scope.MEASUREMENT && d.measurement() != null);
+        return own ? r.inDataset(d.index()) : r;
     }
 
     /** Whether a parameter of the case reaches a dataset of the fit block (as the fit decides it). */

@@ -17,6 +17,8 @@ import lamella.api.ModelEvaluationException;
 import lamella.api.ParameterRef;
 import lamella.api.fit.Progress;
 import lamella.api.plan.PlanOutcome;
+import lamella.api.plan.PlanSetting;
+import lamella.api.plan.PlannedSensitivity;
 import lamella.api.plan.PlannedResult;
 
 /** Reads a case's plan and fit blocks, evaluates the baseline and every plan over a pool of threads, ranks them. */
@@ -81,6 +83,23 @@ final class Planner {
                 : String.format(Locale.ROOT, "%.3g", n.value())) + " per point (" + n.source() + ")"));
         return new PlanOutcome(spec.combine().words, targets, varied, noise, limits(spec.limits()), baseline, plans,
                 warnings);
+    }
+
+    static List<PlanSetting> settings(CaseDocument doc, ModelCatalog catalog, PlannedResult plan)
+            throws InputException {
+        PlanEvaluator evaluator = evaluator(doc, catalog);
+        return evaluator.settings(evaluator.choiceOf(plan));
+    }
+
+    static List<PlannedSensitivity> sensitivity(CaseDocument doc, ModelCatalog catalog, PlannedResult plan)
+            throws InputException {
+        PlanEvaluator evaluator = evaluator(doc, catalog);
+        return evaluator.sensitivity(evaluator.choiceOf(plan));
+    }
+
+    private static PlanEvaluator evaluator(CaseDocument doc, ModelCatalog catalog) throws InputException {
+        FitSpec fit = FitBlockReader.readForPlan(doc);
+        return new PlanEvaluator(doc, fit, PlanBlockReader.read(doc, fit, catalog), catalog);
     }
 
     private static List<PlannedResult> evaluateAll(PlanEvaluator evaluator, List<PlanEvaluator.Choice> choices,

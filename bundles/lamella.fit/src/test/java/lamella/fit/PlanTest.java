@@ -250,4 +250,68 @@ class PlanTest {
             assertEquals(expected, (Double) f.get(i), 1e-9 * expected, "point " + i);
         }
     }
+
+    /**
+     * A plan's settings are its values as the case holds them: a number in place, a moved end as the whole list
+     * (the list as Designs.apply moves it, checked above); values measured together cannot go into one case and are
+     * refused at their plan entry. Common practice, no source.
+     */
+    @Test
+    void aPlansSettingsAreItsValuesInTheCase() throws Exception {
+        CaseDocument doc = fdtrPlan("{\"vary\": [{\"geometry\": \"pump_radius_m\", \"values\": [3e-6, 1.5e-5]},"
+                + " {\"measurement\": \"frequencies_hz\", \"end\": \"last\", \"values\": [1e6, 5e7]}]}");
+        PlanOutcome o = plan(doc);
+        assertTrue(Synthetic.fitter().settings(doc, o.baseline()).isEmpty(), "the case as written changes nothing");
+        for (PlannedResult p : o.plans()) {
+            List<lamella.api.plan.PlanSetting> s = Synthetic.fitter().settings(doc, p);
+            assertEquals(2, s.size());
+            assertEquals(lamella.api.ParameterRef.geometry("pump_radius_m"), s.get(0).ref());
+            assertEquals(p.values().get(0), s.get(0).value());
+            List<?> f = (List<?>) s.get(1).value();
+            assertEquals(30, f.size());
+            assertEquals(p.values().get(1), f.get(29));
+            assertEquals(doc.measurement().get("frequencies_hz") instanceof List<?> l ? l.get(0) : null, f.get(0));
+        }
+        CaseDocument pairs = fdtrPlan("{\"vary\": [{\"geometry\": \"pump_radius_m\", \"values\": [3e-6, 1e-5,"
+                + " 1.5e-5], \"choose\": [2]}]}");
+        InputException joint = assertThrows(InputException.class,
+                () -> Synthetic.fitter().settings(pairs, plan(pairs).plans().get(0)));
+        assertEquals("plan.vary[0]", joint.path());
+    }
+
+    /**
+     * A plan's sensitivity curves are those of the case with the plan's values written in (the same central
+     * differences as lamella sensitivity, so equal to rounding; common practice, no source), one table per
+     * measurement of a joint plan.
+     */
+    @Test
+    void aPlansSensitivitiesAreThoseOfTheCaseAtItsValues() throws Exception {
+        CaseDocument doc = fdtrPlan("{\"vary\": [{\"geometry\": \"pump_radius_m\", \"values\": [3e-6, 1.5e-5]}]}");
+        PlanOutcome o = plan(doc);
+        for (PlannedResult p : List.of(o.baseline(), o.plans().get(0), o.plans().get(1))) {
+            double radius = p.values().isEmpty() ? 6e-6 : (Double) p.values().get(0);
+            CaseDocument at = Synthetic.read(dir, "{" + Synthetic.STACK.formatted(1.2e8, 1.4) + ","
+                    + BEAMS.replace("6e-6", String.valueOf(radius)) + ", \"measurement\": {\"type\": \"fdtr\","
+                    + " \"frequencies_hz\": " + list(Synthetic.logSpaced(1e4, 2e7, 30)) + "}}");
+            lamella.api.fit.SensitivityTable expected = Synthetic.fitter().sensitivity(at, -1, null);
+            List<lamella.api.plan.PlannedSensitivity> got = Synthetic.fitter().sensitivity(doc, p);
+            assertEquals(1, got.size());
+            assertEquals("dataset 0", got.get(0).measurement());
+            lamella.api.fit.SensitivityTable t = got.get(0).table();
+            assertEquals(expected.signal(), t.signal());
+            for (int j = 0; j < expected.parameters().size(); j++) {
+                int k = t.parameters().indexOf(expected.parameters().get(j));
+                assertTrue(k >= 0, expected.label(j));
+                for (int i = 0; i < t.x().length; i++) {
+                    assertEquals(expected.values()[j][i], t.values()[k][i], 1e-9, expected.label(j) + " at " + i);
+                }
+            }
+        }
+        CaseDocument pairs = fdtrPlan("{\"vary\": [{\"geometry\": \"pump_radius_m\", \"values\": [3e-6, 1.5e-5],"
+                + " \"choose\": [2]}]}");
+        List<lamella.api.plan.PlannedSensitivity> two = Synthetic.fitter().sensitivity(pairs, plan(pairs).plans().get(0));
+        assertEquals(2, two.size());
+        assertEquals("dataset 0, measurement at geometry.pump_radius_m = 3.000e-06",
+                two.get(0).measurement());
+    }
 }
