@@ -68,6 +68,9 @@ public final class StatedSettings {
         for (Map.Entry<String, String> e : dataset.metadata().entrySet()) {
             String key = e.getKey().strip();
             String value = e.getValue().strip();
+            if (key.equals(TextLines.ENCODING_KEY)) {
+                continue;
+            }
             if (key.equalsIgnoreCase(TECHNIQUE)) {
                 b.technique(value, value);
             } else if (!key.startsWith("lab.") && !key.startsWith("note.") && !Units.ofKey(key).isEmpty()) {

@@ -15,17 +15,28 @@ import lamella.api.FileProblems;
 import lamella.api.InputException;
 
 /**
- * The lines of a UTF-8 text file, streamed one at a time within {@link ImportLimits}: the size is checked before
- * reading, each line is decoded strictly (a NUL byte or a byte sequence that is not UTF-8 is an error on that line),
- * and no line or line count grows without bound. Line ends may be LF, CRLF or CR; a leading byte-order mark is
- * skipped. Every error names the file and line.
+ * The lines of a text file, streamed one at a time within {@link ImportLimits}: the size is checked before reading,
+ * no line or line count grows without bound, and line ends may be LF, CRLF or CR. Every error names the file and line.
+ *
+ * <p>The encoding is found from the bytes, and {@link #encoding()} says which was used: a byte-order mark decides
+ * UTF-8 or UTF-16 (little or big endian); without one, the file is UTF-8 when all of it is valid UTF-8, else Latin-1
+ * (ISO 8859-1), or Windows-1252 when it uses that code page's printable characters in 0x80–0x9F. A file that is
+ * none of these — a NUL byte outside UTF-16, or control bytes in a file that is not UTF-8 — is refused as binary at
+ * the line of the first such byte, never read as text.
  */
 public final class TextLines implements Closeable {
 
+    /**
+     * The {@link Dataset#metadata()} key under which importers record {@link #encoding()}, the encoding the text was
+     * read in (not a value the file states).
+     */
+    public static final String ENCODING_KEY = "lamella.text_encoding";
+
     private final Path file;
     private final InputStream in;
-    private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
-            .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+    private final String encoding;
+    private final boolean skipBom;
+    private final CharsetDecoder decoder;
     private final byte[] buffer = new byte[ImportLimits.MAX_LINE_BYTES];
     private final byte[] chunk = new byte[1 << 16];
     private int chunkLength;
@@ -34,19 +45,68 @@ public final class TextLines implements Closeable {
     private boolean pendingLf;
     private boolean lastTerminated = true;
 
-    private TextLines(Path file, InputStream in) {
+    private TextLines(Path file, InputStream in, TextEncoding.Found found) {
         this.file = file;
         this.in = in;
+        this.encoding = found.description();
+        this.skipBom = found.skipUtf8Bom();
+        this.decoder = found.lineCharset().newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
     }
 
-    /** Opens a data file after checking that it exists, is a regular file, is not empty and is within the size limit. */
+    /**
+     * Opens a data file after checking that it exists, is a regular file, is not empty and is within the size limit,
+     * and finds its encoding (which reads the file once through).
+     */
     public static TextLines open(Path file) throws InputException {
         checkReadable(file);
+        TextEncoding.Found found = TextEncoding.find(file);
+        if (found.utf8Bytes() != null) {
+            return new TextLines(file, new java.io.ByteArrayInputStream(found.utf8Bytes()), found);
+        }
         try {
-            return new TextLines(file, Files.newInputStream(file));
+            return new TextLines(file, Files.newInputStream(file), found);
         } catch (IOException e) {
             throw new InputException(file, null, -1, "cannot read: " + FileProblems.reason(e));
         }
+    }
+
+    /**
+     * The first bytes of a data file for {@link DataImporter#confidence}, after the checks of {@link #open}: a NUL
+     * byte outside UTF-16 text is refused at once (the file is binary); UTF-16 text, which has a byte-order mark, is
+     * given as UTF-8 so that every importer sees text, cut after its last complete line when the head was cut.
+     */
+    public static byte[] head(Path file) throws InputException {
+        checkReadable(file);
+        byte[] head;
+        try (InputStream in = Files.newInputStream(file)) {
+            head = in.readNBytes(ImportLimits.HEAD_BYTES);
+        } catch (IOException e) {
+            throw new InputException(file, null, -1, "cannot read: " + FileProblems.reason(e));
+        }
+        byte[] utf8 = TextEncoding.utf16HeadAsUtf8(head, head.length == ImportLimits.HEAD_BYTES);
+        if (utf8 != null) {
+            return utf8;
+        }
+        int line = 1;
+        for (int k = 0; k < head.length; k++) {
+            if (head[k] == 0) {
+                throw new InputException(file, null, line, "contains a NUL byte (offset " + k + "): this is a"
+                        + " binary file, not text");
+            }
+            if (head[k] == '\n') {
+                line++;
+            }
+        }
+        return head;
+    }
+
+    /**
+     * The encoding the file is read in, in words, with why where it was not plain UTF-8: "UTF-8", "UTF-8 (byte-order
+     * mark)", "UTF-16 little-endian (byte-order mark)", "Latin-1 (the file is not valid UTF-8: line 3)", …
+     */
+    public String encoding() {
+        return encoding;
     }
 
     /** The checks of {@link #open}, for callers that read the head of a file first. */
@@ -151,7 +211,7 @@ public final class TextLines implements Closeable {
 
     private String decode(int length) throws InputException {
         int start = 0;
-        if (line == 1 && length >= 3 && buffer[0] == (byte) 0xEF && buffer[1] == (byte) 0xBB
+        if (line == 1 && skipBom && length >= 3 && buffer[0] == (byte) 0xEF && buffer[1] == (byte) 0xBB
                 && buffer[2] == (byte) 0xBF) {
             start = 3;
         }
@@ -159,8 +219,9 @@ public final class TextLines implements Closeable {
             CharBuffer chars = decoder.reset().decode(ByteBuffer.wrap(buffer, start, length - start));
             return chars.toString();
         } catch (CharacterCodingException e) {
-            throw error(line, "is not UTF-8 text (a byte sequence that no UTF-8 text contains); a binary file"
-                    + " is no data file, and a text file in another encoding must be saved as UTF-8");
+            // Cannot happen for a file TextEncoding accepted (it checked every byte); said as the file's fault only
+            // because a file that changes while it is read is.
+            throw error(line, "changed while it was read: this line is no longer " + encoding + " text");
         }
     }
 

@@ -18,6 +18,7 @@ import lamella.api.data.ImporterProfiles;
 import lamella.api.data.DatasetSettings;
 import lamella.api.data.SignalNames;
 import lamella.api.data.StatedSettings;
+import lamella.api.data.TextLines;
 import lamella.conditioning.ConditionedTable;
 import lamella.conditioning.Conditioner;
 import lamella.conditioning.ConditioningOptions;
@@ -220,7 +221,9 @@ public final class ImportCommand implements Command {
             }
             io.err().println("wrote " + table.rows() + " rows to " + out);
         }
-        io.err().println("read " + file + " as '" + importer.id() + "'");
+        String encoding = data.metadata().get(TextLines.ENCODING_KEY);
+        io.err().println("read " + file + " as '" + importer.id() + "'"
+                + (encoding == null || encoding.equals("UTF-8") ? "" : ", text in " + encoding));
         for (String line : table.report().lines()) {
             io.err().println("  " + line);
         }

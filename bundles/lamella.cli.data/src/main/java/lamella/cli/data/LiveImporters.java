@@ -100,23 +100,6 @@ final class LiveImporters {
 
     /** The first bytes of a file, after the checks every data file must pass; NUL bytes are refused at once. */
     static byte[] head(Path file) throws InputException {
-        TextLines.checkReadable(file);
-        byte[] head;
-        try (InputStream in = Files.newInputStream(file)) {
-            head = in.readNBytes(ImportLimits.HEAD_BYTES);
-        } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read: " + FileProblems.reason(e));
-        }
-        int line = 1;
-        for (int k = 0; k < head.length; k++) {
-            if (head[k] == 0) {
-                throw new InputException(file, null, line, "contains a NUL byte (offset " + k + "): this is a"
-                        + " binary file, not text");
-            }
-            if (head[k] == '\n') {
-                line++;
-            }
-        }
-        return head;
+        return TextLines.head(file);
     }
 }

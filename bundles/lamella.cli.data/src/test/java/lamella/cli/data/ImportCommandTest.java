@@ -83,8 +83,25 @@ class ImportCommandTest {
         return Stream.of(
                 Arguments.of("empty", new byte[0], "bad.dat: the file is empty"),
                 Arguments.of("binary garbage", garbage(), "bad.dat:1: contains a NUL byte (offset "),
-                Arguments.of("not UTF-8", bytes("f (Hz),phase (deg)\n1,2\n2,\u0000".replace("\u0000", ""), 0xB5),
-                        "bad.dat:3: is not UTF-8 text"),
+                Arguments.of("neither UTF-8 nor Latin-1", bytes("f (Hz),phase (deg)\n1,2\n2,\u0001", 0xB5),
+                        "bad.dat:3: is not text: control byte 0x01 in a file that is not UTF-8 either (line 3"),
+                Arguments.of("not UTF-8 and a NUL beyond the first bytes", bytes("f (Hz),phase (deg)\n1,2\n2,", 0xB5,
+                        "\n" + "3,4\n".repeat(5000) + "5,\u0000\n"), "bad.dat:3: is not text: a byte sequence that no"
+                                + " UTF-8 text contains, and a NUL byte on line 5004"),
+                Arguments.of("a NUL beyond the first bytes, then not UTF-8", bytes("f (Hz),phase (deg)\n"
+                        + "3,4\n".repeat(5000) + "5,\u0000\n", 0xB5, "\n"), "bad.dat:5002: contains a NUL byte: this"
+                                + " is a binary file, not text"),
+                Arguments.of("a byte Windows-1252 leaves undefined", bytes("f (Hz),phase (deg)\n1,2\n2,", 0x81, ""),
+                        "bad.dat:3: is not text: byte 0x81 is neither UTF-8 nor a character of Latin-1 or"
+                                + " Windows-1252 text"),
+                Arguments.of("Latin-1 read, then a bad cell", bytes("f (Hz),phase (deg)\n1,2\n2,", 0xB5, "\n"),
+                        "bad.dat:3: column 2 (phase (deg)): '\u00b5' is not a number"),
+                Arguments.of("UTF-16 with an unpaired surrogate", utf16le("f (Hz),phase (deg)\n1,2\n2,\ud800\n"),
+                        "bad.dat:3: is not UTF-16 little-endian text although it begins with that byte-order mark"),
+                Arguments.of("UTF-16 ending in half a character",
+                        dropLast(utf16le("f (Hz),phase (deg)\n1,2\n2,3")),
+                        "bad.dat:3: is not UTF-16 little-endian text although it begins with that byte-order mark:"
+                                + " it ends in half a character"),
                 Arguments.of("truncated line", text("f (Hz),phase (deg),R (V)\n1,2,3\n2,3"), "bad.dat:3: has 2 cells"),
                 Arguments.of("non-numeric cell", text("f (Hz),phase (deg)\n1,2\n2,n/a\n"),
                         "bad.dat:3: column 2 (phase (deg)): 'n/a' is not a number"),
@@ -117,10 +134,82 @@ class ImportCommandTest {
     }
 
     private static byte[] bytes(String s, int extra) {
-        byte[] t = text(s);
-        byte[] b = java.util.Arrays.copyOf(t, t.length + 1);
+        return bytes(s, extra, "");
+    }
+
+    /** UTF-8 text with one raw byte between two parts. */
+    private static byte[] bytes(String before, int extra, String after) {
+        byte[] t = text(before);
+        byte[] a = text(after);
+        byte[] b = java.util.Arrays.copyOf(t, t.length + 1 + a.length);
         b[t.length] = (byte) extra;
+        System.arraycopy(a, 0, b, t.length + 1, a.length);
         return b;
+    }
+
+    /** Text as UTF-16 little-endian with its byte-order mark; an unpaired surrogate is written as its code unit. */
+    private static byte[] utf16le(String s) {
+        byte[] b = new byte[2 + 2 * s.length()];
+        b[0] = (byte) 0xFF;
+        b[1] = (byte) 0xFE;
+        for (int i = 0; i < s.length(); i++) {
+            b[2 + 2 * i] = (byte) s.charAt(i);
+            b[3 + 2 * i] = (byte) (s.charAt(i) >> 8);
+        }
+        return b;
+    }
+
+    private static byte[] utf16be(String s) {
+        byte[] le = utf16le(s);
+        byte[] b = new byte[le.length];
+        for (int i = 0; i < le.length; i += 2) {
+            b[i] = le[i + 1];
+            b[i + 1] = le[i];
+        }
+        return b;
+    }
+
+    static Stream<Arguments> encodings() {
+        String table = "modulation_hz: 9e6\nf (kHz),phase (\u00b0)\n100,-30.5\n200,-35.25\n";
+        return Stream.of(
+                Arguments.of("UTF-8", text(table), ""),
+                Arguments.of("UTF-8 with a byte-order mark", concat(new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF},
+                        text(table)), "UTF-8 (byte-order mark)"),
+                Arguments.of("UTF-16 little-endian", utf16le(table), "UTF-16 little-endian (byte-order mark)"),
+                Arguments.of("UTF-16 big-endian", utf16be(table), "UTF-16 big-endian (byte-order mark)"),
+                Arguments.of("Latin-1", table.getBytes(StandardCharsets.ISO_8859_1),
+                        "Latin-1 (the file is not valid UTF-8: line 2)"),
+                Arguments.of("Windows-1252 (a curly quote in a note)", ("# sample \u201cWafer 7\u201d\n" + table)
+                        .getBytes(java.nio.charset.Charset.forName("windows-1252")),
+                        "Windows-1252 (the file is not valid UTF-8: line 1)"));
+    }
+
+    private static byte[] dropLast(byte[] b) {
+        return java.util.Arrays.copyOf(b, b.length - 1);
+    }
+
+    private static byte[] concat(byte[] a, byte[] b) {
+        byte[] c = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, c, a.length, b.length);
+        return c;
+    }
+
+    /** Common practice, no source: the encodings instrument software writes, read to the same numbers. */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("encodings")
+    void everyCommonEncodingReadsToTheSameTableAndIsSaid(String what, byte[] content, String said) throws IOException {
+        Files.write(dir.resolve("sweep.txt"), content);
+        Run run = importing("sweep.txt");
+        assertEquals(0, run.status(), what + ": " + run.err());
+        List<String> rows = run.out().lines().toList();
+        assertEquals(3, rows.size(), run.out());
+        assertTrue(rows.get(1).startsWith("1.000000000000e+05,"), rows.get(1));
+        assertTrue(rows.get(1).contains(",-3.050000000000e+01,") || rows.get(1).contains("-3.050000000000e+01"),
+                rows.get(1));
+        assertTrue(rows.get(2).contains("-3.525000000000e+01"), rows.get(2));
+        assertTrue(run.err().contains("as 'delimited'" + (said.isEmpty() ? "" : ", text in " + said) + "\n"),
+                what + ": plain UTF-8 goes unsaid, any other encoding is said: " + run.err());
+        assertTrue(run.err().contains("modulation"), what + ": the header's settings are read: " + run.err());
     }
 
     @ParameterizedTest(name = "{0}")

@@ -251,6 +251,7 @@ final class DelimitedTable {
             }
             m.put(key, value);
         }
+        m.put(TextLines.ENCODING_KEY, in.encoding());
         return m;
     }
 

@@ -93,6 +93,7 @@ final class ExchangeFile {
         if (after != null) {
             throw in.error("'" + Decimals.abbreviate(after) + "' after the closing '" + END + "' line");
         }
+        metadata.put(TextLines.ENCODING_KEY, in.encoding());
         return new Dataset(file, FORMAT, xColumn, scans, metadata);
     }
 

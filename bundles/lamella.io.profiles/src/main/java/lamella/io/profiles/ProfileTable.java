@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 import lamella.api.InputException;
+import lamella.api.data.TextLines;
 import lamella.api.data.Dataset;
 import lamella.api.data.Decimals;
 import lamella.api.data.Scan;
@@ -90,7 +91,7 @@ final class ProfileTable {
         }
         metadata.put("import_profile", profile.id() + (profile.version().isEmpty() ? "" : " " + profile.version())
                 + " (" + profile.tier() + ")");
-        metadata.put("encoding", text.encodingUsed());
+        metadata.put(TextLines.ENCODING_KEY, text.encodingUsed());
         return new Dataset(file, profile.id(), xColumn, scans, metadata);
     }
 

@@ -241,12 +241,7 @@ public final class ProfilesService implements ImporterProfiles {
     }
 
     private static byte[] head(Path file) throws InputException {
-        lamella.api.data.TextLines.checkReadable(file);
-        try (InputStream in = Files.newInputStream(file)) {
-            return in.readNBytes(ImportLimits.HEAD_BYTES);
-        } catch (IOException e) {
-            throw new InputException(file, null, -1, "cannot read: " + ProfileText.reason(e));
-        }
+        return lamella.api.data.TextLines.head(file);
     }
 
     @Override

@@ -80,7 +80,7 @@ class ProfileTableTest {
         assertEquals(6e-6, stated.number("pump_radius_m").orElseThrow().value(), 1e-18);
         assertEquals(4e-6, stated.number("probe_radius_m").orElseThrow().value(), 1e-18);
         assertEquals("FH-0417 oxide film (invented)", d.metadata().get("sample"));
-        assertTrue(d.metadata().get("encoding").startsWith("Latin-1"), d.metadata().toString());
+        assertTrue(d.metadata().get(lamella.api.data.TextLines.ENCODING_KEY).startsWith("Latin-1"), d.metadata().toString());
         assertTrue(d.metadata().get("import_profile").startsWith("halden-hx2 1"), d.metadata().toString());
     }
 
@@ -116,7 +116,7 @@ class ProfileTableTest {
         assertEquals(9e6, stated.number("modulation_hz").orElseThrow().value(), 1e-6);
         assertEquals(7.6e7, stated.number("repetition_hz").orElseThrow().value(), 1e-6);
         assertEquals(1e-5, stated.number("pump_radius_m").orElseThrow().value(), 1e-18);
-        assertEquals("UTF-8 (byte-order mark)", d.metadata().get("encoding"));
+        assertEquals("UTF-8 (byte-order mark)", d.metadata().get(lamella.api.data.TextLines.ENCODING_KEY));
     }
 
     @Test
@@ -137,8 +137,8 @@ class ProfileTableTest {
             Files.write(f, all);
             Dataset d = ProfileTable.read(p, f);
             String expectedEncoding = c[0].equals("ISO-8859-1") ? "Latin-1 (the file is not valid UTF-8)" : c[2];
-            assertTrue(d.metadata().get("encoding").startsWith(expectedEncoding), c[0] + ": "
-                    + d.metadata().get("encoding"));
+            assertTrue(d.metadata().get(lamella.api.data.TextLines.ENCODING_KEY).startsWith(expectedEncoding), c[0] + ": "
+                    + d.metadata().get(lamella.api.data.TextLines.ENCODING_KEY));
             assertTrue(d.metadata().get("sample").startsWith("µ- FH-0417"), c[0] + ": " + d.metadata().get("sample"));
             for (int s = 0; s < 2; s++) {
                 assertEquals(List.of(expected.scans().get(s).signals().get(SignalNames.IN_PHASE)).get(0)[7],

@@ -30,9 +30,6 @@ final class DataFiles {
         byte[] head;
         try {
             modified = Files.getLastModifiedTime(file);
-            try (InputStream in = Files.newInputStream(file)) {
-                head = in.readNBytes(ImportLimits.HEAD_BYTES);
-            }
         } catch (IOException e) {
             throw new InputException(file, null, -1, "cannot read the data file: " + FileProblems.reason(e));
         }
@@ -40,6 +37,7 @@ final class DataFiles {
         if (known != null && known.modified().equals(modified)) {
             return known.dataset();
         }
+        head = lamella.api.data.TextLines.head(file);
         DataImporter best = null;
         double confidence = 0;
         for (DataImporter i : importers) {

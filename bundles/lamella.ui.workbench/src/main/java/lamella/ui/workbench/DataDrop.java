@@ -85,10 +85,7 @@ final class DataDrop {
         if (!Files.isRegularFile(file)) {
             throw new IOException(file + " is not a file");
         }
-        byte[] head;
-        try (InputStream in = Files.newInputStream(file)) {
-            head = in.readNBytes(ImportLimits.HEAD_BYTES);
-        }
+        byte[] head = lamella.api.data.TextLines.head(file);
         DataImporter best = importers.stream()
                 .max(Comparator.comparingDouble(i -> i.confidence(file, head))).orElseThrow();
         if (best.confidence(file, head) <= 0) {
