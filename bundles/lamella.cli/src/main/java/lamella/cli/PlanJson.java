@@ -60,7 +60,7 @@ final class PlanJson {
                 ArrayNode a = values.putArray(o.varied().get(i));
                 l.forEach(x -> a.add((Double) x));
             } else {
-                values.put(o.varied().get(i), (Double) v);
+                number(values, o.varied().get(i), (Double) v);
             }
         }
         n.put("measurements", p.measurements());

@@ -71,11 +71,7 @@ final class PlanSummary {
     private static String[] row(PlanOutcome o, PlannedResult p, String rank) {
         List<String> cells = new ArrayList<>();
         cells.add(rank);
-        if (p.values().isEmpty()) {
-            o.varied().forEach(v -> cells.add("(case)"));
-        } else {
-            p.values().forEach(v -> cells.add(value(v)));
-        }
+        p.values().forEach(v -> cells.add(value(v)));
         cells.add(percent(p.objective()));
         if (p.predicted().isEmpty()) {
             o.targets().forEach(x -> cells.add("—"));
@@ -138,7 +134,7 @@ final class PlanSummary {
             l.forEach(x -> parts.add(FitSummary.num((Double) x)));
             return "{" + String.join(" + ", parts) + "}";
         }
-        return FitSummary.num((Double) v);
+        return Double.isNaN((Double) v) ? "(none)" : FitSummary.num((Double) v);
     }
 
     private static String percent(double r) {

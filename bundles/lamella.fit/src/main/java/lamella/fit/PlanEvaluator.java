@@ -265,6 +265,30 @@ final class PlanEvaluator {
         return out;
     }
 
+    /** The case's own value of each varied key (a moved end: that end of its list); NaN where it states none. */
+    List<Object> baselineValues() {
+        List<Object> out = new ArrayList<>();
+        for (PlanSpec.Variable v : plan.variables()) {
+            double value = Double.NaN;
+            try {
+                CaseModel m = modelOf(v.ref());
+                if (v.end() == null) {
+                    value = m.value(local(v.ref()), v.path());
+                } else {
+                    Block b = v.ref().scope() == ParameterRef.Scope.GEOMETRY ? m.geometry() : m.measurement();
+                    if (b.get(v.ref().key()) instanceof List<?> l && !l.isEmpty()
+                            && l.get(v.end().equals("first") ? 0 : l.size() - 1) instanceof Double d) {
+                        value = d;
+                    }
+                }
+            } catch (InputException e) {
+                value = Double.NaN;
+            }
+            out.add(value);
+        }
+        return out;
+    }
+
     /** The case, or for a key of a dataset's own block that dataset's blocks, as written. */
     private CaseModel modelOf(ParameterRef ref) throws InputException {
         if (ref.dataset() >= 0) {

@@ -32,7 +32,10 @@ final class Planner {
         FitSpec fit = FitBlockReader.readForPlan(doc);
         PlanSpec spec = PlanBlockReader.read(doc, fit, catalog);
         PlanEvaluator evaluator = new PlanEvaluator(doc, fit, spec, catalog);
-        PlannedResult baseline = evaluator.evaluate(null);
+        PlannedResult asWritten = evaluator.evaluate(null);
+        PlannedResult baseline = new PlannedResult(0, evaluator.baselineValues(), asWritten.status(),
+                asWritten.reason(), asWritten.objective(), asWritten.predicted(), asWritten.budget(),
+                asWritten.risePerWatt(), asWritten.rise(), asWritten.measurements());
         List<PlanEvaluator.Choice> choices = evaluator.choices();
         List<PlannedResult> results = evaluateAll(evaluator, choices, threads, progress);
         List<PlannedResult> ranked = new ArrayList<>();

@@ -262,6 +262,8 @@ class PlanTest {
                 + " {\"measurement\": \"frequencies_hz\", \"end\": \"last\", \"values\": [1e6, 5e7]}]}");
         PlanOutcome o = plan(doc);
         assertTrue(Synthetic.fitter().settings(doc, o.baseline()).isEmpty(), "the case as written changes nothing");
+        List<?> sweep = (List<?>) doc.measurement().get("frequencies_hz");
+        assertEquals(List.of(6e-6, sweep.get(sweep.size() - 1)), o.baseline().values(), "the case's own values");
         for (PlannedResult p : o.plans()) {
             List<lamella.api.plan.PlanSetting> s = Synthetic.fitter().settings(doc, p);
             assertEquals(2, s.size());
@@ -289,7 +291,7 @@ class PlanTest {
         CaseDocument doc = fdtrPlan("{\"vary\": [{\"geometry\": \"pump_radius_m\", \"values\": [3e-6, 1.5e-5]}]}");
         PlanOutcome o = plan(doc);
         for (PlannedResult p : List.of(o.baseline(), o.plans().get(0), o.plans().get(1))) {
-            double radius = p.values().isEmpty() ? 6e-6 : (Double) p.values().get(0);
+            double radius = (Double) p.values().get(0);
             CaseDocument at = Synthetic.read(dir, "{" + Synthetic.STACK.formatted(1.2e8, 1.4) + ","
                     + BEAMS.replace("6e-6", String.valueOf(radius)) + ", \"measurement\": {\"type\": \"fdtr\","
                     + " \"frequencies_hz\": " + list(Synthetic.logSpaced(1e4, 2e7, 30)) + "}}");

@@ -13,9 +13,14 @@ import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.ReportWriter;
 import lamella.api.fit.SensitivityTable;
+import lamella.api.plan.PlanService;
 import org.osgi.framework.BundleContext;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+import org.osgi.service.component.annotations.ReferencePolicyOption;
 
 /**
  * Writes a fit's report folder: {@code index.html}, PNG and SVG plots of every dataset (data with model,
@@ -30,10 +35,16 @@ public final class FitReportWriter implements ReportWriter {
     /** Every name {@link #write} can give a file: the fixed ones and those numbered per dataset or table. */
     private static final java.util.regex.Pattern NAMES = java.util.regex.Pattern.compile(
             "index\\.html|result\\.json|(parameters|correlation|budget|montecarlo)\\.csv|budget\\.(png|svg)"
-            + "|dataset-\\d+-fit\\.(csv|png|svg)|dataset-\\d+-residuals\\.(png|svg)|sensitivity-\\d+\\.(png|svg)");
+            + "|dataset-\\d+-fit\\.(csv|png|svg)|dataset-\\d+-residuals\\.(png|svg)|sensitivity-\\d+\\.(png|svg)"
+            + "|plan-(objective|sensitivity)\\.(png|svg)");
 
     private final String version;
     private final Clock clock;
+
+    /** The plan service, for the plan section of a case with a plan block; the report is written without it. */
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    private volatile PlanService planner;
 
     @Activate
     public FitReportWriter(BundleContext context) {
@@ -44,6 +55,11 @@ public final class FitReportWriter implements ReportWriter {
         Headless.ensure();
         this.version = version;
         this.clock = clock;
+    }
+
+    FitReportWriter(String version, Clock clock, PlanService planner) {
+        this(version, clock);
+        this.planner = planner;
     }
 
     @Override
@@ -99,12 +115,15 @@ public final class FitReportWriter implements ReportWriter {
             files.add("montecarlo.csv", CsvTables.monteCarlo(outcome, mc));
             contents.put("montecarlo.csv", "Monte Carlo mean, σ and percentiles per parameter");
         });
+        PlanService plans = planner;
+        PlanSection plan = plans != null && doc.states("plan") ? PlanSection.of(doc, plans, files, contents) : null;
+
         files.add("result.json", ResultJson.of(doc, outcome, sensitivities, stamp));
         contents.put("result.json", "the inputs, every result and every number above, SI units");
 
         // Last, so that a reader who finds the new page also finds every file it links.
         files.add(PAGE, ReportPage.of(doc, outcome, new PageFigures(datasetPlots, budgetPlots, sensitivityPlots),
-                contents, stamp));
+                plan, contents, stamp));
         files.writeInto(folder);
         return folder.resolve(PAGE);
     }

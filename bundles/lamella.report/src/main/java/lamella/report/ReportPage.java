@@ -53,10 +53,11 @@ final class ReportPage {
     }
 
     /**
+     * @param plan  the plan section of a case with a plan block, or null
      * @param files every file of the report folder beside the page, with what it holds, for its last section
      */
-    static String of(CaseDocument doc, FitOutcome o, PageFigures figures, Map<String, String> files,
-                     ReportStamp stamp) {
+    static String of(CaseDocument doc, FitOutcome o, PageFigures figures, PlanSection plan,
+                     Map<String, String> files, ReportStamp stamp) {
         Html h = new Html();
         h.raw("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
         h.element("title", "Lamella fit report" + (CaseText.description(doc).isEmpty() ? ""
@@ -96,6 +97,10 @@ final class ReportPage {
         if (!figures.sensitivities().isEmpty()) {
             h.element("h2", "Sensitivities");
             figures.sensitivities().forEach(f -> figure(h, f));
+        }
+
+        if (plan != null) {
+            plan.write(h, f -> figure(h, f));
         }
 
         h.element("h2", "Inputs");

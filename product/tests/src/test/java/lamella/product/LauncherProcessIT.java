@@ -163,6 +163,23 @@ class LauncherProcessIT {
                 "\"sigma_relative\" : ", "\"steady_rise_k\" : ")) {
             assertTrue(json.contains(key), key);
         }
+        // the pictures beside the plan file: the objective map and the best plan's sensitivity curves
+        for (String name : List.of("tdtr-objective", "tdtr-sensitivity")) {
+            Path png = userDir.resolve("plans/" + name + ".png");
+            assertTrue(run.err().contains("wrote " + png), run.err());
+            java.awt.image.BufferedImage image = javax.imageio.ImageIO.read(png.toFile());
+            java.util.Set<Integer> colours = new java.util.HashSet<>();
+            for (int x = 0; x < image.getWidth(); x += 7) {
+                for (int y = 0; y < image.getHeight(); y += 7) {
+                    colours.add(image.getRGB(x, y));
+                }
+            }
+            assertTrue(colours.size() > 20, name + ": a picture, not a blank: " + colours.size() + " colours");
+            String svg = Files.readString(userDir.resolve("plans/" + name + ".svg"));
+            javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder()
+                    .parse(new org.xml.sax.InputSource(new java.io.StringReader(svg)));
+        }
+        assertTrue(Files.readString(userDir.resolve("plans/tdtr-objective.svg")).contains("(MHz)"), "axis unit");
     }
 
     /** A plan's bad input: exit status 2 at the JSON path, and no output file; its own case is never overwritten. */

@@ -9,7 +9,8 @@ import lamella.api.fit.BudgetLine;
  * @param rank        1 for the best plan within the limits; 0 for a plan not ranked (beyond a limit, not evaluable,
  *                    the baseline)
  * @param values      the value of every varied key, in the order of the outcome's {@code varied}: a number, or for a
- *                    key chosen several times together the list of values measured jointly
+ *                    key chosen several times together the list of values measured jointly; for the baseline the
+ *                    case's own value of each key (NaN where the case states none)
  * @param status      ranked, beyond a limit, or not evaluable
  * @param reason      why a plan is beyond a limit or cannot be evaluated; empty otherwise
  * @param objective   the combined σ the plans are ranked by (+∞ when a target is unidentifiable); NaN when not
