@@ -1,0 +1,2 @@
+/** The workbench's Plan panel (implementation; nothing exported). */
+package lamella.ui.plan;
