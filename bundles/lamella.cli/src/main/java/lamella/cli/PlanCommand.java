@@ -74,6 +74,11 @@ public final class PlanCommand implements Command {
             io.err().println(e.getMessage() + "\n" + usage());
             return BAD_INPUT;
         }
+        if (o.has("--map") && !o.has("--out")) {
+            io.err().println("lamella plan: --map chooses the keys of the map that --out writes beside the plan file;"
+                    + " give --out PLAN.json too\n" + usage());
+            return BAD_INPUT;
+        }
         Path casePath = io.resolve(o.positional());
         Path out = o.has("--out") ? io.resolve(o.value("--out")) : null;
         List<Path> targets = new ArrayList<>();

@@ -3,7 +3,6 @@ package lamella.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.CancellationException;
 import lamella.api.CaseDocument;
 import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
@@ -60,8 +59,6 @@ record PlanSection(PlanOutcome outcome, String problem, List<Figure> figures) {
         } catch (InputException | ModelEvaluationException e) {
             return new PlanSection(o, "The best plan's sensitivities cannot be computed: " + e.getMessage(),
                     figures);
-        } catch (CancellationException e) {
-            throw e;
         }
         return new PlanSection(o, "", figures);
     }
