@@ -31,6 +31,7 @@ import lamella.ui.api.WorkResult;
 import lamella.ui.charts.ChartCanvas;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -55,10 +56,15 @@ import org.eclipse.swt.widgets.Text;
  */
 final class PlanView implements PanelView {
 
+    /** Below this width (pixels) the plan block goes above the results instead of beside them. */
+    static final int SIDE_BY_SIDE_WIDTH = 900;
+    /** The plan block's editor needs this width (pixels) to show its fields; narrower, it scrolls. */
+    private static final int MIN_SETUP_WIDTH = 380;
+
     private final Workbench workbench;
     private final Project project;
     private final PlanService planner;
-    private final SashForm root;
+    final SashForm root;
     final Table targets;
     final Table variables;
     final Combo key;
@@ -97,7 +103,11 @@ final class PlanView implements PanelView {
         this.planner = planner;
         root = new SashForm(parent, SWT.HORIZONTAL);
 
-        Composite left = new Composite(root, SWT.NONE);
+        ScrolledComposite scroll = new ScrolledComposite(root, SWT.V_SCROLL | SWT.H_SCROLL);
+        scroll.setExpandHorizontal(true);
+        scroll.setExpandVertical(true);
+        Composite left = new Composite(scroll, SWT.NONE);
+        scroll.setContent(left);
         left.setLayout(new GridLayout(1, false));
         Group t = group(left, "Targets: free inputs whose σ matters", false);
         targets = new Table(t, SWT.CHECK | SWT.BORDER | SWT.V_SCROLL);
@@ -195,9 +205,21 @@ final class PlanView implements PanelView {
         map.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1));
         right.setWeights(45, 55);
         root.setWeights(36, 64);
+        scroll.addListener(SWT.Resize, e -> scroll.setMinSize(left.computeSize(MIN_SETUP_WIDTH, SWT.DEFAULT)));
+        root.addListener(SWT.Resize, e -> arrange());
 
         project.addListener(listener);
         refresh();
+    }
+
+    /** Side by side when the panel is wide, the plan block above the results when it is narrow. */
+    private void arrange() {
+        int width = root.getClientArea().width;
+        int orientation = width < SIDE_BY_SIDE_WIDTH ? SWT.VERTICAL : SWT.HORIZONTAL;
+        if (root.getOrientation() != orientation) {
+            root.setOrientation(orientation);
+            root.setWeights(orientation == SWT.VERTICAL ? new int[] {42, 58} : new int[] {36, 64});
+        }
     }
 
     @Override

@@ -99,6 +99,13 @@ class PlanPanelTest {
         click(view.stopButton);
         assertTrue(pumpUntil(() -> view.status.getText().startsWith("Stopped"), 10_000), view.status.getText());
         assertEquals(61, view.plans.getItemCount(), "the plans of the run before stay");
+
+        // in a narrow area of the window (a third of 1280 × 800) the plan block goes above the results
+        assertEquals(SWT.HORIZONTAL, view.root.getOrientation());
+        shell.setSize(460, 760);
+        pump(300);
+        assertEquals(SWT.VERTICAL, view.root.getOrientation());
+        screenshot("plan-narrow-460x760");
     }
 
     @Test
