@@ -18,11 +18,16 @@ import lamella.api.Names;
  * @param given  the path as written
  * @param signal the signal column, or null for the technique's usual one
  */
-record MapBlock(Path data, String given, String signal) {
+public record MapBlock(Path data, String given, String signal) {
 
     static final Set<String> KEYS = Set.of("data", "signal");
 
-    static MapBlock read(CaseDocument doc) throws InputException {
+    /** Whether the map data are Parquet (a {@code .parquet} file or a folder of Parquet parts). */
+    public static boolean isParquet(Path data) {
+        return data.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".parquet");
+    }
+
+    public static MapBlock read(CaseDocument doc) throws InputException {
         Object raw = doc.root().get("map");
         if (raw == null) {
             throw doc.locate(InputException.at("map", "the case has no map block; add \"map\": {\"data\": FILE}"

@@ -2,6 +2,7 @@ package lamella.map;
 
 import java.io.IOException;
 import java.io.PrintStream;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -9,7 +10,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.CancellationException;
-import lamella.api.AtomicText;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
 import lamella.api.InputException;
@@ -22,7 +22,11 @@ import lamella.api.fit.CurveFitService;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
-/** {@code lamella map CASE.json --out DIR [--threads N]}: a property map, one small fit per position. */
+/**
+ * {@code lamella map CASE.json --out DIR [--threads N]}: a property map, one small fit per position, on this machine's
+ * cores. The Spark engine ({@code --engine spark}) runs outside this runtime: the {@code lamella} script starts the
+ * job module for it.
+ */
 @Component(service = Command.class)
 public final class MapCommand implements Command {
 
@@ -54,7 +58,7 @@ public final class MapCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella map CASE.json --out DIR [--threads N]
+                usage: lamella map CASE.json --out DIR [--engine local|spark] [--threads N]
 
                 Fits the free inputs of the case's fit block at every position of the data file its map block
                 names (a long CSV table: x_m, y_m, the technique's x column, the signal, optionally its sigma_
@@ -63,7 +67,10 @@ public final class MapCommand implements Command {
                 image of each free input, of its σ and of the reduced χ² (PNG and SVG, colour bar with unit,
                 scale bar in µm, positions without a value marked ×) and DIR/summary.txt (counts, time, the
                 spread of each value), which is also printed. A position whose data are unusable is reported in
-                its row and the rest go on. --threads: worker threads (default: all cores). Exit status 0 when
+                its row and the rest go on. A run that was stopped (killed, Ctrl-C) keeps the tiles it finished in
+                DIR/map.journal/; the same command again fits only the rest. --threads: worker threads (default:
+                all cores). --engine spark: the same map as an Apache Spark application (Parquet map data and
+                DIR/map.parquet too; see the README), started by the lamella script. Exit status 0 when
                 at least one position was fitted, 1 when none was, 2 for bad usage, a bad case or a broken file
                 (named with its line), or an output that would overwrite an input.
                 """;
@@ -75,7 +82,7 @@ public final class MapCommand implements Command {
         String casePath = null;
         for (int i = 0; i < args.size(); i++) {
             String a = args.get(i);
-            if (a.equals("--out") || a.equals("--threads")) {
+            if (a.equals("--out") || a.equals("--threads") || a.equals("--engine")) {
                 if (i + 1 >= args.size()) {
                     return refuse(io, a + " needs a value");
                 }
@@ -93,6 +100,15 @@ public final class MapCommand implements Command {
         }
         if (!options.containsKey("--out")) {
             return refuse(io, "--out DIR is needed (the folder for map.csv and the images)");
+        }
+        String engine = options.getOrDefault("--engine", "local");
+        if (engine.equals("spark")) {
+            return refuse(io, "--engine spark runs the map as a Spark application outside this runtime; start it"
+                    + " with the lamella script (./lamella map CASE.json --out DIR --engine spark), which builds"
+                    + " and runs the Spark job");
+        }
+        if (!engine.equals("local")) {
+            return refuse(io, "--engine expects local or spark, got '" + engine + "'");
         }
         int threads = Math.max(1, Runtime.getRuntime().availableProcessors());
         if (options.containsKey("--threads")) {
@@ -120,9 +136,14 @@ public final class MapCommand implements Command {
                     return BAD_INPUT;
                 }
             }
+            if (MapBlock.isParquet(block.data())) {
+                throw doc.locate(InputException.at("map.data", "'" + block.given() + "' is Parquet, which the"
+                        + " Spark engine reads (--engine spark); the local engine reads CSV map data"));
+            }
             MapData data = MapData.read(block.data(), fit.xColumn(), fit.signal());
             fit.check(data.x, data.hasSigma, "map.data");
-            return map(doc, data, fit, threads, out, io);
+            MapJournal journal = MapJournal.open(out, MapJournal.fingerprint(inputs));
+            return map(doc, data, fit, threads, out, io, journal);
         } catch (InputException e) {
             io.err().println("lamella map: " + e.getMessage());
             return BAD_INPUT;
@@ -130,7 +151,8 @@ public final class MapCommand implements Command {
             io.err().println("lamella map: " + file + ": the model cannot be evaluated: " + e.getMessage());
             return BAD_INPUT;
         } catch (CancellationException e) {
-            io.err().println("lamella map: interrupted; nothing was written");
+            io.err().println("lamella map: interrupted; the tiles done are kept in " + out.resolve(MapJournal.FOLDER)
+                    + " and the same command again fits only the rest");
             return FAILED;
         } catch (IOException e) {
             io.err().println("lamella map: cannot write into " + out + ": " + e.getMessage());
@@ -138,24 +160,25 @@ public final class MapCommand implements Command {
         }
     }
 
-    private static int map(CaseDocument doc, MapData data, CurveFit fit, int threads, Path out, CommandIO io)
-            throws IOException {
+    private static int map(CaseDocument doc, MapData data, CurveFit fit, int threads, Path out, CommandIO io,
+                           MapJournal journal) throws IOException {
         long t0 = System.nanoTime();
         int total = data.positions.size();
         Reporter reporter = new Reporter(io.err(), total, t0);
-        MapEngine.Result[] results = new MapEngine(fit, data.x, threads).run(data.positions, reporter::done);
+        MapEngine.Result[] results;
+        try {
+            results = new MapEngine(fit, data.x, threads).run(data.positions, reporter::done, journal);
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
         double seconds = (System.nanoTime() - t0) * 1e-9;
-        AtomicText.write(out.resolve(MapOutputs.TABLE), MapOutputs.table(data, results, fit));
-        MapOutputs.images(out, data, results, fit);
-        String summary = MapOutputs.summary(data, results, fit, seconds, threads);
-        AtomicText.write(out.resolve(MapOutputs.SUMMARY), "# lamella map " + doc.file() + "\n" + summary);
+        String engine = threads + " thread" + (threads == 1 ? "" : "s");
+        String summary = MapOutputs.write(out, doc.file(), data, results, fit, seconds, engine,
+                journal.positionsReadBack());
+        journal.remove();
         io.out().print(summary);
         io.out().println("results: " + out.resolve(MapOutputs.TABLE));
-        boolean any = false;
-        for (MapEngine.Result r : results) {
-            any |= r.status() != MapEngine.Status.FAILED;
-        }
-        return any ? OK : FAILED;
+        return MapOutputs.anyFitted(results) ? OK : FAILED;
     }
 
     private int refuse(CommandIO io, String problem) {

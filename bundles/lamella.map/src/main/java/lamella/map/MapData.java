@@ -3,6 +3,7 @@ package lamella.map;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;
+import java.io.Serializable;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -27,7 +28,7 @@ import lamella.api.InputException;
  * finite number, an x value twice, too few points, x values other than the map's — makes that position's problem, and
  * the rest of the map goes on. The map's x values are those most positions share.
  */
-final class MapData {
+public final class MapData {
 
     /** Far beyond a map of 10⁶ positions with a few points each; larger maps are split or read from Parquet. */
     static final long MAX_BYTES = 2L * 1024 * 1024 * 1024;
@@ -45,15 +46,16 @@ final class MapData {
      * @param problem why the position cannot be fitted, or null
      * @param line    the first line of the position in the file
      */
-    record Position(double xM, double yM, double[] y, double[] sigma, String problem, int line) {
+    public record Position(double xM, double yM, double[] y, double[] sigma, String problem, int line)
+            implements Serializable {
     }
 
-    final Path file;
-    final String xColumn;
-    final String signal;
-    final boolean hasSigma;
-    final double[] x;
-    final List<Position> positions;
+    public final Path file;
+    public final String xColumn;
+    public final String signal;
+    public final boolean hasSigma;
+    public final double[] x;
+    public final List<Position> positions;
 
     private MapData(Path file, String xColumn, String signal, boolean hasSigma, double[] x, List<Position> positions) {
         this.file = file;
@@ -96,7 +98,7 @@ final class MapData {
     private record Key(double x, double y) {
     }
 
-    static MapData read(Path file, String xColumn, String signal) throws InputException {
+    public static MapData read(Path file, String xColumn, String signal) throws InputException {
         try {
             if (!Files.isRegularFile(file)) {
                 throw new InputException(file, null, -1, "no such map data file");
@@ -110,7 +112,7 @@ final class MapData {
             throw new InputException(file, null, -1, "cannot read the file: " + e.getMessage());
         }
         String sigmaColumn = "sigma_" + signal;
-        Map<Key, Rows> byPosition = new LinkedHashMap<>();
+        Collector rows = null;
         int[] at = null;
         int cells = 0;
         int headerLine = 0;
@@ -140,19 +142,10 @@ final class MapData {
                         }
                         header.add(h);
                     }
-                    List<String> need = List.of("x_m", "y_m", xColumn, signal);
-                    at = new int[5];
-                    for (int i = 0; i < need.size(); i++) {
-                        at[i] = header.indexOf(need.get(i));
-                        if (at[i] < 0) {
-                            throw new InputException(file, null, n, "no column '" + need.get(i) + "'; a map needs "
-                                    + String.join(", ", need) + " (and optionally " + sigmaColumn + "); the file has "
-                                    + String.join(", ", header));
-                        }
-                    }
-                    at[4] = header.indexOf(sigmaColumn);
+                    at = columns(file, n, header, xColumn, signal);
                     cells = header.size();
                     headerLine = n;
+                    rows = new Collector(file, xColumn, signal, at[4] >= 0, "line", headerLine);
                     continue;
                 }
                 if (c.length != cells) {
@@ -162,19 +155,8 @@ final class MapData {
                 double xm = coordinate(c[at[0]], "x_m", file, n);
                 double ym = coordinate(c[at[1]], "y_m", file, n);
                 double xv = coordinate(c[at[2]], xColumn, file, n);
-                final int lineNo = n;
-                Rows rows = byPosition.computeIfAbsent(new Key(xm + 0.0, ym + 0.0), k -> new Rows(lineNo));
-                double yv = cell(c[at[3]]);
-                double sv = at[4] < 0 ? Double.NaN : cell(c[at[4]]);
-                if (rows.problem == null) {
-                    if (!Double.isFinite(yv)) {
-                        rows.problem = "line " + n + ": " + signal + " '" + c[at[3]].strip() + "' is not a finite number";
-                    } else if (at[4] >= 0 && !(sv > 0 && Double.isFinite(sv))) {
-                        rows.problem = "line " + n + ": " + sigmaColumn + " '" + c[at[4]].strip()
-                                + "' is not a positive finite number";
-                    }
-                }
-                rows.add(xv, yv, sv, n);
+                rows.add(xm, ym, xv, cell(c[at[3]]), c[at[3]].strip(), at[4] < 0 ? Double.NaN : cell(c[at[4]]),
+                        at[4] < 0 ? "" : c[at[4]].strip(), n);
             }
         } catch (CharacterCodingException e) {
             throw new InputException(file, null, -1, "not a text file (invalid UTF-8)");
@@ -185,25 +167,95 @@ final class MapData {
             throw new InputException(file, null, 1, "the file is empty; expected a header: x_m,y_m," + xColumn + ","
                     + signal + "[," + sigmaColumn + "]");
         }
-        if (byPosition.isEmpty()) {
-            throw new InputException(file, null, headerLine, "the file has a header but no data rows");
-        }
-        for (Rows rows : byPosition.values()) {
-            sortAndCheckRepeats(rows, xColumn);
-        }
-        double[] x = commonX(byPosition.values());
-        if (x == null) {
-            throw new InputException(file, null, headerLine, "no position has a usable curve; every one has a"
-                    + " problem (the first: " + byPosition.values().iterator().next().problem + ")");
-        }
-        List<Position> positions = new ArrayList<>(byPosition.size());
-        for (Map.Entry<Key, Rows> e : byPosition.entrySet()) {
-            positions.add(position(e.getKey(), e.getValue(), x, at[4] >= 0, xColumn));
-        }
-        return new MapData(file, xColumn, signal, at[4] >= 0, x, List.copyOf(positions));
+        return rows.finish();
     }
 
-    private static void sortAndCheckRepeats(Rows r, String xColumn) {
+    /**
+     * Where the columns a map needs are in a header: x_m, y_m, the x column, the signal, and its σ (−1 when absent).
+     * The header is at {@code line} of the file (a Parquet file's schema is line 0).
+     */
+    public static int[] columns(Path file, int line, List<String> header, String xColumn, String signal)
+            throws InputException {
+        String sigmaColumn = "sigma_" + signal;
+        List<String> need = List.of("x_m", "y_m", xColumn, signal);
+        int[] at = new int[5];
+        for (int i = 0; i < need.size(); i++) {
+            at[i] = header.indexOf(need.get(i));
+            if (at[i] < 0) {
+                throw new InputException(file, null, line, "no column '" + need.get(i) + "'; a map needs "
+                        + String.join(", ", need) + " (and optionally " + sigmaColumn + "); the file has "
+                        + String.join(", ", header));
+            }
+        }
+        at[4] = header.indexOf(sigmaColumn);
+        return at;
+    }
+
+    /**
+     * The rows of a map table, from any reader (CSV here, Parquet in the Spark job), grouped into positions and
+     * checked as {@link #read} describes: {@link #add} row after row, then {@link #finish}.
+     */
+    public static final class Collector {
+        private final Path file;
+        private final String xColumn;
+        private final String signal;
+        private final boolean hasSigma;
+        private final String where;
+        private final int headerLine;
+        private final Map<Key, Rows> byPosition = new LinkedHashMap<>();
+
+        /**
+         * @param where      what a row is called in messages ("line" of a CSV file, "row" of a Parquet file)
+         * @param headerLine the line of the header, for the messages about the whole file
+         */
+        public Collector(Path file, String xColumn, String signal, boolean hasSigma, String where, int headerLine) {
+            this.file = file;
+            this.xColumn = xColumn;
+            this.signal = signal;
+            this.hasSigma = hasSigma;
+            this.where = where;
+            this.headerLine = headerLine;
+        }
+
+        /**
+         * One row: finite stage position and x (the caller reports others at their line), the signal and σ as
+         * numbers (NaN for a missing or unreadable cell) and as written, for the messages.
+         */
+        public void add(double xm, double ym, double xv, double yv, String yText, double sv, String sText, int n) {
+            Rows rows = byPosition.computeIfAbsent(new Key(xm + 0.0, ym + 0.0), k -> new Rows(n));
+            if (rows.problem == null) {
+                if (!Double.isFinite(yv)) {
+                    rows.problem = where + " " + n + ": " + signal + " '" + yText + "' is not a finite number";
+                } else if (hasSigma && !(sv > 0 && Double.isFinite(sv))) {
+                    rows.problem = where + " " + n + ": sigma_" + signal + " '" + sText
+                            + "' is not a positive finite number";
+                }
+            }
+            rows.add(xv, yv, sv, n);
+        }
+
+        /** The positions, in the order of their first rows. */
+        public MapData finish() throws InputException {
+            if (byPosition.isEmpty()) {
+                throw new InputException(file, null, headerLine, "the file has a header but no data rows");
+            }
+            for (Rows rows : byPosition.values()) {
+                sortAndCheckRepeats(rows, xColumn, where);
+            }
+            double[] x = commonX(byPosition.values());
+            if (x == null) {
+                throw new InputException(file, null, headerLine, "no position has a usable curve; every one has a"
+                        + " problem (the first: " + byPosition.values().iterator().next().problem + ")");
+            }
+            List<Position> positions = new ArrayList<>(byPosition.size());
+            for (Map.Entry<Key, Rows> e : byPosition.entrySet()) {
+                positions.add(position(e.getKey(), e.getValue(), x, hasSigma, xColumn));
+            }
+            return new MapData(file, xColumn, signal, hasSigma, x, List.copyOf(positions));
+        }
+    }
+
+    private static void sortAndCheckRepeats(Rows r, String xColumn, String where) {
         Integer[] order = new Integer[r.n];
         for (int i = 0; i < r.n; i++) {
             order[i] = i;
@@ -225,7 +277,7 @@ final class MapData {
         r.lines = lines;
         for (int i = 1; i < r.n && r.problem == null; i++) {
             if (x[i] == x[i - 1]) {
-                r.problem = xColumn + " = " + x[i] + " appears twice (lines " + Math.min(lines[i], lines[i - 1])
+                r.problem = xColumn + " = " + x[i] + " appears twice (" + where + "s " + Math.min(lines[i], lines[i - 1])
                         + " and " + Math.max(lines[i], lines[i - 1]) + ")";
             }
         }

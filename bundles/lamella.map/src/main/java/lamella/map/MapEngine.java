@@ -1,5 +1,7 @@
 package lamella.map;
 
+import java.io.Serializable;
+import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -27,16 +29,16 @@ import lamella.api.fit.FittedParameter;
  * neighbour's), the position is fitted again from the case's initial values and the better fit is kept. The result of
  * a position depends only on its tile, never on the number of threads.
  */
-final class MapEngine {
+public final class MapEngine {
 
-    static final int TILE_SIDE = 8;
-    static final double NEIGHBOUR_REACH = 2.5;
+    public static final int TILE_SIDE = 8;
+    public static final double NEIGHBOUR_REACH = 2.5;
 
     /** What became of one position. */
-    enum Status {
+    public enum Status {
         OK, WARNING, FAILED;
 
-        String word() {
+        public String word() {
             return name().toLowerCase(java.util.Locale.ROOT);
         }
     }
@@ -52,8 +54,8 @@ final class MapEngine {
      * @param fromNeighbour   whether the kept fit started from a neighbour's values
      * @param converged       whether the fit converged
      */
-    record Result(double[] values, double[] sigmas, double reducedChiSquare, Status status, String message,
-                  boolean fromNeighbour, boolean converged) {
+    public record Result(double[] values, double[] sigmas, double reducedChiSquare, Status status, String message,
+                         boolean fromNeighbour, boolean converged) implements Serializable {
     }
 
     private final CurveFit fit;
@@ -61,7 +63,7 @@ final class MapEngine {
     private final int threads;
 
     /** Fits curves measured at the map's x values {@code x} on {@code threads} workers. */
-    MapEngine(CurveFit fit, double[] x, int threads) {
+    public MapEngine(CurveFit fit, double[] x, int threads) {
         this.fit = fit;
         this.x = x.clone();
         this.threads = threads;
@@ -72,6 +74,14 @@ final class MapEngine {
      * calling thread stops the workers and throws CancellationException.
      */
     Result[] run(List<MapData.Position> positions, IntConsumer progress) {
+        return run(positions, progress, MapJournal.NONE);
+    }
+
+    /**
+     * Fits every position whose tile the journal does not already hold, and gives the journal each tile as it is
+     * done; {@code progress} hears the count of positions done, those read back included.
+     */
+    public Result[] run(List<MapData.Position> positions, IntConsumer progress, MapJournal journal) {
         Result[] results = new Result[positions.size()];
         List<int[]> tiles = tiles(positions);
         double reach = NEIGHBOUR_REACH * spacing(positions);
@@ -83,10 +93,25 @@ final class MapEngine {
         });
         try {
             List<Future<?>> futures = new ArrayList<>();
-            for (int[] tile : tiles) {
-                futures.add(pool.submit(() -> {
-                    fitTile(positions, tile, results, reach);
+            for (int t = 0; t < tiles.size(); t++) {
+                int[] tile = tiles.get(t);
+                Result[] earlier = journal.read(t, tile.length);
+                if (earlier != null) {
+                    for (int k = 0; k < tile.length; k++) {
+                        results[tile[k]] = earlier[k];
+                    }
                     progress.accept(done.addAndGet(tile.length));
+                    continue;
+                }
+                final int index = t;
+                futures.add(pool.submit(() -> {
+                    Result[] r = fitTile(members(positions, tile), reach);
+                    journal.write(index, r);
+                    for (int k = 0; k < tile.length; k++) {
+                        results[tile[k]] = r[k];
+                    }
+                    progress.accept(done.addAndGet(tile.length));
+                    return null;
                 }));
             }
             for (Future<?> f : futures) {
@@ -99,6 +124,9 @@ final class MapEngine {
             if (e.getCause() instanceof RuntimeException r) {
                 throw r;
             }
+            if (e.getCause() instanceof java.io.IOException io) {
+                throw new UncheckedIOException(io);
+            }
             throw new IllegalStateException(e.getCause());
         } finally {
             pool.shutdownNow();
@@ -106,8 +134,22 @@ final class MapEngine {
         return results;
     }
 
+    /** The positions of one tile, in the order they are fitted. */
+    public static List<MapData.Position> members(List<MapData.Position> positions, int[] tile) {
+        List<MapData.Position> members = new ArrayList<>(tile.length);
+        for (int i : tile) {
+            members.add(positions.get(i));
+        }
+        return members;
+    }
+
+    /** The distance within which a fitted position is a neighbour whose result may start another's fit, m. */
+    public static double reach(List<MapData.Position> positions) {
+        return NEIGHBOUR_REACH * spacing(positions);
+    }
+
     /** The positions of each tile, in the order they are fitted. */
-    static List<int[]> tiles(List<MapData.Position> positions) {
+    public static List<int[]> tiles(List<MapData.Position> positions) {
         int n = positions.size();
         double xMin = Double.POSITIVE_INFINITY;
         double yMin = Double.POSITIVE_INFINITY;
@@ -170,15 +212,21 @@ final class MapEngine {
         return extent > 0 ? extent / (n - 1) : 1.0;
     }
 
-    private void fitTile(List<MapData.Position> positions, int[] tile, Result[] results, double reach) {
+    /**
+     * Fits the positions of one tile in the order given, each starting from the nearest position fitted well before
+     * it within {@code reach}; the result depends on nothing else, so any engine that fits whole tiles (threads here,
+     * Spark tasks) gives the same map.
+     */
+    public Result[] fitTile(List<MapData.Position> tile, double reach) {
+        Result[] results = new Result[tile.size()];
         List<Integer> fittedWell = new ArrayList<>();
-        for (int i : tile) {
-            MapData.Position p = positions.get(i);
+        for (int i = 0; i < results.length; i++) {
+            MapData.Position p = tile.get(i);
             Result r;
             if (p.problem() != null) {
                 r = failed(p.problem());
             } else {
-                int neighbour = nearest(positions, fittedWell, p, reach);
+                int neighbour = nearest(tile, fittedWell, p, reach);
                 r = fitPosition(p, neighbour < 0 ? null : results[neighbour]);
             }
             results[i] = r;
@@ -186,6 +234,7 @@ final class MapEngine {
                 fittedWell.add(i);
             }
         }
+        return results;
     }
 
     private static int nearest(List<MapData.Position> positions, List<Integer> candidates, MapData.Position p,

@@ -15,16 +15,16 @@ import lamella.api.fit.CurveFit;
  * input its value and {@code sigma_} column, {@code reduced_chi_square}, {@code status}, {@code message}), an image
  * per free input, per its σ and of the reduced χ² (PNG and SVG), and {@code summary.txt}. Each file appears complete.
  */
-final class MapOutputs {
+public final class MapOutputs {
 
-    static final String TABLE = "map.csv";
-    static final String SUMMARY = "summary.txt";
+    public static final String TABLE = "map.csv";
+    public static final String SUMMARY = "summary.txt";
 
     private MapOutputs() {
     }
 
     /** Every file a map of these free inputs writes, for the refusal to overwrite an input. */
-    static List<Path> files(Path out, CurveFit fit) {
+    public static List<Path> files(Path out, CurveFit fit) {
         List<Path> files = new ArrayList<>(List.of(out.resolve(TABLE), out.resolve(SUMMARY)));
         for (String stem : imageStems(fit)) {
             files.add(out.resolve(stem + ".png"));
@@ -41,6 +41,31 @@ final class MapOutputs {
         }
         stems.add("reduced_chi_square");
         return stems;
+    }
+
+    /**
+     * Writes map.csv, the images and summary.txt (each file complete or not at all) and returns the summary.
+     *
+     * @param engine     what fitted the map, for the summary ("2 threads", "Spark local[2]")
+     * @param readBack   positions read back from an earlier run's journal
+     */
+    public static String write(Path out, Path caseFile, MapData data, MapEngine.Result[] results, CurveFit fit,
+                               double seconds, String engine, int readBack) throws IOException {
+        AtomicText.write(out.resolve(TABLE), table(data, results, fit));
+        images(out, data, results, fit);
+        String summary = summary(data, results, fit, seconds, engine, readBack);
+        AtomicText.write(out.resolve(SUMMARY), "# lamella map " + caseFile + "\n" + summary);
+        return summary;
+    }
+
+    /** Whether at least one position has a value. */
+    public static boolean anyFitted(MapEngine.Result[] results) {
+        for (MapEngine.Result r : results) {
+            if (r.status() != MapEngine.Status.FAILED) {
+                return true;
+            }
+        }
+        return false;
     }
 
     static String table(MapData data, MapEngine.Result[] results, CurveFit fit) {
@@ -99,7 +124,8 @@ final class MapOutputs {
     }
 
     /** Counts, time and the spread of each fitted value over the positions that have one. */
-    static String summary(MapData data, MapEngine.Result[] results, CurveFit fit, double seconds, int threads) {
+    static String summary(MapData data, MapEngine.Result[] results, CurveFit fit, double seconds, String engine,
+                          int readBack) {
         int ok = 0;
         int warning = 0;
         int failed = 0;
@@ -119,8 +145,12 @@ final class MapOutputs {
                 results.length, data.x.length, data.xColumn, data.signal));
         sb.append(String.format(Locale.ROOT, "  ok %d, with warnings %d, failed %d; %d started from a neighbour's"
                 + " result%n", ok, warning, failed, fromNeighbour));
-        sb.append(String.format(Locale.ROOT, "  %.1f s on %d thread%s: %.0f positions/s%n", seconds, threads,
-                threads == 1 ? "" : "s", results.length / Math.max(seconds, 1e-9)));
+        sb.append(String.format(Locale.ROOT, "  %.1f s on %s: %.0f positions/s%n", seconds, engine,
+                results.length / Math.max(seconds, 1e-9)));
+        if (readBack > 0) {
+            sb.append(String.format(Locale.ROOT, "  resumed: %d positions read back from the earlier run's journal,"
+                    + " %d fitted now%n", readBack, results.length - readBack));
+        }
         sb.append("spread over the positions with a value (ok and with warnings):\n");
         sb.append(String.format(Locale.ROOT, "  %-40s %8s %13s %13s %13s %13s %13s %13s %s%n", "parameter", "count",
                 "mean", "std", "min", "median", "max", "median σ", "unit"));

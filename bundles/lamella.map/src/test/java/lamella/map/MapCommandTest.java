@@ -255,4 +255,69 @@ class MapCommandTest {
         assertTrue(r.err().contains("would overwrite its own input"), r.err());
         assertArrayEquals(before, Files.readAllBytes(dir.resolve("map.csv")));
     }
+
+    @Test
+    void anInterruptedMapKeepsItsFinishedTilesAndTheNextRunFitsOnlyTheRest() throws Exception {
+        SyntheticMap.write(dir.resolve("grid.csv"), gridTable(16, 8));
+        assertEquals(0, run("case.json", "--out", "whole", "--threads", "1").status());
+
+        Path journal = dir.resolve("part/" + MapJournal.FOLDER);
+        Thread worker = new Thread(() -> run("case.json", "--out", "part", "--threads", "1"));
+        worker.start();
+        while (worker.isAlive() && tilesIn(journal) == 0) {
+            Thread.sleep(20);
+        }
+        worker.interrupt();
+        worker.join();
+        long kept = tilesIn(journal);
+        assertTrue(kept >= 1, "the finished tile is kept");
+        assertFalse(Files.exists(dir.resolve("part/map.csv")), "no map until every tile is done");
+
+        Run resumed = run("case.json", "--out", "part", "--threads", "2");
+
+        assertEquals(0, resumed.status(), resumed.err());
+        assertTrue(resumed.out().matches("(?s).*resumed: \\d+ positions read back from the earlier run's journal.*"),
+                resumed.out());
+        assertArrayEquals(Files.readAllBytes(dir.resolve("whole/map.csv")),
+                Files.readAllBytes(dir.resolve("part/map.csv")), "nothing lost, nothing twice, the same values");
+        assertFalse(Files.exists(journal), "the journal goes once the map is written");
+    }
+
+    @Test
+    void aJournalOfOtherInputsIsNotUsed() throws Exception {
+        SyntheticMap.write(dir.resolve("grid.csv"), gridTable(4, 3));
+        Path journal = dir.resolve("out/" + MapJournal.FOLDER);
+        Files.createDirectories(journal);
+        Files.writeString(journal.resolve("inputs.sha256"), "0123\n");
+        Files.writeString(journal.resolve("tile-000000.txt"), "# something else\n");
+
+        Run r = run("case.json", "--out", "out");
+
+        assertEquals(0, r.status(), r.err());
+        assertFalse(r.out().contains("resumed"), r.out());
+        assertEquals(12, rows(dir.resolve("out/map.csv")).size());
+        assertFalse(Files.exists(journal));
+    }
+
+    @Test
+    void parquetDataAreLeftToTheSparkEngine() throws Exception {
+        caseFile("map.parquet");
+        Files.writeString(dir.resolve("map.parquet"), "PAR1");
+        Run r = run("case.json", "--out", "out");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("map.data: 'map.parquet' is Parquet, which the Spark engine reads"), r.err());
+        Run spark = run("case.json", "--out", "out", "--engine", "spark");
+        assertEquals(2, spark.status());
+        assertTrue(spark.err().contains("./lamella map CASE.json --out DIR --engine spark"), spark.err());
+        assertFalse(Files.exists(dir.resolve("out")), "nothing was written");
+    }
+
+    static long tilesIn(Path journal) throws IOException {
+        if (!Files.isDirectory(journal)) {
+            return 0;
+        }
+        try (var files = Files.list(journal)) {
+            return files.filter(f -> f.getFileName().toString().matches("tile-\\d+\\.txt")).count();
+        }
+    }
 }
