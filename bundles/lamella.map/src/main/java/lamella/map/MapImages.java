@@ -42,7 +42,7 @@ import org.jfree.svg.SVGGraphics2D;
  * its unit, a scale bar in µm, and a cross on every position that has no value (failed, or a σ the data cannot give).
  * Drawn with the charts bundle (JFreeChart), as PNG and as SVG.
  */
-final class MapImages {
+public final class MapImages {
 
     static final int WIDTH = 900;
 
@@ -74,6 +74,25 @@ final class MapImages {
      * @param values    the value of each position; NaN or ±∞ where there is none (marked)
      */
     static Image draw(String title, String barLabel, double[] xM, double[] yM, double[] values) {
+        JFreeChart chart = chart(title, barLabel, xM, yM, values);
+        XYPlot plot = chart.getXYPlot();
+        double aspect = plot.getRangeAxis().getRange().getLength() / plot.getDomainAxis().getRange().getLength();
+        int plotWidth = WIDTH - 220;
+        int heightPx = (int) Math.round(Math.min(1400, Math.max(300, plotWidth * aspect + 160)));
+        return new Image(png(chart, heightPx), svg(chart, heightPx));
+    }
+
+    /**
+     * The map as a chart, for the files above and for the workbench's Map panel: axes x and y in µm, the colour bar
+     * on the right, a scale bar under the positions, a cross on each position without a value (series 0 of dataset 1).
+     *
+     * @param title     what the map shows
+     * @param barLabel  the colour bar's label with its unit
+     * @param xM        stage x of each position, m
+     * @param yM        stage y, m
+     * @param values    the value of each position; NaN or ±∞ where there is none (marked)
+     */
+    public static JFreeChart chart(String title, String barLabel, double[] xM, double[] yM, double[] values) {
         int n = xM.length;
         double[] xs = new double[n];
         double[] ys = new double[n];
@@ -183,10 +202,7 @@ final class MapImages {
         bar.setMargin(new RectangleInsets(8, 12, 8, 4));
         bar.setSubdivisionCount(256);
         chart.addSubtitle(bar);
-        double aspect = (y.getUpperBound() - y.getLowerBound()) / (xMax - xMin);
-        int plotWidth = WIDTH - 220;
-        int heightPx = (int) Math.round(Math.min(1400, Math.max(300, plotWidth * aspect + 160)));
-        return new Image(png(chart, heightPx), svg(chart, heightPx));
+        return chart;
     }
 
     /** A bar of a round length (1, 2 or 5 × 10ⁿ µm) near a fifth of the width, under the lowest positions. */

@@ -4,6 +4,8 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.geom.Point2D;
 import java.awt.geom.Rectangle2D;
+import java.util.function.BiConsumer;
+import java.util.function.BiFunction;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -60,6 +62,8 @@ public final class ChartCanvas extends Composite {
     private Point dragNow;
     private boolean panning;
     private boolean dragged;
+    private BiFunction<Double, Double, String> reading;
+    private BiConsumer<Double, Double> click;
 
     public ChartCanvas(Composite parent, int style) {
         super(parent, style);
@@ -102,6 +106,19 @@ public final class ChartCanvas extends Composite {
                 image.dispose();
             }
         });
+    }
+
+    /**
+     * More words for the read-out line at the point under the cursor, given its x and y in the axes' values (the
+     * Map panel names the position and its value there); null or an empty answer adds nothing.
+     */
+    public void setReading(BiFunction<Double, Double, String> more) {
+        reading = more;
+    }
+
+    /** Hears a left click (pressed and released without a drag) inside the data area, at x and y in axes' values. */
+    public void onClick(BiConsumer<Double, Double> listener) {
+        click = listener;
     }
 
     /** Shows a chart (null: an empty canvas); the canvas follows its changes until another replaces it. */
@@ -251,6 +268,12 @@ public final class ChartCanvas extends Composite {
             exportMenu(e);
             return;
         }
+        if (e.button == 1 && start != null && !wasPan && !moved && click != null
+                && chart.getPlot() instanceof XYPlot plot) {
+            Rectangle2D area = dataArea();
+            click.accept(plot.getDomainAxis().java2DToValue(e.x, area, plot.getDomainAxisEdge()),
+                    plot.getRangeAxis().java2DToValue(e.y, area, plot.getRangeAxisEdge()));
+        }
         if (start == null || wasPan || !moved || !(chart.getPlot() instanceof Zoomable z)) {
             canvas.redraw();
             return;
@@ -307,8 +330,10 @@ public final class ChartCanvas extends Composite {
         double y = plot.getRangeAxis().java2DToValue(py, area, plot.getRangeAxisEdge());
         String xl = plot.getDomainAxis().getLabel();
         String yl = plot.getRangeAxis().getLabel();
+        String more = reading == null ? null : reading.apply(x, y);
         readout.setText(AxisReading.reading(nameOf(xl), x, AxisReading.unitOf(xl)) + "     "
-                + AxisReading.reading(nameOf(yl), y, AxisReading.unitOf(yl)));
+                + AxisReading.reading(nameOf(yl), y, AxisReading.unitOf(yl))
+                + (more == null || more.isEmpty() ? "" : "     " + more));
     }
 
     private static String nameOf(String label) {

@@ -4,5 +4,5 @@
  * {@link lamella.charts.DecadeAxis} give every workbench plot the same look.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.1.0")
+@org.osgi.annotation.versioning.Version("0.2.0")
 package lamella.ui.charts;

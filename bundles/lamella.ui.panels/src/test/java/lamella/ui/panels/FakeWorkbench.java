@@ -68,6 +68,11 @@ final class FakeWorkbench implements Workbench {
     private final FakeMessages messages = new FakeMessages();
 
     FakeWorkbench(Display display, Shell shell) throws Exception {
+        this(display, shell, DEMO);
+    }
+
+    /** A workbench on another case file. */
+    FakeWorkbench(Display display, Shell shell, Path caseFile) throws Exception {
         this.display = display;
         this.shell = shell;
         List<HeatingGeometry> g = List.of(new GaussianBeams(), new PointSource(), new LineHeater(), new RingSource(),
@@ -90,7 +95,7 @@ final class FakeWorkbench implements Workbench {
         } else {
             materials = null;
         }
-        project = Project.open(DEMO, CaseReader.withModels(reader::read, () -> catalog));
+        project = Project.open(caseFile, CaseReader.withModels(reader::read, () -> catalog));
     }
 
     void shutdown() {

@@ -25,12 +25,16 @@ final class PanelHarness implements AutoCloseable {
     final FakeWorkbench workbench;
 
     PanelHarness(int width, int height) throws Exception {
+        this(width, height, FakeWorkbench.DEMO);
+    }
+
+    PanelHarness(int width, int height, Path caseFile) throws Exception {
         Display current = Display.getCurrent();
         display = current != null ? current : new Display();
         shell = new Shell(display);
         shell.setLayout(new FillLayout());
         shell.setSize(width, height);
-        workbench = new FakeWorkbench(display, shell);
+        workbench = new FakeWorkbench(display, shell, caseFile);
     }
 
     PanelView open(WorkbenchPanel panel) {
