@@ -62,6 +62,12 @@ final class ProfileText {
                 && bytes[2] == (byte) 0xBF;
         String text;
         String used;
+        if ((utf16le || utf16be) && (encoding == Profile.Encoding.LATIN_1 || encoding == Profile.Encoding.UTF_8)) {
+            throw new InputException(file, null, 1, "the profile reads "
+                    + (encoding == Profile.Encoding.LATIN_1 ? "Latin-1" : "UTF-8") + ", but the file begins with a"
+                    + " UTF-16 byte-order mark (" + (utf16le ? "FF FE" : "FE FF") + "): it is UTF-16 text; set the"
+                    + " profile's encoding to auto or utf-16");
+        }
         switch (encoding) {
             case UTF_16 -> {
                 if (!utf16le && !utf16be) {

@@ -120,6 +120,24 @@ class ProfileTableTest {
     }
 
     @Test
+    void aUtf16FileForAProfileThatReadsLatin1IsToldSoNotCalledBinary(@TempDir Path dir) throws Exception {
+        for (Profile.Encoding e : new Profile.Encoding[] {Profile.Encoding.LATIN_1, Profile.Encoding.UTF_8}) {
+            byte[] body = "a: 1\nx,y\n1,2\n".getBytes(StandardCharsets.UTF_16LE);
+            byte[] all = new byte[body.length + 2];
+            all[0] = (byte) 0xFF;
+            all[1] = (byte) 0xFE;
+            System.arraycopy(body, 0, all, 2, body.length);
+            Path f = dir.resolve("sweep.txt");
+            Files.write(f, all);
+            lamella.api.InputException x = org.junit.jupiter.api.Assertions.assertThrows(
+                    lamella.api.InputException.class, () -> ProfileText.read(f, e));
+            assertTrue(x.getMessage().endsWith(":1: the profile reads " + (e == Profile.Encoding.LATIN_1 ? "Latin-1"
+                    : "UTF-8") + ", but the file begins with a UTF-16 byte-order mark (FF FE): it is UTF-16 text;"
+                    + " set the profile's encoding to auto or utf-16"), x.getMessage());
+        }
+    }
+
+    @Test
     void everyEncodingGivesTheSameData(@TempDir Path dir) throws Exception {
         Profile p = profile("quillon-records.json");
         Path original = DEMO.resolve("raw/quillon-tdtr-records.csv");
