@@ -109,7 +109,7 @@ final class FitRunner {
                 }
             }
         }
-        double[] model = problem.model(problem.values(u, unc));
+        double[] model = solver.unweighted(u, unc).clone();
         List<DatasetFit> datasets = datasetFits(model, y, sigma, warnings);
         double chi2 = 0;
         for (int i = 0; i < y.length; i++) {
@@ -174,7 +174,7 @@ final class FitRunner {
     }
 
     private double[] residualSigma(double[] u, double[] unc, double[] y, double[] sigma) {
-        double[] m = problem.model(problem.values(u, unc));
+        double[] m = solver.unweighted(u, unc);
         double[] s = sigma.clone();
         int at = 0;
         int p = problem.free.size();

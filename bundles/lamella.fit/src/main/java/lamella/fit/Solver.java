@@ -16,16 +16,19 @@ import org.apache.commons.math3.exception.TooManyIterationsException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
+import org.apache.commons.math3.fitting.leastsquares.ValueAndJacobianFunction;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.util.Pair;
 
 /**
  * Levenberg–Marquardt (Apache Commons Math) on the weighted residuals (data − model)/σ in the fitting variables u,
  * bounds enforced by projecting each trial point onto them. Jacobians by finite differences, their columns computed
- * in parallel.
+ * in parallel, and only where the search needs one: at the points it accepts, not at trial points it rejects or the
+ * point it stops at. A point's model is computed once: the search asks for a value several times, and the
+ * reweighting passes and the uncertainty start where the search ended ({@link ModelMemo}).
  */
 final class Solver {
 
@@ -39,6 +42,7 @@ final class Solver {
     private final ExecutorService pool;
     private final Progress progress;
     private final AtomicInteger evaluations = new AtomicInteger();
+    private final ModelMemo memo = new ModelMemo();
 
     Solver(FitProblem problem, ExecutorService pool, Progress progress) {
         this.problem = problem;
@@ -64,16 +68,28 @@ final class Solver {
         for (int i = 0; i < n; i++) {
             target[i] = y[i] / sigma[i];
         }
-        MultivariateJacobianFunction f = point -> {
-            double[] u = point.toArray();
-            double[] value = weighted(u, uncertainValues, sigma);
-            double[][] j = jacobian(u, uncertainValues, sigma, value, parallel);
-            return new Pair<RealVector, org.apache.commons.math3.linear.RealMatrix>(new ArrayRealVector(value, false),
-                    new Array2DRowRealMatrix(j, false));
+        ValueAndJacobianFunction f = new ValueAndJacobianFunction() {
+            @Override
+            public RealVector computeValue(double[] u) {
+                return new ArrayRealVector(weighted(u, uncertainValues, sigma), false);
+            }
+
+            @Override
+            public RealMatrix computeJacobian(double[] u) {
+                return new Array2DRowRealMatrix(jacobian(u, uncertainValues, sigma,
+                        weighted(u, uncertainValues, sigma), parallel), false);
+            }
+
+            @Override
+            public Pair<RealVector, RealMatrix> value(RealVector point) {
+                double[] u = point.toArray();
+                return new Pair<>(computeValue(u), computeJacobian(u));
+            }
         };
         LeastSquaresBuilder b = new LeastSquaresBuilder()
                 .start(clamp(u0.clone()))
                 .model(f)
+                .lazyEvaluation(true)
                 .target(target)
                 .parameterValidator(v -> new ArrayRealVector(clamp(v.toArray()), false))
                 .maxEvaluations(Integer.MAX_VALUE)
@@ -93,15 +109,27 @@ final class Solver {
 
     /** The weighted model m/σ of every dataset. */
     double[] weighted(double[] u, double[] uncertainValues, double[] sigma) {
+        double[] m = unweighted(u, uncertainValues);
+        double[] w = new double[m.length];
+        for (int i = 0; i < m.length; i++) {
+            w[i] = m[i] / sigma[i];
+        }
+        return w;
+    }
+
+    /** The model of every dataset at u, computed once per point (the array is shared: never change it). */
+    double[] unweighted(double[] u, double[] uncertainValues) {
         if (progress.cancelled()) {
             throw new CancellationException("the fit was cancelled");
         }
         EvaluationCancelledException.checkpoint();
+        double[] known = memo.get(u, uncertainValues);
+        if (known != null) {
+            return known;
+        }
         evaluations.incrementAndGet();
         double[] m = problem.model(problem.values(u, uncertainValues));
-        for (int i = 0; i < m.length; i++) {
-            m[i] /= sigma[i];
-        }
+        memo.put(u, uncertainValues, m);
         return m;
     }
 

@@ -1,5 +1,6 @@
 package lamella.technique.tdtr;
 
+import java.util.concurrent.ConcurrentHashMap;
 import lamella.api.EvaluationCancelledException;
 import lamella.api.FrequencyResponse;
 import lamella.api.ModelEvaluationException;
@@ -7,9 +8,14 @@ import lamella.api.ModelEvaluationException;
 /**
  * A Chebyshev interpolant of g(s) = H(eˢ)·e^(s/2) on [a, b] through Chebyshev points of the first kind, held as its
  * Chebyshev coefficients and evaluated by Clenshaw's recurrence, which is stable and needs no division (Press et
- * al., Numerical Recipes, 3rd ed., 2007, §5.8).
+ * al., Numerical Recipes, 3rd ed., 2007, §5.8). {@link #atAll} runs the same recurrence for many points at once, point
+ * by point the same arithmetic in the same order as {@link #at}, so the results are identical.
  */
 final class Chebyshev {
+
+    /** Tables are kept for node counts up to this (the doubling from 48 reaches it after two steps). */
+    private static final int CACHED_NODES = 192;
+    private static final ConcurrentHashMap<Integer, double[]> COSINES = new ConcurrentHashMap<>();
 
     private final double a;
     private final double b;
@@ -22,17 +28,38 @@ final class Chebyshev {
         int n = re.length;
         cr = new double[n];
         ci = new double[n];
+        double[] cos = cosines(n);
         for (int k = 0; k < n; k++) {
             double sr = 0;
             double si = 0;
             for (int j = 0; j < n; j++) {
-                double c = Math.cos(Math.PI * k * (j + 0.5) / n);
+                double c = cos[k * n + j];
                 sr += re[j] * c;
                 si += im[j] * c;
             }
             cr[k] = 2.0 * sr / n;
             ci[k] = 2.0 * si / n;
         }
+    }
+
+    /** cos(π k (j + ½) / n) for k, j < n, row by row: the same for every fit of n nodes. */
+    private static double[] cosines(int n) {
+        if (n <= CACHED_NODES) {
+            double[] known = COSINES.get(n);
+            if (known != null) {
+                return known;
+            }
+        }
+        double[] cos = new double[n * n];
+        for (int k = 0; k < n; k++) {
+            for (int j = 0; j < n; j++) {
+                cos[k * n + j] = Math.cos(Math.PI * k * (j + 0.5) / n);
+            }
+        }
+        if (n <= CACHED_NODES) {
+            COSINES.putIfAbsent(n, cos);
+        }
+        return cos;
     }
 
     /**
@@ -102,5 +129,57 @@ final class Chebyshev {
         }
         out[0] = 0.5 * cr[0] + t * r1 - r2;
         out[1] = 0.5 * ci[0] + t * i1 - i2;
+    }
+
+    /** Nodes of the fit: the polynomial's degree plus one. */
+    int nodes() {
+        return cr.length;
+    }
+
+    /** The left end a of the interval [a, b] the interpolant is fitted on. */
+    double from() {
+        return a;
+    }
+
+    /** The right end b. */
+    double to() {
+        return b;
+    }
+
+    /**
+     * The interpolant at many points, as {@link #at} gives each: {@code t} and {@code twoT} hold each point's
+     * t = (2s − a − b)/(b − a) and 2t. The recurrence runs over all points per coefficient, which the JIT compiles
+     * to vector instructions.
+     */
+    void atAll(double[] t, double[] twoT, double[] outRe, double[] outIm) {
+        int count = t.length;
+        double[] r1 = new double[count];
+        double[] r2 = new double[count];
+        double[] r0 = new double[count];
+        double[] i1 = new double[count];
+        double[] i2 = new double[count];
+        double[] i0 = new double[count];
+        for (int k = cr.length - 1; k >= 1; k--) {
+            double ck = cr[k];
+            double cik = ci[k];
+            for (int j = 0; j < count; j++) {
+                r0[j] = ck + twoT[j] * r1[j] - r2[j];
+                i0[j] = cik + twoT[j] * i1[j] - i2[j];
+            }
+            double[] r = r2;
+            r2 = r1;
+            r1 = r0;
+            r0 = r;
+            double[] i = i2;
+            i2 = i1;
+            i1 = i0;
+            i0 = i;
+        }
+        double half = 0.5 * cr[0];
+        double halfI = 0.5 * ci[0];
+        for (int j = 0; j < count; j++) {
+            outRe[j] = half + t[j] * r1[j] - r2[j];
+            outIm[j] = halfI + t[j] * i1[j] - i2[j];
+        }
     }
 }

@@ -16,8 +16,8 @@ import lamella.api.ModelEvaluationException;
  * Chebyshev polynomial whose degree is doubled until it reproduces exact values at check points to 1e-9, so a
  * converged curve costs some fifty spectral integrals instead of tens of thousands.
  *
- * <p>Cancellable: the thread's interrupt flag is checked before every response evaluated and every delay summed
- * (a few thousand terms, microseconds), ending the sum with {@link EvaluationCancelledException}.
+ * <p>Cancellable: the thread's interrupt flag is checked before every response evaluated and every
+ * {@value #RESEED} terms summed (microseconds), ending the sum with {@link EvaluationCancelledException}.
  */
 final class PulseTrainSum {
 
@@ -73,53 +73,78 @@ final class PulseTrainSum {
      */
     double[][] evaluate(double[] delays, FrequencyResponse h) {
         int m = terms;
+        int exact = interpolate ? Math.min(EXACT_TERMS, m) : m;
+        Harmonics harmonics = Harmonics.of(fMod, fRep, cutoff, m, exact);
         double[] wr = new double[2 * m + 1];
         double[] wi = new double[2 * m + 1];
-        fill(h, wr, wi);
-        for (int j = -m; j <= m; j++) {
-            double x = j * fRep / cutoff;
-            double g = Double.isInfinite(cutoff) ? 1.0 : Math.exp(-Math.PI * x * x);
-            wr[j + m] *= g;
-            wi[j + m] *= g;
+        fill(h, harmonics, wr, wi);
+        double[] g = harmonics.weight;
+        for (int j = 0; j < wr.length; j++) {
+            wr[j] *= g[j];
+            wi[j] *= g[j];
         }
-        double[][] s = new double[2][delays.length];
-        for (int d = 0; d < delays.length; d++) {
-            EvaluationCancelledException.checkpoint();
-            double theta = 2 * Math.PI * fRep * delays[d];
-            double sr = wr[m];
-            double si = wi[m];
-            double cr = 1;
-            double ci = 0;
-            double stepR = Math.cos(theta);
-            double stepI = Math.sin(theta);
-            for (int j = 1; j <= m; j++) {
-                if (j % RESEED == 0) {
-                    cr = Math.cos(j * theta);
-                    ci = Math.sin(j * theta);
-                } else {
-                    double t = cr * stepR - ci * stepI;
-                    ci = cr * stepI + ci * stepR;
-                    cr = t;
+        return sum(delays, wr, wi);
+    }
+
+    /**
+     * Σ W_j e^{ijθ} at every delay, θ = 2π f_rep t. The delays advance together term by term, so that the inner loop
+     * runs over delays and compiles to vector instructions; for each delay the arithmetic and its order are those of
+     * a sum delay by delay.
+     */
+    private double[][] sum(double[] delays, double[] wr, double[] wi) {
+        int m = terms;
+        int n = delays.length;
+        double[] theta = new double[n];
+        double[] sr = new double[n];
+        double[] si = new double[n];
+        double[] cr = new double[n];
+        double[] ci = new double[n];
+        double[] stepR = new double[n];
+        double[] stepI = new double[n];
+        for (int d = 0; d < n; d++) {
+            theta[d] = 2 * Math.PI * fRep * delays[d];
+            sr[d] = wr[m];
+            si[d] = wi[m];
+            cr[d] = 1;
+            stepR[d] = Math.cos(theta[d]);
+            stepI[d] = Math.sin(theta[d]);
+        }
+        for (int j = 1; j <= m; j++) {
+            if (j % RESEED == 0) {
+                EvaluationCancelledException.checkpoint();
+                for (int d = 0; d < n; d++) {
+                    cr[d] = Math.cos(j * theta[d]);
+                    ci[d] = Math.sin(j * theta[d]);
                 }
-                // W₊ e^{ijθ} + W₋ e^{−ijθ}
-                double pr = wr[m + j];
-                double pi = wi[m + j];
-                double nr = wr[m - j];
-                double ni = wi[m - j];
-                sr += (pr + nr) * cr - (pi - ni) * ci;
-                si += (pi + ni) * cr + (pr - nr) * ci;
+            } else {
+                for (int d = 0; d < n; d++) {
+                    double t = cr[d] * stepR[d] - ci[d] * stepI[d];
+                    ci[d] = cr[d] * stepI[d] + ci[d] * stepR[d];
+                    cr[d] = t;
+                }
             }
-            s[0][d] = sr;
-            s[1][d] = si;
+            // W₊ e^{ijθ} + W₋ e^{−ijθ}
+            double pr = wr[m + j];
+            double pi = wi[m + j];
+            double nr = wr[m - j];
+            double ni = wi[m - j];
+            double evenR = pr + nr;
+            double oddI = pi - ni;
+            double evenI = pi + ni;
+            double oddR = pr - nr;
+            for (int d = 0; d < n; d++) {
+                sr[d] += evenR * cr[d] - oddI * ci[d];
+                si[d] += evenI * cr[d] + oddR * ci[d];
+            }
         }
-        return s;
+        return new double[][] {sr, si};
     }
 
     /** H at f_mod + j f_rep for j = −m…m, using H(−f) = conj H(f). */
-    private void fill(FrequencyResponse h, double[] wr, double[] wi) {
+    private void fill(FrequencyResponse h, Harmonics harmonics, double[] wr, double[] wi) {
         int m = terms;
         double[] z = new double[2];
-        int exact = interpolate ? Math.min(EXACT_TERMS, m) : m;
+        int exact = harmonics.exact;
         for (int j = -exact; j <= exact; j++) {
             value(h, fMod + j * fRep, z);
             wr[j + m] = z[0];
@@ -128,21 +153,22 @@ final class PulseTrainSum {
         if (exact == m) {
             return;
         }
-        double fLo = (exact + 1) * fRep - fMod;
-        double fHi = m * fRep + fMod;
-        Chebyshev c = Chebyshev.fit(h, Math.log(fLo), Math.log(fHi), FIRST_DEGREE, MAX_DEGREE,
+        Chebyshev c = Chebyshev.fit(h, harmonics.lnLo, harmonics.lnHi, FIRST_DEGREE, MAX_DEGREE,
                 INTERPOLATION_TOLERANCE);
-        for (int j = exact + 1; j <= m; j++) {
-            double fp = fMod + j * fRep;
-            c.at(Math.log(fp), z);
-            double s = 1 / Math.sqrt(fp);
-            wr[m + j] = z[0] * s;
-            wi[m + j] = z[1] * s;
-            double fn = j * fRep - fMod;
-            c.at(Math.log(fn), z);
-            s = 1 / Math.sqrt(fn);
-            wr[m - j] = z[0] * s;
-            wi[m - j] = -z[1] * s;
+        int tail = m - exact;
+        double[] re = new double[tail];
+        double[] im = new double[tail];
+        c.atAll(harmonics.tPlus, harmonics.twoTPlus, re, im);
+        double[] root = harmonics.rootPlus;
+        for (int i = 0; i < tail; i++) {
+            wr[m + exact + 1 + i] = re[i] * root[i];
+            wi[m + exact + 1 + i] = im[i] * root[i];
+        }
+        c.atAll(harmonics.tMinus, harmonics.twoTMinus, re, im);
+        root = harmonics.rootMinus;
+        for (int i = 0; i < tail; i++) {
+            wr[m - exact - 1 - i] = re[i] * root[i];
+            wi[m - exact - 1 - i] = -im[i] * root[i];
         }
     }
 

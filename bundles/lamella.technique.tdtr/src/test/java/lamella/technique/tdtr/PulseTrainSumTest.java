@@ -136,6 +136,51 @@ class PulseTrainSumTest {
         }
     }
 
+    /**
+     * All delays summed together give what a sum delay by delay gives, bit for bit: the reference below is the plain
+     * Σ W_j e^{ijθ} over j for one delay at a time, with the same phase recurrence (common practice, no source).
+     */
+    @Test
+    void delaysSummedTogetherEqualEachSummedAlone() {
+        PulseTrainSum sum = PulseTrainSum.withCutoff(F_MOD, F_REP, PulseTrainSum.DEFAULT_CUTOFF, false);
+        int m = sum.terms();
+        double[] t = {-2e-11, 0, 1e-10, 5e-10, 3e-9, 1.2e-8};
+        double[][] together = sum.evaluate(t, HALF_SPACE);
+        double[] z = new double[2];
+        for (int d = 0; d < t.length; d++) {
+            double[] wr = new double[2 * m + 1];
+            double[] wi = new double[2 * m + 1];
+            for (int j = -m; j <= m; j++) {
+                double f = F_MOD + j * F_REP;
+                HALF_SPACE.at(Math.abs(f), z);
+                double x = j * F_REP / PulseTrainSum.DEFAULT_CUTOFF;
+                double g = Math.exp(-Math.PI * x * x);
+                wr[j + m] = z[0] * g;
+                wi[j + m] = (f < 0 ? -z[1] : z[1]) * g;
+            }
+            double theta = 2 * Math.PI * F_REP * t[d];
+            double sr = wr[m];
+            double si = wi[m];
+            double cr = 1;
+            double ci = 0;
+            for (int j = 1; j <= m; j++) {
+                if (j % 256 == 0) {
+                    cr = Math.cos(j * theta);
+                    ci = Math.sin(j * theta);
+                } else {
+                    double r = cr * Math.cos(theta) - ci * Math.sin(theta);
+                    ci = cr * Math.sin(theta) + ci * Math.cos(theta);
+                    cr = r;
+                }
+                sr += (wr[m + j] + wr[m - j]) * cr - (wi[m + j] - wi[m - j]) * ci;
+                si += (wi[m + j] + wi[m - j]) * cr + (wr[m + j] - wr[m - j]) * ci;
+            }
+            assertEquals(Double.doubleToLongBits(sr), Double.doubleToLongBits(together[0][d]), "in-phase at " + t[d]);
+            assertEquals(Double.doubleToLongBits(si), Double.doubleToLongBits(together[1][d]), "out-of-phase at "
+                    + t[d]);
+        }
+    }
+
     /** Heat from earlier pulses makes the in-phase signal at negative delay positive and nearly flat (Cahill 2004). */
     @Test
     void negativeDelaysCarryAccumulatedHeat() {
