@@ -53,9 +53,13 @@ final class FitRunner {
         for (int pass = 0; estimated && pass < MAX_REWEIGHTS; pass++) {
             double[] next = residualSigma(best.u(), unc, y, sigma);
             boolean settled = relativeChange(sigma, next) < 0.01;
+            boolean rescaled = proportional(sigma, next);
             sigma = next;
-            best = solver.solve(best.u(), unc, y, sigma, true);
-            if (settled) {
+            // σ multiplied by one factor everywhere scales χ² and leaves its minimum where it is
+            if (!rescaled) {
+                best = solver.solve(best.u(), unc, y, sigma, true);
+            }
+            if (settled || rescaled) {
                 break;
             }
         }
@@ -235,6 +239,17 @@ final class FitRunner {
             }
         }
         return r;
+    }
+
+    /** Whether b is a times one factor, to rounding (a single dataset weighted by its residuals). */
+    static boolean proportional(double[] a, double[] b) {
+        double factor = b[0] / a[0];
+        for (int i = 1; i < a.length; i++) {
+            if (Math.abs(b[i] / a[i] - factor) > 1e-12 * Math.abs(factor)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double relativeChange(double[] a, double[] b) {
