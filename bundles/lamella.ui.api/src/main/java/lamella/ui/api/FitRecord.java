@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
@@ -80,22 +79,23 @@ record FitRecord(FitOutcome outcome, String basis, String applied) {
 
     /**
      * The fingerprint of a case document's inputs: everything but the {@code workbench} object, with each dataset's
-     * data file named by its file name only, so that moving the project with its data keeps it (SHA-256).
+     * data file replaced by the digest of its content, so that an edited data file makes the fit out of date while
+     * moving or re-saving the project with the same data keeps it (SHA-256). Data paths are absolute, as the
+     * project holds them.
      */
-    static String fingerprint(ObjectNode document) {
+    static String fingerprint(ObjectNode document, DataDigests data) {
         ObjectNode c = document.deepCopy();
         c.remove(Project.WORKBENCH_KEY);
         for (JsonNode ds : c.path("fit").path("datasets")) {
             if (ds instanceof ObjectNode o && o.path("data").isTextual()) {
-                Path p = Path.of(o.get("data").asText());
-                o.put("data", p.getFileName() == null ? o.get("data").asText() : p.getFileName().toString());
+                o.put("data", data.of(Path.of(o.get("data").asText())));
             }
         }
         try {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            MessageDigest md = DataDigests.sha256();
             return HexFormat.of().formatHex(md.digest(JSON.writeValueAsString(c).getBytes(StandardCharsets.UTF_8)));
-        } catch (NoSuchAlgorithmException | com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalStateException("SHA-256 and JSON writing are always available", e);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException("a document of the project is always writable as JSON", e);
         }
     }
 }

@@ -68,6 +68,7 @@ public final class Project {
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
     private final EditHistory history = new EditHistory();
     private final Map<String, String> relocated = new HashMap<>();
+    private final DataDigests dataDigests = new DataDigests();
     private ObjectNode document;
     private ObjectNode clean;
     private boolean dirty;
@@ -515,7 +516,7 @@ public final class Project {
      * it out of date at once. Saving keeps it with the project.
      */
     public void setLastFit(FitOutcome outcome, ObjectNode fitted) {
-        lastFit = new FitRecord(outcome, FitRecord.fingerprint(fitted), null);
+        lastFit = new FitRecord(outcome, FitRecord.fingerprint(fitted, dataDigests), null);
         lastFitProblem = null;
         fitUnsaved = true;
         fire(Change.RESULT);
@@ -527,13 +528,13 @@ public final class Project {
      * values taken in. False after any other edit (the results are out of date), and without a fit.
      */
     public boolean lastFitCurrent() {
-        return lastFit != null && lastFit.belongsTo(FitRecord.fingerprint(document));
+        return lastFit != null && lastFit.belongsTo(FitRecord.fingerprint(document, dataDigests));
     }
 
     /** Whether the case holds the last fit's values, taken in with {@link #useFittedValues()}. */
     public boolean fittedValuesInUse() {
         return lastFit != null && lastFit.applied() != null
-                && lastFit.applied().equals(FitRecord.fingerprint(document));
+                && lastFit.applied().equals(FitRecord.fingerprint(document, dataDigests));
     }
 
     /** Why a fit kept with the project could not be shown again, if that happened when it was opened. */
@@ -562,7 +563,7 @@ public final class Project {
                 }
             }
         });
-        lastFit = r.withApplied(FitRecord.fingerprint(document));
+        lastFit = r.withApplied(FitRecord.fingerprint(document, dataDigests));
         fitUnsaved = true;
         fire(Change.RESULT);
     }

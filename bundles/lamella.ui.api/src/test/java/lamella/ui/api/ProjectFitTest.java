@@ -120,4 +120,37 @@ class ProjectFitTest {
         assertTrue(p.lastFitProblem().orElseThrow().contains("workbench.last_fit could not be read"),
                 p.lastFitProblem().toString());
     }
+
+    @Test
+    void theDataFilesContentDecidesWhetherTheFitIsCurrentNotTheirNames() throws Exception {
+        Path saved = dir.resolve("first/case.json");
+        Project.open(ProjectTest.DEMO, ProjectTest.READER).save(saved);
+        Project p = Project.open(saved, ProjectTest.READER);
+        p.setLastFit(outcome());
+        Path data = p.dataFile(0);
+
+        Path again = dir.resolve("second/case.json");
+        p.save(again);
+        assertTrue(p.lastFitCurrent(), "re-saved elsewhere, the same data: still current");
+        Path copied = p.dataFile(0);
+        assertTrue(copied.startsWith(again.getParent()) && !copied.equals(data), copied.toString());
+
+        Files.move(copied, copied.resolveSibling("renamed.csv"));
+        p.edit("point dataset 0 at the renamed file", d -> ((com.fasterxml.jackson.databind.node.ObjectNode)
+                d.path("fit").path("datasets").get(0)).put("data", copied.resolveSibling("renamed.csv").toString()));
+        assertTrue(p.lastFitCurrent(), "another name for the same bytes keeps the fit");
+        p.undo();
+        assertFalse(p.lastFitCurrent(), "the file it named is gone");
+        Files.move(copied.resolveSibling("renamed.csv"), copied);
+        assertTrue(p.lastFitCurrent());
+
+        List<String> lines = Files.readAllLines(copied);
+        int last = lines.size() - 1;
+        lines.set(last, lines.get(last) + "1");
+        Files.write(copied, lines);
+        assertFalse(p.lastFitCurrent(), "an edited data file makes the fit out of date");
+        p.save(again);
+        Project reopened = Project.open(again, ProjectTest.READER);
+        assertFalse(reopened.lastFitCurrent(), "and it stays out of date when the project is opened again");
+    }
 }
