@@ -22,6 +22,8 @@ import lamella.ui.charts.ChartCanvas;
 import lamella.ui.charts.PlotLook;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.ScrolledComposite;
+import org.eclipse.swt.custom.StackLayout;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.program.Program;
@@ -33,6 +35,8 @@ import org.eclipse.swt.widgets.DirectoryDialog;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.ProgressBar;
 import org.eclipse.swt.widgets.Spinner;
+import org.eclipse.swt.widgets.TabFolder;
+import org.eclipse.swt.widgets.TabItem;
 import org.eclipse.swt.widgets.Table;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -62,6 +66,15 @@ final class FitView implements PanelView {
     private final Spinner monteCarlo;
     private final ProgressBar bar;
     private final StatusLine status;
+    private final Composite body;
+    private final StackLayout bodyLayout = new StackLayout();
+    private final SashForm sash;
+    private final TabFolder tabs;
+    private final TabItem tablesTab;
+    private final TabItem residualsTab;
+    private final ScrolledComposite tablesScroll;
+    private final Composite tables;
+    private final Composite right;
     private final Table results;
     private final Table correlation;
     private final Table budget;
@@ -97,10 +110,19 @@ final class FitView implements PanelView {
         report.setEnabled(false);
         new Label(controls, SWT.NONE);
         status = new StatusLine(root, 1);
-        SashForm sash = new SashForm(root, SWT.HORIZONTAL);
-        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        Composite tables = new Composite(sash, SWT.NONE);
+        body = new Composite(root, SWT.NONE);
+        body.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        body.setLayout(bodyLayout);
+        sash = new SashForm(body, SWT.HORIZONTAL);
+        tabs = new TabFolder(body, SWT.TOP);
+        tablesScroll = new ScrolledComposite(sash, SWT.V_SCROLL);
+        Tables.startWithRoom(tablesScroll);
+        tablesScroll.setExpandHorizontal(true);
+        tablesScroll.setExpandVertical(true);
+        tables = new Composite(tablesScroll, SWT.NONE);
         tables.setLayout(new GridLayout(1, false));
+        tablesScroll.setContent(tables);
+        tablesScroll.addListener(SWT.Resize, e -> fitTables());
         Composite valuesHead = new Composite(tables, SWT.NONE);
         GridLayout vh = new GridLayout(2, false);
         vh.marginWidth = 0;
@@ -111,13 +133,13 @@ final class FitView implements PanelView {
         use = push(valuesHead, USE, this::useFittedValues);
         use.setToolTipText("take the best-fit values into the case as one step (Edit ▸ Undo takes them back)");
         use.setEnabled(false);
-        results = table(tables, 90);
+        results = table(tables);
         heading(tables, "Correlation of the fitted values (dimensionless)");
-        correlation = table(tables, 80);
+        correlation = table(tables);
         heading(tables, "Uncertainty budget: 1σ from each source for fitted value (1), (2), …, its share of the"
                 + " variance in %, and the total");
-        budget = table(tables, 120);
-        Composite right = new Composite(sash, SWT.NONE);
+        budget = table(tables);
+        right = new Composite(sash, SWT.NONE);
         right.setLayout(new GridLayout(2, false));
         Label rl = new Label(right, SWT.NONE);
         rl.setText("Residuals of:");
@@ -129,14 +151,14 @@ final class FitView implements PanelView {
         cgd.widthHint = 420;
         cgd.heightHint = 300;
         residuals.setLayoutData(cgd);
-        sash.setWeights(new int[] {55, 45});
-        // Tables and residuals side by side where there is room for both, else the residuals below the tables.
-        root.addListener(SWT.Resize, e -> {
-            int orientation = root.getClientArea().width >= SIDE_BY_SIDE_PX ? SWT.HORIZONTAL : SWT.VERTICAL;
-            if (sash.getOrientation() != orientation) {
-                sash.setOrientation(orientation);
-            }
-        });
+        tablesTab = new TabItem(tabs, SWT.NONE);
+        tablesTab.setText("Values, correlation, budget");
+        residualsTab = new TabItem(tabs, SWT.NONE);
+        residualsTab.setText("Residuals");
+        arrange(false);
+        // Tables and residuals side by side where there is room for both, else each on a tab of its own, so that
+        // neither squeezes the other's rows or axes away.
+        root.addListener(SWT.Resize, e -> arrange(root.getClientArea().width >= SIDE_BY_SIDE_PX));
         project.addListener(listener);
         project.lastFit().ifPresent(o -> {
             show(o);
@@ -194,12 +216,50 @@ final class FitView implements PanelView {
         l.setLayoutData(gd);
     }
 
-    private static Table table(Composite parent, int height) {
+    private static Table table(Composite parent) {
         Table t = Tables.create(parent);
-        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true);
-        gd.heightHint = height;
-        t.setLayoutData(gd);
+        t.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        Tables.showEveryRow(t);
         return t;
+    }
+
+    /** Side by side (wide) or on two tabs; the controls move between the two holders. */
+    private void arrange(boolean wide) {
+        Composite holder = wide ? sash : tabs;
+        if (tablesScroll.getParent() == holder && bodyLayout.topControl == holder) {
+            return;
+        }
+        tablesTab.setControl(null);
+        residualsTab.setControl(null);
+        tablesScroll.setParent(holder);
+        right.setParent(holder);
+        if (wide) {
+            tablesScroll.moveAbove(right);
+            sash.setWeights(new int[] {55, 45});
+        } else {
+            tablesTab.setControl(tablesScroll);
+            residualsTab.setControl(right);
+        }
+        bodyLayout.topControl = holder;
+        body.layout(true, true);
+        fitTables();
+    }
+
+    /** The tables' column as tall as their rows need at the width there is; the column scrolls when taller. */
+    private void fitTables() {
+        int width = tablesScroll.getClientArea().width;
+        if (width > 0) {
+            tablesScroll.setMinSize(tables.computeSize(width, SWT.DEFAULT));
+        }
+    }
+
+    /** The results' tab, when results and residuals are on tabs (null side by side); for tests. */
+    TabFolder resultTabs() {
+        return bodyLayout.topControl == tabs ? tabs : null;
+    }
+
+    Table correlation() {
+        return correlation;
     }
 
     private void changed(Project.Change change) {
@@ -365,7 +425,11 @@ final class FitView implements PanelView {
         residualPick.select(0);
         drawResiduals();
         report.setEnabled(workbench.reports().isPresent());
+        for (Table t : List.of(results, correlation, budget)) {
+            Tables.showEveryRow(t);
+        }
         root.layout(true, true);
+        fitTables();
     }
 
     private void drawResiduals() {

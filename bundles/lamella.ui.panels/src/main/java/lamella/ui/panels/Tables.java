@@ -17,9 +17,38 @@ final class Tables {
 
     static Table create(Composite parent) {
         Table t = new Table(parent, SWT.BORDER | SWT.FULL_SELECTION);
+        startWithRoom(t);
         t.setHeaderVisible(true);
         t.setLinesVisible(true);
         return t;
+    }
+
+    /** Rows a table laid out by {@link #showEveryRow} has room for when it is still empty. */
+    private static final int FEWEST_ROWS = 2;
+    /** Room for a horizontal scroll bar, which appears when the columns are wider than the table. */
+    private static final int SCROLL_BAR = 18;
+
+    /**
+     * Makes a table in a grid as tall as its header and every row (at least a few), so that its rows are never
+     * squeezed out of sight: the composite around it scrolls instead. Call again after filling it.
+     */
+    static void showEveryRow(Table t) {
+        if (t.getLayoutData() instanceof org.eclipse.swt.layout.GridData gd) {
+            int rows = Math.max(FEWEST_ROWS, t.getItemCount());
+            gd.heightHint = t.getHeaderHeight() + rows * t.getItemHeight() + 2 * t.getBorderWidth() + SCROLL_BAR;
+        }
+    }
+
+    /** The size a scrolled control has until its first layout. */
+    static final int START_WIDTH = 400;
+    static final int START_HEIGHT = 160;
+
+    /**
+     * Gives a table or scrolled composite a workable size before its panel is first laid out: an ancestor resized
+     * first has GTK draw it at no size with its scroll bars, which GTK reports as a negative size.
+     */
+    static void startWithRoom(org.eclipse.swt.widgets.Scrollable s) {
+        s.setSize(START_WIDTH, START_HEIGHT);
     }
 
     /** Replaces columns and rows. */

@@ -51,6 +51,24 @@ class FitPanelTest {
             }
             assertTrue(v.startButton().getEnabled(), "a new fit can start");
             h.screenshot("fit");
+
+            // The Fit panel's room in the default arrangement at 1280×800: the values and their correlations show
+            // every row, the residuals have a tab of their own.
+            h.shell.setSize(806, 513);
+            h.pump(300);
+            h.screenshot("fit-806x513");
+            assertTrue(v.resultTabs() != null, "results and residuals on tabs when narrow");
+            for (Table t : java.util.List.of(v.results(), v.correlation())) {
+                int rows = t.getHeaderHeight() + t.getItemCount() * t.getItemHeight();
+                assertTrue(t.getClientArea().height + t.getHeaderHeight() >= rows, "every row of a table has room: "
+                        + t.getClientArea() + " for " + t.getItemCount() + " rows");
+                org.eclipse.swt.graphics.Rectangle last = t.getItem(t.getItemCount() - 1).getBounds();
+                org.eclipse.swt.graphics.Point bottom = t.toDisplay(0, last.y + last.height);
+                org.eclipse.swt.widgets.Composite view = t.getParent().getParent();
+                org.eclipse.swt.graphics.Point viewBottom = view.toDisplay(0, view.getClientArea().height);
+                assertTrue(bottom.y <= viewBottom.y, "the last row is in view without scrolling: " + bottom
+                        + " within " + viewBottom);
+            }
         }
     }
 }

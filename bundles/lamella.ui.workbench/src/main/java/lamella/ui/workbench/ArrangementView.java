@@ -265,8 +265,26 @@ final class ArrangementView {
                 toggleEnlarged((String) item.getData(PANEL));
             }
         });
+        folder.addListener(SWT.Resize, e -> sizeTabsBehind(folder));
         TabDrag.attach(folder, this);
         return folder;
+    }
+
+    /**
+     * Gives the panels behind the front tab the room the front one has: a folder sizes only its selected control, and
+     * GTK warns about a negative size when the tables and scroll bars of a panel left at no size are drawn.
+     */
+    private static void sizeTabsBehind(CTabFolder folder) {
+        Rectangle room = folder.getClientArea();
+        if (room.width <= 0 || room.height <= 0) {
+            return;
+        }
+        for (CTabItem item : folder.getItems()) {
+            Control c = item.getControl();
+            if (c != null && !c.isDisposed() && item != folder.getSelection() && !c.getBounds().equals(room)) {
+                c.setBounds(room);
+            }
+        }
     }
 
     private static String frontOf(CTabFolder folder) {

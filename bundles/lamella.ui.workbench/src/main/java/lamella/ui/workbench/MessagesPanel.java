@@ -47,6 +47,8 @@ public final class MessagesPanel implements WorkbenchPanel {
     public PanelView open(Composite parent, Workbench workbench) {
         SashForm sash = new SashForm(parent, SWT.HORIZONTAL);
         Table table = new Table(sash, SWT.FULL_SELECTION | SWT.SINGLE | SWT.V_SCROLL);
+        // A workable size until the first layout: GTK warns about scroll bars drawn at no size.
+        table.setSize(400, 160);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         column(table, "Time (local)", 110);

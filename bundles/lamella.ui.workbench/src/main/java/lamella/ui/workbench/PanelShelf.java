@@ -17,6 +17,9 @@ import org.eclipse.swt.widgets.Control;
  */
 final class PanelShelf {
 
+    private static final int OPENING_WIDTH = 800;
+    private static final int OPENING_HEIGHT = 500;
+
     private final Map<String, WorkbenchPanel> live = new LinkedHashMap<>();
     private final Map<String, PanelView> open = new LinkedHashMap<>();
     private final Composite parking;
@@ -65,6 +68,9 @@ final class PanelShelf {
                     throw new IllegalStateException("open() gave no control");
                 }
                 open.put(id, view);
+                // Laid out once at a workable size before it has a place: GTK warns about negative sizes when the
+                // tables and scroll bars of a panel still at no size are drawn into a tab.
+                view.control().setSize(OPENING_WIDTH, OPENING_HEIGHT);
             } catch (RuntimeException e) {
                 messages.error("Panel '" + title(id) + "' could not open", e);
                 disposeChildrenOpenedBy(view);

@@ -44,6 +44,8 @@ public final class ProjectPanel implements WorkbenchPanel {
     @Override
     public PanelView open(Composite parent, Workbench workbench) {
         Table table = new Table(parent, SWT.FULL_SELECTION | SWT.SINGLE | SWT.V_SCROLL | SWT.H_SCROLL);
+        // A workable size until the first layout: GTK warns about scroll bars drawn at no size.
+        table.setSize(400, 160);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         for (String[] c : List.of(new String[] {"Item", "150"}, new String[] {"File", "230"},
