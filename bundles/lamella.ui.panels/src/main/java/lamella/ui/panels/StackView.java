@@ -16,6 +16,7 @@ import lamella.ui.api.Project;
 import lamella.ui.api.Workbench;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.CCombo;
 import org.eclipse.swt.custom.TableEditor;
 import org.eclipse.swt.graphics.Point;
 import org.eclipse.swt.layout.GridData;
@@ -73,6 +74,7 @@ final class StackView implements PanelView {
         Composite left = new Composite(sash, SWT.NONE);
         left.setLayout(new GridLayout(1, false));
         table = new Table(left, SWT.BORDER | SWT.FULL_SELECTION | SWT.SINGLE | SWT.H_SCROLL | SWT.V_SCROLL);
+        Tables.startWithRoom(table);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         GridData tgd = new GridData(SWT.FILL, SWT.FILL, true, true);
@@ -366,7 +368,9 @@ final class StackView implements PanelView {
 
     private void editMaterial(TableItem item, int row) {
         disposeEditor();
-        Combo combo = new Combo(table, SWT.READ_ONLY);
+        // A flat chooser that fits inside its cell (a native combo is wider and taller than a row and covered the
+        // layer's name); its list opens below the cell as wide as the longest entry.
+        CCombo combo = new CCombo(table, SWT.READ_ONLY | SWT.FLAT);
         // Each entry in effect, by id with its name and library, so that "silicon" is told from a film of the same
         // name in the facility's library; the cell keeps the id, as the case file does.
         List<String> ids = new ArrayList<>();
@@ -391,6 +395,7 @@ final class StackView implements PanelView {
             }
         });
         combo.addListener(SWT.FocusOut, e -> disposeEditor());
+        editor.horizontalAlignment = SWT.LEFT;
         editor.setEditor(combo, item, MATERIAL);
         combo.setFocus();
     }

@@ -140,4 +140,31 @@ class StackPanelTest {
             assertEquals(Project.Role.FIXED, h.workbench.project().role(ParameterRef.layer("film", "k_through_w_mk")));
         }
     }
+
+    /** The Stack panel's room in the default arrangement at 1280×800. */
+    @Test
+    void theMaterialChooserOpensInsideItsCellAndLeavesTheLayersNameInView() throws Exception {
+        try (PanelHarness h = new PanelHarness(806, 513)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            org.eclipse.swt.widgets.Table t = stack.table();
+            org.eclipse.swt.graphics.Rectangle name = t.getItem(1).getBounds(0);
+            org.eclipse.swt.graphics.Rectangle cell = t.getItem(1).getBounds(1);
+            Event click = new Event();
+            click.x = cell.x + cell.width / 2;
+            click.y = cell.y + cell.height / 2;
+            click.button = 1;
+            t.notifyListeners(SWT.MouseDown, click);
+            h.pump(200);
+            org.eclipse.swt.custom.CCombo chooser = Arrays.stream(t.getChildren())
+                    .filter(c -> c instanceof org.eclipse.swt.custom.CCombo).map(c -> (org.eclipse.swt.custom.CCombo) c)
+                    .findFirst().orElseThrow(() -> new AssertionError("no chooser opened"));
+            org.eclipse.swt.graphics.Rectangle at = chooser.getBounds();
+            h.screenshot("stack-material-chooser-806x513");
+            assertTrue(at.x >= name.x + name.width, "the chooser " + at + " leaves the name cell " + name + " free");
+            assertTrue(at.y >= cell.y - 1 && at.y + at.height <= cell.y + cell.height + 1,
+                    "the chooser " + at + " stays within its row " + cell);
+            assertEquals("film", t.getItem(1).getText(0));
+            assertTrue(Arrays.asList(chooser.getItems()).contains("(own values)"), Arrays.toString(chooser.getItems()));
+        }
+    }
 }

@@ -330,7 +330,8 @@ final class WindowControl implements Function<String, String> {
 
     /** Chooses in the chooser a table cell opened for editing, by the start of the item's text. */
     private String editorChoose(String start) {
-        Combo c = WidgetFinder.first(window.shell(), Combo.class, x -> x.getParent() instanceof Table)
+        org.eclipse.swt.custom.CCombo c = WidgetFinder.first(window.shell(), org.eclipse.swt.custom.CCombo.class,
+                        x -> x.getParent() instanceof Table)
                 .orElseThrow(() -> new IllegalStateException("no cell chooser is open"));
         List<String> items = Arrays.asList(c.getItems());
         int i = -1;
