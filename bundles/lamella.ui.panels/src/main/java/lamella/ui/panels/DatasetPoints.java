@@ -40,7 +40,7 @@ record DatasetPoints(Request request, double[] allX, double[] x, double[] y, dou
      *
      * @param range   [from, to] of {@code x_range}, or empty
      * @param exclude the {@code exclude} ranges
-     * @param weights the dataset's own {@code weights}, or empty for the fit block's
+     * @param weights the {@code weights} in effect: the dataset's own, else the fit block's, else auto
      */
     record Request(int index, Path file, String technique, String signal, String xColumn, List<Double> range,
                    List<List<Double>> exclude, String weights) {
@@ -49,8 +49,9 @@ record DatasetPoints(Request request, double[] allX, double[] x, double[] y, dou
             return range.isEmpty() ? "all" : format(range.get(0), xColumn) + " to " + format(range.get(1), xColumn);
         }
 
+        /** Where σ comes from, as the fit decides it (the dataset's own weights, else the fit block's, else auto). */
         String weightsWords() {
-            return weights.isEmpty() ? "fit block's" : weights;
+            return weights;
         }
     }
 
@@ -80,7 +81,8 @@ record DatasetPoints(Request request, double[] allX, double[] x, double[] y, dou
             }
         }
         return new Request(index, Path.of(d.path("data").asText("?")), technique, signal,
-                xColumn(tree, d, catalog), range, exclude, d.path("weights").asText(""));
+                xColumn(tree, d, catalog), range, exclude, d.path("weights").asText(tree.path("fit").path("weights")
+                .asText("auto")));
     }
 
     /** The x column of a dataset's technique (delay for techniques without one known). */
@@ -205,8 +207,19 @@ record DatasetPoints(Request request, double[] allX, double[] x, double[] y, dou
         return n + (marked > 0 ? " (" + marked + " marked in the file)" : "");
     }
 
+    /**
+     * Where the fit takes σ from, in few words so that the column stays readable: auto means the data's σ where
+     * the file has them, else the residuals'.
+     */
     String sigmaWords() {
-        return sigma != null ? "; the data give σ" : "; no σ in the data";
+        String w = request.weights();
+        if (w.equals("auto")) {
+            return sigma != null ? "auto: the data" : "auto: residuals";
+        }
+        if (w.equals("data") && sigma == null) {
+            return "data: none in the file";
+        }
+        return w.equals("data") ? "the data" : w;
     }
 
     /** The σ a fit used at each of these points (matched by x), NaN where the fit had none. */

@@ -64,6 +64,7 @@ final class DatasetsView implements PanelView {
     private final StatusLine status;
     private final ChartCanvas chart;
     private final Composite editors;
+    private static final int MIN_SCROLL_HEIGHT = 120;
     private final ScrolledComposite scroll;
     private final DataFiles files = new DataFiles();
     private final LatestOnly<Outcome<List<DatasetPoints>>> work;
@@ -88,8 +89,11 @@ final class DatasetsView implements PanelView {
             }
         });
         scroll = new ScrolledComposite(root, SWT.V_SCROLL);
+        Tables.startWithRoom(scroll);
         GridData sgd = new GridData(SWT.FILL, SWT.FILL, false, true);
         sgd.widthHint = 430;
+        // Never laid out shorter than its scroll bar can be drawn (GTK warns about a negative size otherwise).
+        sgd.minimumHeight = MIN_SCROLL_HEIGHT;
         scroll.setLayoutData(sgd);
         scroll.setExpandHorizontal(true);
         scroll.setExpandVertical(true);
@@ -275,7 +279,7 @@ final class DatasetsView implements PanelView {
             rows.add(new String[] {Integer.toString(i), r.file().getFileName().toString(), r.technique(),
                 r.signal(), p == null ? "…" : Integer.toString(p.x().length),
                 p == null ? r.rangeWords() : p.fittedRangeWords(), p == null ? "…" : p.leftOutWords(),
-                r.weightsWords() + (p == null ? "" : p.sigmaWords())});
+                p == null ? r.weightsWords() : p.sigmaWords()});
         }
         Tables.fill(list, headings(), rows);
         if (selected < list.getItemCount()) {

@@ -33,7 +33,7 @@ class DatasetsPanelTest {
             assertEquals("tdtr-9.8mhz.csv", v.list().getItem(0).getText(1));
             assertEquals("fdtr", v.list().getItem(2).getText(2));
             assertEquals("phase_deg", v.list().getItem(2).getText(3));
-            assertTrue(v.list().getItem(0).getText(7).contains("the data give σ"), v.list().getItem(0).getText(7));
+            assertTrue(v.list().getItem(0).getText(7).equals("auto: the data"), v.list().getItem(0).getText(7));
             assertTrue(v.statusText().contains("bars: the data's σ"), v.statusText());
             h.screenshot("datasets");
 
@@ -64,6 +64,36 @@ class DatasetsPanelTest {
             assertEquals(1.2e6, dataset(h, 1).path("measurement").path("modulation_hz").asDouble(), 1e-6);
             assertEquals(9.8e6, h.workbench.project().tree().path("measurement").path("modulation_hz").asDouble(),
                     1e-6, "the case's own block is untouched");
+        }
+    }
+
+    /** The Datasets panel's room in the default arrangement at 1280×800: every column in view without scrolling. */
+    @Test
+    void everyColumnOfTheDatasetsTableIsInViewAt1280x800() throws Exception {
+        try (PanelHarness h = new PanelHarness(806, 513)) {
+            DatasetsView v = (DatasetsView) h.open(new DatasetsPanel());
+            assertTrue(h.pumpUntil(() -> v.list().getItemCount() == 3 && !v.list().getItem(0).getText(4)
+                    .equals("…"), 20_000), "three datasets read");
+            h.pump(200);
+            int widths = 0;
+            for (org.eclipse.swt.widgets.TableColumn c : v.list().getColumns()) {
+                widths += c.getWidth();
+            }
+            h.screenshot("datasets-806x513");
+            assertTrue(widths <= v.list().getClientArea().width, widths + " px of columns in a table "
+                    + v.list().getClientArea().width + " px wide");
+            for (int c = 0; c < v.list().getColumnCount(); c++) {
+                org.eclipse.swt.widgets.TableColumn col = v.list().getColumn(c);
+                org.eclipse.swt.graphics.GC gc = new org.eclipse.swt.graphics.GC(v.list());
+                try {
+                    for (org.eclipse.swt.widgets.TableItem item : v.list().getItems()) {
+                        assertTrue(gc.textExtent(item.getText(c)).x < col.getWidth(), "'" + item.getText(c)
+                                + "' fits its column " + col.getText());
+                    }
+                } finally {
+                    gc.dispose();
+                }
+            }
         }
     }
 }
