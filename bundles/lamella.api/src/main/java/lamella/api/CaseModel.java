@@ -127,20 +127,19 @@ public final class CaseModel {
      * order of the paths.
      */
     public CaseModel apartFor(Collection<ParameterRef> named) {
-        List<Layer> layers = new ArrayList<>(stack.layers());
+        Stack changed = stack;
         for (ParameterRef p : named) {
             if (p.scope() != ParameterRef.Scope.LAYER) {
                 continue;
             }
             boolean x = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_x_w_mk");
             boolean y = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_y_w_mk");
-            for (int i = 0; i < layers.size(); i++) {
-                if (layers.get(i).name().equals(p.layer()) && (x || y)) {
-                    layers.set(i, layers.get(i).apart(x, y));
-                }
+            if (x || y) {
+                Stack s = changed;
+                changed = s.layer(p.layer()).map(l -> s.withLayer(l.name(), l.apart(x, y))).orElse(s);
             }
         }
-        return new CaseModel(new Stack(layers, stack.bottom()), geometry, measurement);
+        return new CaseModel(changed, geometry, measurement);
     }
 
     /**
@@ -174,11 +173,12 @@ public final class CaseModel {
 
     /**
      * Every numeric input this model has, one per quantity the case states: finite layer values (a layer stated
-     * isotropic has one conductivity, {@code k_w_mk}) and the numbers of its geometry block.
+     * isotropic has one conductivity, {@code k_w_mk}), those of the layers above the heated plane too, and the
+     * numbers of its geometry block.
      */
     public List<ParameterRef> numericInputs() {
         List<ParameterRef> out = new ArrayList<>();
-        for (Layer l : stack.layers()) {
+        for (Layer l : stack.allLayers()) {
             if (!l.isSemiInfinite()) {
                 out.add(ParameterRef.layer(l.name(), "thickness_m"));
             }
@@ -211,10 +211,8 @@ public final class CaseModel {
     }
 
     private CaseModel withLayer(Layer old, Layer changed, ParameterRef p) throws InputException {
-        List<Layer> layers = new ArrayList<>(stack.layers());
-        layers.set(layers.indexOf(old), changed);
         try {
-            return new CaseModel(new Stack(layers, stack.bottom()), geometry, measurement);
+            return new CaseModel(stack.withLayer(old.name(), changed), geometry, measurement);
         } catch (IllegalArgumentException e) {
             throw InputException.at(p.toString(), e.getMessage());
         }
@@ -222,7 +220,7 @@ public final class CaseModel {
 
     private Layer layer(ParameterRef p, String at) throws InputException {
         return stack.layer(p.layer()).orElseThrow(() -> InputException.at(at, "there is no layer '" + p.layer()
-                + "'; layers: " + String.join(", ", stack.layers().stream().map(Layer::name).toList())));
+                + "'; layers: " + String.join(", ", stack.allLayers().stream().map(Layer::name).toList())));
     }
 
     private Block block(ParameterRef p) {

@@ -30,7 +30,8 @@ import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
 
 /**
- * Case files, version 1: {@code stack} (layers from the surface down and the bottom condition), {@code geometry}
+ * Case files, version 1: {@code stack} (layers from the heated plane down and the bottom condition; optionally
+ * layers above that plane and the top condition), {@code geometry}
  * and {@code measurement}, each naming its service by {@code type}. Unknown keys are errors so that a typo never
  * goes unnoticed; the stack is checked here, the other blocks by the services they name. A layer may name a
  * {@code material} of the live material libraries for the values it does not write itself.
@@ -46,7 +47,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
      */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
             LayerReading.TEMPERATURE, "fit", "plan", "map", WORKBENCH);
-    static final Set<String> STACK_KEYS = Set.of("layers", "bottom");
+    static final Set<String> STACK_KEYS = Set.of("layers", "bottom", "above", "top");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
     static final String K_THROUGH = "k_through_w_mk";
@@ -109,16 +110,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
     static Stack stack(Block s, double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
                        Map<String, Integer> lines, List<ValueOrigin> origins) throws InputException {
         onlyKnownKeys(s, STACK_KEYS, "the stack");
-        BottomBoundary bottom = BottomBoundary.SEMI_INFINITE;
-        if (s.has("bottom")) {
-            String b = s.requireString("bottom");
-            List<String> names = new ArrayList<>();
-            for (BottomBoundary v : BottomBoundary.values()) {
-                names.add(v.caseName());
-            }
-            bottom = BottomBoundary.fromCaseName(b).orElseThrow(() -> InputException.at(s.pathOf("bottom"),
-                    "unknown bottom '" + b + "'; expected one of: " + String.join(", ", names)));
-        }
+        BottomBoundary bottom = boundary(s, "bottom", BottomBoundary.SEMI_INFINITE);
         Object raw = s.get("layers");
         if (raw == null) {
             throw InputException.at(s.pathOf("layers"), "missing; expected a list of layers from the surface down");
@@ -127,23 +119,64 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             throw InputException.at(s.pathOf("layers"), "expected a non-empty list of layers, got "
                     + Block.describe(raw));
         }
+        Map<String, String> seen = new HashMap<>();
+        List<Layer> layers = side(s, "layers", list, bottom, false, temperature, temperaturePath, catalog, lines,
+                origins, seen);
+        if (!s.has("above")) {
+            if (s.has("top")) {
+                throw InputException.at(s.pathOf("top"), "a top condition needs layers above the heated plane;"
+                        + " add stack.above (layers from the top of layers[0] upward), or leave top out (with no"
+                        + " layers above, no heat leaves through the surface)");
+            }
+            return new Stack(layers, bottom);
+        }
+        if (!(s.get("above") instanceof List<?> up) || up.isEmpty()) {
+            throw InputException.at(s.pathOf("above"), "expected a non-empty list of layers from the heated plane"
+                    + " upward, got " + Block.describe(s.get("above")) + " (leave above out for a stack heated at"
+                    + " its surface)");
+        }
+        BottomBoundary top = boundary(s, "top", BottomBoundary.SEMI_INFINITE);
+        List<Layer> above = side(s, "above", up, top, true, temperature, temperaturePath, catalog, lines, origins,
+                seen);
+        return new Stack(layers, bottom, above, top);
+    }
+
+    /** {@code stack.bottom} or {@code stack.top}: one of the boundary names, or the default when not written. */
+    private static BottomBoundary boundary(Block s, String key, BottomBoundary absent) throws InputException {
+        if (!s.has(key)) {
+            return absent;
+        }
+        String b = s.requireString(key);
+        List<String> names = new ArrayList<>();
+        for (BottomBoundary v : BottomBoundary.values()) {
+            names.add(v.caseName());
+        }
+        return BottomBoundary.fromCaseName(b).orElseThrow(() -> InputException.at(s.pathOf(key),
+                "unknown " + key + " '" + b + "'; expected one of: " + String.join(", ", names)));
+    }
+
+    /** One side's layers; names are unique over both sides ({@code seen}: name to the path that used it). */
+    private static List<Layer> side(Block s, String key, List<?> list, BottomBoundary end, boolean above,
+                                    double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
+                                    Map<String, Integer> lines, List<ValueOrigin> origins, Map<String, String> seen)
+            throws InputException {
         List<Layer> layers = new ArrayList<>();
-        Map<String, Integer> seen = new HashMap<>();
         for (int i = 0; i < list.size(); i++) {
-            String at = s.pathOf("layers") + "[" + i + "]";
+            String at = s.pathOf(key) + "[" + i + "]";
             if (!(list.get(i) instanceof Block l)) {
                 throw InputException.at(at, "expected a layer object, got " + Block.describe(list.get(i)));
             }
             boolean last = i == list.size() - 1;
-            Layer layer = LayerReading.read(l, last, bottom, temperature, temperaturePath, catalog, lines, origins);
-            Integer before = seen.put(layer.name(), i);
+            Layer layer = LayerReading.read(l, last, end, above, temperature, temperaturePath, catalog, lines,
+                    origins);
+            String before = seen.put(layer.name(), at);
             if (before != null) {
                 throw InputException.at(l.pathOf(NAME), "the name '" + layer.name() + "' is already used by "
-                        + s.pathOf("layers") + "[" + before + "]");
+                        + before);
             }
             layers.add(layer);
         }
-        return new Stack(layers, bottom);
+        return layers;
     }
 
     static double positive(Block b, String key, String what) throws InputException {

@@ -69,7 +69,7 @@ final class LayerReading {
      * @param caseTemperaturePath where that temperature was set ({@code temperature_k}), or null for the default
      * @param catalog             the live libraries, asked only when the layer names a material
      */
-    static Layer read(Block l, boolean last, BottomBoundary bottom, double caseTemperature,
+    static Layer read(Block l, boolean last, BottomBoundary bottom, boolean above, double caseTemperature,
                       String caseTemperaturePath, Supplier<MaterialCatalog> catalog, Map<String, Integer> lines,
                       List<ValueOrigin> origins) throws InputException {
         CaseFileReader.onlyKnownKeys(l, CaseFileReader.LAYER_KEYS, "a layer");
@@ -107,10 +107,15 @@ final class LayerReading {
                             + "'; expected one of: normal, in-plane-x, in-plane-y")));
         }
         return new LayerReading(l, name, lines, origins, material, temperature,
-                temperaturePath == null ? l.pathOf(MATERIAL) : temperaturePath, axis).layer(last, bottom);
+                temperaturePath == null ? l.pathOf(MATERIAL) : temperaturePath, axis).layer(last, bottom, above);
     }
 
-    private Layer layer(boolean last, BottomBoundary bottom) throws InputException {
+    /**
+     * @param last   the outermost layer of its side: the last one below the heated plane, or the last above it
+     * @param bottom the condition beyond that side ({@code stack.bottom}, or {@code stack.top} for a layer above)
+     * @param above  a layer of {@code stack.above}, whose boundary conductance faces the heated plane
+     */
+    private Layer layer(boolean last, BottomBoundary bottom, boolean above) throws InputException {
         if (material.isPresent()) {
             checkOrientation(material.get());
         }
@@ -118,15 +123,19 @@ final class LayerReading {
         double thickness;
         if (semiInfinite) {
             if (l.has(CaseFileReader.THICKNESS)) {
-                throw InputException.at(l.pathOf(CaseFileReader.THICKNESS), "the last layer of a stack with a"
-                        + " semi-infinite bottom extends without end; leave out " + CaseFileReader.THICKNESS
-                        + ", or set stack.bottom to 'adiabatic' or 'isothermal'");
+                throw InputException.at(l.pathOf(CaseFileReader.THICKNESS), above
+                        ? "the outermost layer above the heated plane of a stack with a semi-infinite top extends"
+                        + " without end; leave out " + CaseFileReader.THICKNESS
+                        + ", or set stack.top to 'adiabatic' or 'isothermal'"
+                        : "the last layer of a stack with a semi-infinite bottom extends without end; leave out "
+                        + CaseFileReader.THICKNESS + ", or set stack.bottom to 'adiabatic' or 'isothermal'");
             }
             thickness = Double.POSITIVE_INFINITY;
-            fallback(CaseFileReader.THICKNESS, thickness, "semi-infinite (last layer, semi-infinite bottom)");
+            fallback(CaseFileReader.THICKNESS, thickness, above ? "semi-infinite (outermost layer above, semi-infinite"
+                    + " top)" : "semi-infinite (last layer, semi-infinite bottom)");
         } else {
             thickness = explicit(CaseFileReader.THICKNESS, "the layer's thickness in m"
-                    + (last ? " (the bottom is " + bottom.caseName() + ")" : ""));
+                    + (last ? " (the " + (above ? "top" : "bottom") + " is " + bottom.caseName() + ")" : ""));
         }
         double kz = conductivity(CaseFileReader.K_THROUGH, Direction.Z);
         String zSource = source;
@@ -141,7 +150,14 @@ final class LayerReading {
             c = fromLibrary(CaseFileReader.HEAT_CAPACITY, MaterialQuantity.HEAT_CAPACITY, "");
         }
         double g = Double.POSITIVE_INFINITY;
-        if (l.has(CaseFileReader.CONDUCTANCE)) {
+        if (above) {
+            if (l.has(CaseFileReader.CONDUCTANCE)) {
+                g = explicit(CaseFileReader.CONDUCTANCE, "the thermal boundary conductance toward the heated plane"
+                        + " in W/(m² K)");
+            } else {
+                fallback(CaseFileReader.CONDUCTANCE, g, "perfect contact with the layer toward the heated plane");
+            }
+        } else if (l.has(CaseFileReader.CONDUCTANCE)) {
             if (last) {
                 throw InputException.at(l.pathOf(CaseFileReader.CONDUCTANCE), "the last layer has no layer below it;"
                         + " a boundary conductance belongs to the upper of two neighbouring layers");

@@ -68,7 +68,7 @@ final class CaseOverrides {
     /** Which in-plane directions follow Λz in the layer a path names (none for other paths). */
     private static Layer.Tie tieOf(CaseDocument doc, ParameterRef ref) {
         if (ref.scope() == ParameterRef.Scope.LAYER) {
-            for (Layer l : doc.stack().layers()) {
+            for (Layer l : doc.stack().allLayers()) {
                 if (l.name().equals(ref.layer())) {
                     return l.tie();
                 }

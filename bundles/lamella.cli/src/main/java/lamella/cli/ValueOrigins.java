@@ -35,7 +35,8 @@ final class ValueOrigins {
         for (ValueOrigin o : c.origins()) {
             table.add(o.layer(), o.key(), value(o.value()), Units.ofKey(o.key()), o.describe());
         }
-        return "values used by " + c.document().file() + ":\n" + table.render("  ");
+        return "values used by " + c.document().file() + ":\n" + table.render("  ") + "model: "
+                + c.document().stack().heatFlowInWords() + "\n";
     }
 
     private static String value(double v) {

@@ -96,4 +96,33 @@ class ExplainTest {
                 + " \\(line 3\\)\\n.*"), err);
         assertTrue(err.matches("(?s).*\\n  film +thickness_m +∞ +m +default: semi-infinite.*"), err);
     }
+
+    @Test
+    void explainSaysWhereTheHeatGoesAndListsTheLayersAbove() throws Exception {
+        Files.writeString(dir.resolve("case.json"), """
+                {
+                  "stack": {"layers": [
+                    {"name": "film", "thickness_m": 1e-7, "k_through_w_mk": 90, "heat_capacity_j_m3k": 2.4e6},
+                    {"name": "base", "k_through_w_mk": 1.3, "heat_capacity_j_m3k": 1.6e6}
+                  ],
+                  "above": [
+                    {"name": "cover", "k_through_w_mk": 0.6, "heat_capacity_j_m3k": 4.2e6,
+                     "conductance_below_w_m2k": 5e7}
+                  ]},
+                  "geometry": {"type": "gaussian", "pump_radius_m": 5e-6, "probe_radius_m": 5e-6},
+                  "measurement": {"type": "sstr"}
+                }
+                """);
+        Run explained = run("case.json", "--explain");
+        assertEquals(Command.OK, explained.status(), explained.err());
+        String err = explained.err();
+        assertTrue(err.matches("(?s).*\\n  cover +conductance_below_w_m2k +50000000 +W/\\(m² K\\) +explicit in case"
+                + " file \\(line 8\\)\\n.*"), err);
+        assertTrue(err.matches("(?s).*\\n  cover +thickness_m +∞ +m +default: semi-infinite \\(outermost layer above,"
+                + " semi-infinite top\\)\\n.*"), err);
+        assertTrue(err.endsWith("model: Heated and read inside the stack, at the top of layer 'film': heat flows"
+                + " down through 2 layers to a semi-infinite bottom and up through 1 layer above ('cover') to a"
+                + " semi-infinite top; the plane's temperature is shared by both sides and their admittances add.\n"),
+                err);
+    }
 }

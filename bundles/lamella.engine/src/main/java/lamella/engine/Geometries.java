@@ -1,6 +1,5 @@
 package lamella.engine;
 
-import lamella.api.BottomBoundary;
 import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.ModelEvaluationException;
@@ -29,7 +28,7 @@ public final class Geometries {
 
     /** Axisymmetric geometries use one radial conductivity per layer, so Λx must equal Λy everywhere. */
     public static void requireInPlaneIsotropy(Stack stack, String geometryPath, String type) throws InputException {
-        for (Layer l : stack.layers()) {
+        for (Layer l : stack.allLayers()) {
             if (!l.isInPlaneIsotropic()) {
                 throw InputException.at(geometryPath + ".type", "geometry '" + type + "' is axisymmetric, but layer '"
                         + l.name() + "' conducts differently along x (" + l.kInPlaneX() + " W/mK) and y ("
@@ -38,12 +37,13 @@ public final class Geometries {
         }
     }
 
-    /** With no heat sink below, a steady (zero-frequency) temperature rise grows without bound. */
+    /** With no heat sink on either side, a steady (zero-frequency) temperature rise grows without bound. */
     public static void requireSteadyStateExists(Stack stack, double omega, String type) {
-        if (omega == 0 && stack.bottom() == BottomBoundary.ADIABATIC) {
+        if (omega == 0 && !stack.hasHeatSink()) {
             throw new ModelEvaluationException("geometry '" + type + "': no steady state exists on a stack with an"
-                    + " adiabatic bottom (no heat can leave); use a modulation frequency above zero or a"
-                    + " semi-infinite or isothermal bottom");
+                    + " adiabatic bottom" + (stack.heatsBothWays() ? " and an adiabatic top" : "")
+                    + " (no heat can leave); use a modulation frequency above zero or a"
+                    + " semi-infinite or isothermal " + (stack.heatsBothWays() ? "bottom or top" : "bottom"));
         }
     }
 

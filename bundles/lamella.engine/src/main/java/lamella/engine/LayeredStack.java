@@ -1,6 +1,7 @@
 package lamella.engine;
 
 import java.util.Arrays;
+import java.util.List;
 import lamella.api.BottomBoundary;
 import lamella.api.Layer;
 import lamella.api.ModelEvaluationException;
@@ -19,6 +20,12 @@ import lamella.api.StackKernel;
  * overflow: the matrix form's cosh(qd) for 1 mm of a 400 W m⁻¹ K⁻¹ solid at 100 MHz is about exp(1800).
  * Time dependence is exp(+iωt), so a lagging temperature has a negative imaginary part.
  *
+ * <p>With layers above the heated plane (the top of {@code layers[0]}), the same reduction runs over them from the
+ * top condition down to the plane, 1/G of each above layer's boundary toward the plane added on the way. The plane's
+ * temperature is common to both sides and the heat divides between them, so their admittances add:
+ * 1/Z = 1/Z_below + 1/Z_above (the two-sided form of Schmidt, Cheaito &amp; Chiesa, Rev. Sci. Instrum. 80, 094901,
+ * 2009, written as impedances). With no layers above the result is the one-sided reduction, unchanged.
+ *
  * <p>Immutable; no allocation per evaluation.
  */
 public final class LayeredStack implements StackKernel {
@@ -29,37 +36,53 @@ public final class LayeredStack implements StackKernel {
     private static final double FEATURE_SEPARATION = 2.0;
 
     private final Stack stack;
-    private final int n;
-    private final double[] thickness;
-    private final double[] kz;
-    private final double[] xOverZ;
-    private final double[] yOverZ;
-    private final double[] cOverZ;
-    private final double[] resistanceBelow;
-    private final BottomBoundary bottom;
+    private final Side below;
+    /** The layers above the heated plane, or null when heat flows only downward. */
+    private final Side above;
+    /** 1/G between the heated plane and the first layer above it, m² K/W (0 for perfect contact). */
+    private final double resistanceAbove;
     /** Why a radial (axisymmetric) response cannot be given, or null when every layer is in-plane isotropic. */
     private final String notAxisymmetric;
 
+    /**
+     * One side of the heated plane, layers from it outward; {@code resistanceOutward[i]} is 1/G between layer i and
+     * layer i + 1 (0 for perfect contact), and {@code end} the condition beyond the outermost layer.
+     */
+    private record Side(int n, double[] thickness, double[] kz, double[] xOverZ, double[] yOverZ, double[] cOverZ,
+                        double[] resistanceOutward, BottomBoundary end) {
+
+        static Side of(List<Layer> layers, BottomBoundary end, boolean conductanceTowardPlane) {
+            int n = layers.size();
+            Side s = new Side(n, new double[n], new double[n], new double[n], new double[n], new double[n],
+                    new double[n], end);
+            for (int i = 0; i < n; i++) {
+                Layer l = layers.get(i);
+                s.thickness[i] = l.thickness();
+                s.kz[i] = l.kThrough();
+                s.xOverZ[i] = l.kInPlaneX() / l.kThrough();
+                s.yOverZ[i] = l.kInPlaneY() / l.kThrough();
+                s.cOverZ[i] = l.heatCapacity() / l.kThrough();
+                // below the plane a layer's G faces the next layer out; above it, the one toward the plane
+                Layer outer = conductanceTowardPlane ? (i + 1 < n ? layers.get(i + 1) : null) : l;
+                s.resistanceOutward[i] = outer == null || outer.hasPerfectContactBelow() ? 0.0
+                        : 1.0 / outer.conductanceBelow();
+            }
+            return s;
+        }
+    }
+
     public LayeredStack(Stack stack) {
         this.stack = stack;
-        this.n = stack.layers().size();
-        this.thickness = new double[n];
-        this.kz = new double[n];
-        this.xOverZ = new double[n];
-        this.yOverZ = new double[n];
-        this.cOverZ = new double[n];
-        this.resistanceBelow = new double[n];
-        this.bottom = stack.bottom();
-        for (int i = 0; i < n; i++) {
-            Layer l = stack.layers().get(i);
-            thickness[i] = l.thickness();
-            kz[i] = l.kThrough();
-            xOverZ[i] = l.kInPlaneX() / l.kThrough();
-            yOverZ[i] = l.kInPlaneY() / l.kThrough();
-            cOverZ[i] = l.heatCapacity() / l.kThrough();
-            resistanceBelow[i] = l.hasPerfectContactBelow() ? 0.0 : 1.0 / l.conductanceBelow();
+        this.below = Side.of(stack.layers(), stack.bottom(), false);
+        if (stack.heatsBothWays()) {
+            this.above = Side.of(stack.above(), stack.top(), true);
+            Layer first = stack.above().get(0);
+            this.resistanceAbove = first.hasPerfectContactBelow() ? 0.0 : 1.0 / first.conductanceBelow();
+        } else {
+            this.above = null;
+            this.resistanceAbove = 0.0;
         }
-        this.notAxisymmetric = stack.layers().stream().filter(l -> !l.isInPlaneIsotropic()).findFirst()
+        this.notAxisymmetric = stack.allLayers().stream().filter(l -> !l.isInPlaneIsotropic()).findFirst()
                 .map(l -> "a radial (axisymmetric) response was asked of a stack whose layer '" + l.name()
                         + "' conducts differently along x (" + l.kInPlaneX() + " W/mK) and y (" + l.kInPlaneY()
                         + " W/mK); an axisymmetric geometry refuses such a stack in bind"
@@ -83,16 +106,32 @@ public final class LayeredStack implements StackKernel {
         evaluate(k * k, 0.0, omega, out);
     }
 
+    /**
+     * The half-space of the top layer's material; with layers above the heated plane, in parallel with the
+     * half-space of the first of them behind its boundary resistance — the limit that both sides' responses reach
+     * once the deeper layers no longer show.
+     */
     @Override
     public void topHalfSpaceRadialResponse(double k, double omega, double[] out) {
         requireAxisymmetric();
-        double a = xOverZ[0] * k * k;
-        double b = omega * cOverZ[0];
+        halfSpace(below, 0, k * k, omega, out);
+        if (above == null) {
+            return;
+        }
+        double dr = out[0];
+        double di = out[1];
+        halfSpace(above, 0, k * k, omega, out);
+        parallel(dr, di, out[0] + resistanceAbove, out[1], out);
+    }
+
+    private static void halfSpace(Side s, int i, double k2, double omega, double[] out) {
+        double a = s.xOverZ[i] * k2;
+        double b = omega * s.cOverZ[i];
         double r = Math.sqrt(a * a + b * b);
         double qr = Math.sqrt(0.5 * (r + a));
         double qi = qr > 0 ? 0.5 * b / qr : 0.0;
-        double gr = kz[0] * qr;
-        double gi = kz[0] * qi;
+        double gr = s.kz[i] * qr;
+        double gi = s.kz[i] * qi;
         double m = gr * gr + gi * gi;
         out[0] = gr / m;
         out[1] = -gi / m;
@@ -105,10 +144,46 @@ public final class LayeredStack implements StackKernel {
     }
 
     private void evaluate(double sx2, double sy2, double omega, double[] out) {
-        int i = n - 1;
-        // bottom layer
-        double a = xOverZ[i] * sx2 + yOverZ[i] * sy2;
-        double b = omega * cOverZ[i];
+        reduce(below, sx2, sy2, omega, out);
+        if (above == null) {
+            return;
+        }
+        double dr = out[0];
+        double di = out[1];
+        reduce(above, sx2, sy2, omega, out);
+        parallel(dr, di, out[0] + resistanceAbove, out[1], out);
+    }
+
+    /**
+     * Two impedances seen from one plane: their admittances add, 1/Z = 1/Z₁ + 1/Z₂. An infinite impedance (an
+     * adiabatic side at zero wavenumber and frequency) takes no heat and leaves the other.
+     */
+    static void parallel(double ar, double ai, double br, double bi, double[] out) {
+        boolean aOpen = !Double.isFinite(ar) || !Double.isFinite(ai);
+        boolean bOpen = !Double.isFinite(br) || !Double.isFinite(bi);
+        if (aOpen || bOpen) {
+            out[0] = aOpen ? br : ar;
+            out[1] = aOpen ? bi : ai;
+            return;
+        }
+        // Z₁ Z₂ / (Z₁ + Z₂)
+        double pr = ar * br - ai * bi;
+        double pi = ar * bi + ai * br;
+        double sr = ar + br;
+        double si = ai + bi;
+        double m = sr * sr + si * si;
+        out[0] = (pr * sr + pi * si) / m;
+        out[1] = (pi * sr - pr * si) / m;
+    }
+
+    /** The impedance of one side at the heated plane, from its outermost layer inward. */
+    private static void reduce(Side s, double sx2, double sy2, double omega, double[] out) {
+        int i = s.n - 1;
+        double[] thickness = s.thickness;
+        double[] kz = s.kz;
+        // outermost layer
+        double a = s.xOverZ[i] * sx2 + s.yOverZ[i] * sy2;
+        double b = omega * s.cOverZ[i];
         double r = Math.sqrt(a * a + b * b);
         double qr = Math.sqrt(0.5 * (r + a));
         double qi = qr > 0 ? 0.5 * b / qr : 0.0;
@@ -116,7 +191,7 @@ public final class LayeredStack implements StackKernel {
         double gi = kz[i] * qi;
         double zr;
         double zi;
-        if (bottom == BottomBoundary.SEMI_INFINITE) {
+        if (s.end == BottomBoundary.SEMI_INFINITE) {
             double m = gr * gr + gi * gi;
             zr = gr / m;
             zi = -gi / m;
@@ -124,7 +199,7 @@ public final class LayeredStack implements StackKernel {
             tanh(qr * thickness[i], qi * thickness[i], out);
             double tr = out[0];
             double ti = out[1];
-            if (bottom == BottomBoundary.ISOTHERMAL) {
+            if (s.end == BottomBoundary.ISOTHERMAL) {
                 // Z = t / γ
                 double m = gr * gr + gi * gi;
                 zr = (tr * gr + ti * gi) / m;
@@ -138,10 +213,10 @@ public final class LayeredStack implements StackKernel {
                 zi = -pi / m;
             }
         }
-        for (i = n - 2; i >= 0; i--) {
-            zr += resistanceBelow[i];
-            a = xOverZ[i] * sx2 + yOverZ[i] * sy2;
-            b = omega * cOverZ[i];
+        for (i = s.n - 2; i >= 0; i--) {
+            zr += s.resistanceOutward[i];
+            a = s.xOverZ[i] * sx2 + s.yOverZ[i] * sy2;
+            b = omega * s.cOverZ[i];
             r = Math.sqrt(a * a + b * b);
             qr = Math.sqrt(0.5 * (r + a));
             qi = qr > 0 ? 0.5 * b / qr : 0.0;
@@ -189,20 +264,13 @@ public final class LayeredStack implements StackKernel {
 
     @Override
     public double[] featureWavenumbers(double omega) {
-        double[] w = new double[4 * n];
-        int c = 0;
-        for (int i = 0; i < n; i++) {
-            // where the in-plane term Λx k² meets ωC: the thermal penetration depth, in-plane
-            if (omega > 0) {
-                w[c++] = Math.sqrt(omega * cOverZ[i] / xOverZ[i]);
-            }
-            // where q d ≈ 1 from the in-plane term: the layer's thickness, scaled for anisotropy
-            if (Double.isFinite(thickness[i])) {
-                w[c++] = 1.0 / (thickness[i] * Math.sqrt(xOverZ[i]));
-            }
-            // where the interface resistance matches the spreading resistance of the layer below
-            if (resistanceBelow[i] > 0 && i + 1 < n) {
-                w[c++] = 1.0 / (resistanceBelow[i] * kz[i + 1] * Math.sqrt(xOverZ[i + 1]));
+        int total = below.n + (above == null ? 0 : above.n);
+        double[] w = new double[4 * total];
+        int c = features(below, omega, w, 0);
+        if (above != null) {
+            c = features(above, omega, w, c);
+            if (resistanceAbove > 0) {
+                w[c++] = 1.0 / (resistanceAbove * above.kz[0] * Math.sqrt(above.xOverZ[0]));
             }
         }
         double[] s = Arrays.copyOf(w, c);
@@ -215,5 +283,23 @@ public final class LayeredStack implements StackKernel {
             }
         }
         return Arrays.copyOf(s, kept);
+    }
+
+    private static int features(Side s, double omega, double[] w, int c) {
+        for (int i = 0; i < s.n; i++) {
+            // where the in-plane term Λx k² meets ωC: the thermal penetration depth, in-plane
+            if (omega > 0) {
+                w[c++] = Math.sqrt(omega * s.cOverZ[i] / s.xOverZ[i]);
+            }
+            // where q d ≈ 1 from the in-plane term: the layer's thickness, scaled for anisotropy
+            if (Double.isFinite(s.thickness[i])) {
+                w[c++] = 1.0 / (s.thickness[i] * Math.sqrt(s.xOverZ[i]));
+            }
+            // where the interface resistance matches the spreading resistance of the next layer out
+            if (s.resistanceOutward[i] > 0 && i + 1 < s.n) {
+                w[c++] = 1.0 / (s.resistanceOutward[i] * s.kz[i + 1] * Math.sqrt(s.xOverZ[i + 1]));
+            }
+        }
+        return c;
     }
 }

@@ -1,5 +1,6 @@
 package lamella.engine;
 
+import java.util.List;
 import lamella.api.BottomBoundary;
 import lamella.api.Layer;
 import lamella.api.Stack;
@@ -14,15 +15,25 @@ public final class TopLayer {
     }
 
     /**
-     * The wavenumber beyond which the stack's response equals that of a half-space of the top layer's material to
-     * double precision (their difference decays like exp(−2 k d₁ √(Λx/Λz))). Zero for a one-layer semi-infinite
-     * stack, which is that half-space.
+     * The wavenumber beyond which the stack's response equals its high-wavenumber limit
+     * ({@code StackKernel.topHalfSpaceRadialResponse}: the top layer's half-space, in parallel with the first
+     * layer above's when heat flows both ways) to double precision; their difference decays like
+     * exp(−2 k d √(Λx/Λz)) for the thickness d of the layer next to the heated plane on each side. Zero when each
+     * side is a single semi-infinite layer, which is that limit.
      */
     public static double halfSpaceWavenumber(Stack stack) {
-        Layer top = stack.layers().get(0);
-        if (stack.layers().size() == 1 && stack.bottom() == BottomBoundary.SEMI_INFINITE) {
+        double k = side(stack.layers(), stack.bottom());
+        if (stack.heatsBothWays()) {
+            k = Math.max(k, side(stack.above(), stack.top()));
+        }
+        return k;
+    }
+
+    private static double side(List<Layer> layers, BottomBoundary end) {
+        Layer first = layers.get(0);
+        if (layers.size() == 1 && end == BottomBoundary.SEMI_INFINITE) {
             return 0.0;
         }
-        return OPAQUE_HALF / (top.thickness() * Math.sqrt(top.kInPlaneX() / top.kThrough()));
+        return OPAQUE_HALF / (first.thickness() * Math.sqrt(first.kInPlaneX() / first.kThrough()));
     }
 }

@@ -28,31 +28,17 @@ final class InputTables {
     static void write(Html h, CaseDocument doc, FitOutcome o) {
         Set<String> free = o.parameters().stream().map(FittedParameter::ref).filter(r -> r.scope() == ParameterRef.Scope.LAYER)
                 .map(ParameterRef::toString).collect(Collectors.toSet());
-        h.element("h3", "Layers, from the heated surface down");
-        h.raw("<table class=\"inputs\"><thead>");
-        h.headRow(List.of("layer", "thickness (m)", "Λ through-plane (W/(m K))", "Λ in-plane x (W/(m K))",
-                "Λ in-plane y (W/(m K))", "C volumetric (J/(m³ K))", "G to the layer below (W/(m² K))"));
-        h.raw("</thead><tbody>\n");
-        List<Layer> layers = doc.stack().layers();
-        for (int i = 0; i < layers.size(); i++) {
-            Layer l = layers.get(i);
-            boolean last = i == layers.size() - 1;
-            h.raw("<tr><th scope=\"row\">").text(l.name()).raw("</th>");
-            cell(h, free, l, l.isSemiInfinite() ? "semi-infinite" : Numbers.plain(l.thickness()), "thickness_m");
-            boolean throughX = l.tie().x();
-            boolean throughY = l.tie().y();
-            cell(h, free, l, Numbers.plain(l.kThrough()), "k_through_w_mk", "k_w_mk");
-            cell(h, free, l, Numbers.plain(l.kInPlaneX()), "k_in_plane_x_w_mk", "k_in_plane_w_mk", "k_w_mk",
-                    throughX ? "k_through_w_mk" : "k_w_mk");
-            cell(h, free, l, Numbers.plain(l.kInPlaneY()), "k_in_plane_y_w_mk", "k_in_plane_w_mk", "k_w_mk",
-                    throughY ? "k_through_w_mk" : "k_w_mk");
-            cell(h, free, l, Numbers.plain(l.heatCapacity()), "heat_capacity_j_m3k");
-            String g = last ? "—" : l.hasPerfectContactBelow() ? "perfect contact" : Numbers.plain(l.conductanceBelow());
-            cell(h, free, l, g, "conductance_below_w_m2k");
-            h.raw("</tr>\n");
+        h.element("p", doc.stack().heatFlowInWords());
+        h.element("h3", doc.stack().heatsBothWays() ? "Layers, from the heated plane down"
+                : "Layers, from the heated surface down");
+        layerTable(h, free, doc.stack().layers(), "G to the layer below (W/(m² K))", true);
+        if (doc.stack().heatsBothWays()) {
+            h.element("h3", "Layers above the heated plane, from it up");
+            layerTable(h, free, doc.stack().above(), "G toward the heated plane (W/(m² K))", false);
         }
-        h.raw("</tbody></table>\n");
-        h.raw("<p class=\"note\">").text("Below the last layer: " + doc.stack().bottom().caseName() + ". ")
+        h.raw("<p class=\"note\">").text("Below the last layer: " + doc.stack().bottom().caseName() + ". "
+                        + (doc.stack().heatsBothWays() ? "Above the outermost layer above: "
+                        + doc.stack().top().caseName() + ". " : ""))
                 .raw("<span class=\"free-key\">Shaded</span>")
                 .text(" values are fitted; the case file's starting value is shown here, the result above.")
                 .raw("</p>\n");
@@ -66,6 +52,33 @@ final class InputTables {
         if (doc.root().get("fit") instanceof Block fit) {
             block(h, "Fit settings", fit);
         }
+    }
+
+    private static void layerTable(Html h, Set<String> free, List<Layer> layers, String conductanceHeading,
+                                   boolean lastHasNone) {
+        h.raw("<table class=\"inputs\"><thead>");
+        h.headRow(List.of("layer", "thickness (m)", "Λ through-plane (W/(m K))", "Λ in-plane x (W/(m K))",
+                "Λ in-plane y (W/(m K))", "C volumetric (J/(m³ K))", conductanceHeading));
+        h.raw("</thead><tbody>\n");
+        for (int i = 0; i < layers.size(); i++) {
+            Layer l = layers.get(i);
+            boolean last = i == layers.size() - 1;
+            h.raw("<tr><th scope=\"row\">").text(l.name()).raw("</th>");
+            cell(h, free, l, l.isSemiInfinite() ? "semi-infinite" : Numbers.plain(l.thickness()), "thickness_m");
+            boolean throughX = l.tie().x();
+            boolean throughY = l.tie().y();
+            cell(h, free, l, Numbers.plain(l.kThrough()), "k_through_w_mk", "k_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneX()), "k_in_plane_x_w_mk", "k_in_plane_w_mk", "k_w_mk",
+                    throughX ? "k_through_w_mk" : "k_w_mk");
+            cell(h, free, l, Numbers.plain(l.kInPlaneY()), "k_in_plane_y_w_mk", "k_in_plane_w_mk", "k_w_mk",
+                    throughY ? "k_through_w_mk" : "k_w_mk");
+            cell(h, free, l, Numbers.plain(l.heatCapacity()), "heat_capacity_j_m3k");
+            String g = last && lastHasNone ? "—" : l.hasPerfectContactBelow() ? "perfect contact"
+                    : Numbers.plain(l.conductanceBelow());
+            cell(h, free, l, g, "conductance_below_w_m2k");
+            h.raw("</tr>\n");
+        }
+        h.raw("</tbody></table>\n");
     }
 
     /** Every layer value a material library gave: which library and tier, which entry and version, which source. */

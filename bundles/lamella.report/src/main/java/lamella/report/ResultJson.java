@@ -50,13 +50,8 @@ final class ResultJson {
         }
     }
 
-    private static ObjectNode caseNode(CaseDocument doc) {
-        ObjectNode c = MAPPER.createObjectNode();
-        c.put("file", doc.file() == null ? null : doc.file().toString());
-        c.put("description", CaseText.description(doc));
-        ObjectNode stack = c.putObject("stack");
-        ArrayNode layers = stack.putArray("layers");
-        for (Layer l : doc.stack().layers()) {
+    private static void layers(ArrayNode layers, List<Layer> side) {
+        for (Layer l : side) {
             ObjectNode n = layers.addObject();
             n.put("name", l.name());
             n.put("semi_infinite", l.isSemiInfinite());
@@ -68,7 +63,20 @@ final class ResultJson {
             n.put("perfect_contact_below", l.hasPerfectContactBelow());
             number(n, "conductance_below_w_m2k", l.conductanceBelow());
         }
+    }
+
+    private static ObjectNode caseNode(CaseDocument doc) {
+        ObjectNode c = MAPPER.createObjectNode();
+        c.put("file", doc.file() == null ? null : doc.file().toString());
+        c.put("description", CaseText.description(doc));
+        ObjectNode stack = c.putObject("stack");
+        layers(stack.putArray("layers"), doc.stack().layers());
         stack.put("bottom", doc.stack().bottom().caseName());
+        if (doc.stack().heatsBothWays()) {
+            layers(stack.putArray("above"), doc.stack().above());
+            stack.put("top", doc.stack().top().caseName());
+        }
+        stack.put("model", doc.stack().heatFlowInWords());
         ArrayNode library = c.putArray("library_values");
         for (ValueOrigin v : doc.libraryValues()) {
             library.add(MAPPER.valueToTree(v.provenance()));

@@ -4,6 +4,7 @@ import lamella.api.BottomBoundary;
 import lamella.api.GeometryModel;
 import lamella.api.Layer;
 import lamella.api.ModelEvaluationException;
+import lamella.api.Stack;
 import lamella.api.StackKernel;
 import lamella.engine.Geometries;
 import lamella.engine.SpectralQuadrature;
@@ -21,6 +22,8 @@ final class LineModel implements GeometryModel {
     private static final int MIN_HALF_PERIODS = 100;
     /** K is at least this multiple of |a| = √(ωC/Λx), so the tail's expansion in a²/k² holds. */
     private static final double TAIL_OVER_THERMAL = 30.0;
+    /** The two-sided tail's integrand in t = K/k has no features inside (0, 1]. */
+    private static final double[] NO_BREAKS = new double[0];
 
     private final StackKernel stack;
     private final double b;
@@ -42,9 +45,12 @@ final class LineModel implements GeometryModel {
     @Override
     public void at(double frequencyHz, double[] out) {
         double omega = 2 * Math.PI * frequencyHz;
-        if (omega == 0 && stack.stack().bottom() != BottomBoundary.ISOTHERMAL) {
+        Stack st = stack.stack();
+        if (omega == 0 && st.bottom() != BottomBoundary.ISOTHERMAL
+                && !(st.heatsBothWays() && st.top() == BottomBoundary.ISOTHERMAL)) {
             throw new ModelEvaluationException("geometry 'line': a line heater has no steady temperature unless the"
-                    + " bottom of the stack is isothermal (heat flow in two dimensions); use a frequency above zero");
+                    + " bottom (or the top above the heated plane) of the stack is isothermal (heat flow in two"
+                    + " dimensions); use a frequency above zero");
         }
         double aMag = Math.sqrt(omega * c / kx);
         double k = Math.max(MIN_HALF_PERIODS * Math.PI / b, Math.max(kHalfSpace, TAIL_OVER_THERMAL * aMag));
@@ -62,14 +68,51 @@ final class LineModel implements GeometryModel {
             o[1] = z[1] * w;
         }, 0.0, kTail, stack.featureWavenumbers(omega), Math.PI / b,
                 SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE, 0.0, out);
-        double amplitude = 1.0 / Math.sqrt(kz * kx);
         double x2 = x * x;
         double x4 = x2 * x2;
-        double thermal = omega * c * b * b / kx;
-        double tailRe = amplitude * (1.0 / (4 * x2) - 3.0 / (8 * x4));
-        double tailIm = -amplitude * thermal / (16 * x4);
+        double tailRe;
+        double tailIm;
+        if (st.heatsBothWays()) {
+            double mainRe = out[0];
+            double mainIm = out[1];
+            twoSidedTail(omega, kTail, x4, q, z, out);
+            tailRe = out[0];
+            tailIm = out[1];
+            out[0] = mainRe;
+            out[1] = mainIm;
+        } else {
+            double amplitude = 1.0 / Math.sqrt(kz * kx);
+            double thermal = omega * c * b * b / kx;
+            tailRe = amplitude * (1.0 / (4 * x2) - 3.0 / (8 * x4));
+            tailIm = -amplitude * thermal / (16 * x4);
+        }
         out[0] = (out[0] + tailRe) / Math.PI;
         out[1] = (out[1] + tailIm) / Math.PI;
         Geometries.requireFinite(out, "line", frequencyHz);
+    }
+
+    /**
+     * ∫_K^∞ Z(k) sin²(kb)/(kb)² dk when heat flows both ways, where Z beyond K is the two half-spaces' parallel
+     * response with the boundary between them, which has no one-term asymptote. sin² = (1 − cos 2kb)/2: the mean
+     * part ∫_K^∞ Z/(2b²k²) dk is smooth and is integrated exactly with k = K/t over t in (0, 1]; the oscillating
+     * part is −(3/(8X⁴))·K·Z(K) at X = Kb a whole number of half-periods (by parts, as for the one-sided tail).
+     */
+    private void twoSidedTail(double omega, double kTail, double x4, SpectralQuadrature q, double[] z,
+                              double[] out) {
+        q.integrate((t, o) -> {
+            if (t == 0) {
+                o[0] = 0;
+                o[1] = 0;
+                return;
+            }
+            stack.response(kTail / t, 0.0, omega, z);
+            o[0] = z[0];
+            o[1] = z[1];
+        }, 0.0, 1.0, NO_BREAKS, 0.0, SpectralQuadrature.DEFAULT_RELATIVE_TOLERANCE, 0.0, out);
+        double meanRe = out[0] / (2 * b * b * kTail);
+        double meanIm = out[1] / (2 * b * b * kTail);
+        stack.response(kTail, 0.0, omega, z);
+        out[0] = meanRe - 3.0 / (8 * x4) * kTail * z[0];
+        out[1] = meanIm - 3.0 / (8 * x4) * kTail * z[1];
     }
 }

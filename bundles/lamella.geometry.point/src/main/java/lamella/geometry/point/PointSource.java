@@ -48,6 +48,12 @@ public final class PointSource implements HeatingGeometry {
     @Override
     public GeometryModel bind(Parameters p, StackKernel stack) throws InputException {
         Geometries.requireInPlaneIsotropy(stack.stack(), p.path(), type());
+        if (stack.stack().heatsBothWays()) {
+            // the closed form that carries this geometry's oscillating tail is the top layer's half-space alone
+            throw InputException.at(p.path() + ".type", "geometry 'point' takes the heat to flow only downward from"
+                    + " the surface; this stack has layers above the heated plane (stack.above): use 'gaussian'"
+                    + " (a small probe radius approaches a point) or leave stack.above out");
+        }
         return new PointModel(stack, p.number(DISTANCE));
     }
 }

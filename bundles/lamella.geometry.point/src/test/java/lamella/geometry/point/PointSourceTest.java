@@ -65,4 +65,15 @@ class PointSourceTest {
         assertEquals(expected, h[0], 1e-3 * expected);
         assertEquals(0.0, h[1], 0.0);
     }
+
+    /** The point source's closed-form tail is the top layer's half-space alone: layers above are refused, in words. */
+    @Test
+    void layersAboveTheHeatedPlaneAreRefusedAtTheGeometry() {
+        Layer glass = Layer.isotropic("glass", Double.POSITIVE_INFINITY, 1.3, 1.6e6);
+        Layer cover = Layer.isotropic("cover", Double.POSITIVE_INFINITY, 0.6, 4.2e6);
+        Stack s = new Stack(List.of(glass), BottomBoundary.SEMI_INFINITE, List.of(cover), BottomBoundary.SEMI_INFINITE);
+        InputException e = org.junit.jupiter.api.Assertions.assertThrows(InputException.class, () -> point(s, 1e-5));
+        assertEquals("geometry.type", e.path());
+        org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("stack.above"), e.getMessage());
+    }
 }
