@@ -21,9 +21,13 @@ public final class CaseModel {
      * {@code k_through_w_mk} is Λz with the in-plane directions that follow it (see {@link Layer.Tie});
      * {@code k_in_plane_w_mk} sets both in-plane directions.
      */
+    /** The optical depths, keys of {@code layers[0]} only (see {@link OpticalDepths}). */
+    public static final String ABSORPTION_DEPTH = "absorption_depth_m";
+    public static final String SENSING_DEPTH = "sensing_depth_m";
+
     public static final List<String> LAYER_KEYS = List.of("thickness_m", "k_w_mk", "k_through_w_mk",
             "k_in_plane_w_mk", "k_in_plane_x_w_mk", "k_in_plane_y_w_mk", "heat_capacity_j_m3k",
-            "conductance_below_w_m2k");
+            "conductance_below_w_m2k", ABSORPTION_DEPTH, SENSING_DEPTH);
 
     /** The layer keys that name a conductivity. */
     public static final List<String> CONDUCTIVITY_KEYS = List.of("k_w_mk", "k_through_w_mk", "k_in_plane_w_mk",
@@ -61,6 +65,9 @@ public final class CaseModel {
         switch (p.scope()) {
             case LAYER: {
                 Layer l = layer(p, at);
+                if (isOptical(p.key())) {
+                    return optical(l, p, at);
+                }
                 double v = switch (p.key()) {
                     case "thickness_m" -> l.thickness();
                     case "k_w_mk" -> isotropic(l, at);
@@ -95,6 +102,18 @@ public final class CaseModel {
         switch (p.scope()) {
             case LAYER: {
                 Layer l = layer(p, p.toString());
+                if (isOptical(p.key())) {
+                    optical(l, p, p.toString());
+                    try {
+                        OpticalDepths o = stack.optics();
+                        OpticalDepths changed = p.key().equals(ABSORPTION_DEPTH) ? o.withAbsorption(value)
+                                : o.withSensing(value);
+                        return new CaseModel(stack.withOptics(changed), geometry, measurement);
+                    } catch (IllegalArgumentException e) {
+                        throw InputException.at(p.toString(), "layer '" + l.name() + "' cannot take " + p.key()
+                                + " = " + value + ": " + e.getMessage());
+                    }
+                }
                 Layer changed;
                 try {
                     changed = switch (p.key()) {
@@ -124,13 +143,16 @@ public final class CaseModel {
     /**
      * The same values, with every in-plane direction that one of the given paths names stated apart from Λz: where
      * a fit or a study names the in-plane conductivity itself, {@code k_through_w_mk} moves Λz alone, whatever the
-     * order of the paths.
+     * order of the paths. Likewise a named {@code sensing_depth_m} no longer follows the absorption depth.
      */
     public CaseModel apartFor(Collection<ParameterRef> named) {
         Stack changed = stack;
         for (ParameterRef p : named) {
             if (p.scope() != ParameterRef.Scope.LAYER) {
                 continue;
+            }
+            if (p.key().equals(SENSING_DEPTH)) {
+                changed = changed.withOptics(changed.optics().withSensing(changed.optics().sensing()));
             }
             boolean x = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_x_w_mk");
             boolean y = p.key().equals("k_in_plane_w_mk") || p.key().equals("k_in_plane_y_w_mk");
@@ -202,6 +224,13 @@ public final class CaseModel {
                 out.add(ParameterRef.layer(l.name(), "conductance_below_w_m2k"));
             }
         }
+        String first = stack.layers().get(0).name();
+        if (stack.optics().absorption() > 0) {
+            out.add(ParameterRef.layer(first, ABSORPTION_DEPTH));
+        }
+        if (!stack.optics().sensingFollows() && stack.optics().sensing() > 0) {
+            out.add(ParameterRef.layer(first, SENSING_DEPTH));
+        }
         for (Map.Entry<String, Object> e : geometry.values().entrySet()) {
             if (e.getValue() instanceof Double d && d != 0) {
                 out.add(ParameterRef.geometry(e.getKey()));
@@ -221,6 +250,25 @@ public final class CaseModel {
     private Layer layer(ParameterRef p, String at) throws InputException {
         return stack.layer(p.layer()).orElseThrow(() -> InputException.at(at, "there is no layer '" + p.layer()
                 + "'; layers: " + String.join(", ", stack.allLayers().stream().map(Layer::name).toList())));
+    }
+
+    private static boolean isOptical(String key) {
+        return key.equals(ABSORPTION_DEPTH) || key.equals(SENSING_DEPTH);
+    }
+
+    /** An optical depth: a value of the layer under the heated plane only, and only where it reaches below it. */
+    private double optical(Layer l, ParameterRef p, String at) throws InputException {
+        if (!l.name().equals(stack.layers().get(0).name())) {
+            throw InputException.at(at, "only the layer under the heated plane ('" + stack.layers().get(0).name()
+                    + "', layers[0]) absorbs and is read in depth; layer '" + l.name() + "' has no " + p.key());
+        }
+        double v = p.key().equals(ABSORPTION_DEPTH) ? stack.optics().absorption() : stack.optics().sensing();
+        if (v == 0) {
+            throw InputException.at(at, "layer '" + l.name() + "' is " + (p.key().equals(ABSORPTION_DEPTH)
+                    ? "heated" : "read") + " at the plane itself (no " + p.key() + "); give it a value in the stack"
+                    + " first");
+        }
+        return v;
     }
 
     private Block block(ParameterRef p) {

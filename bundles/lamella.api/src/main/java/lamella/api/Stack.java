@@ -13,9 +13,11 @@ import java.util.Set;
  * through it ({@code top} is then {@link BottomBoundary#ADIABATIC}); with layers above, heat flows both ways.
  * An above layer's {@link Layer#conductanceBelow()} is its boundary conductance toward the heated plane.
  * Only the outermost layer of each side may be semi-infinite, and it must be when that side ends
- * {@link BottomBoundary#SEMI_INFINITE}. Layer names are unique over both sides.
+ * {@link BottomBoundary#SEMI_INFINITE}. Layer names are unique over both sides. {@code optics} says how deep the
+ * heating and the reading reach into {@code layers[0]} ({@link OpticalDepths#SURFACE}: at the plane itself).
  */
-public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top) {
+public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top,
+                    OpticalDepths optics) {
 
     public Stack {
         layers = List.copyOf(layers);
@@ -23,8 +25,8 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
         if (layers.isEmpty()) {
             throw new IllegalArgumentException("a stack needs at least one layer");
         }
-        if (bottom == null || top == null) {
-            throw new IllegalArgumentException("a stack needs its bottom and top conditions");
+        if (bottom == null || top == null || optics == null) {
+            throw new IllegalArgumentException("a stack needs its bottom and top conditions and its optical depths");
         }
         if (above.isEmpty() && top != BottomBoundary.ADIABATIC) {
             throw new IllegalArgumentException("a stack with no layers above the heated plane has an adiabatic top,"
@@ -40,9 +42,19 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
         }
     }
 
+    /** A stack heated and read at the plane itself, with or without layers above it. */
+    public Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top) {
+        this(layers, bottom, above, top, OpticalDepths.SURFACE);
+    }
+
     /** A stack heated at its surface: no layers above, no heat leaving through the top. */
     public Stack(List<Layer> layers, BottomBoundary bottom) {
         this(layers, bottom, List.of(), BottomBoundary.ADIABATIC);
+    }
+
+    /** The same stack, heated and read to other depths in {@code layers[0]}. */
+    public Stack withOptics(OpticalDepths o) {
+        return new Stack(layers, bottom, above, top, o);
     }
 
     private static void check(List<Layer> side, BottomBoundary end, String outermost, Set<String> names) {
@@ -96,7 +108,7 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
                 }
             }
         }
-        return new Stack(below, bottom, up, top);
+        return new Stack(below, bottom, up, top, optics);
     }
 
     /** True when every layer conducts equally along x and y (axisymmetric geometries need this). */
@@ -113,12 +125,30 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
         String down = "down through " + count(layers.size()) + " to " + article(bottom) + " bottom";
         if (!heatsBothWays()) {
             return "Heated and read at the surface (the top of layer " + first + "); heat flows " + down
-                    + "; none leaves through the surface.";
+                    + "; none leaves through the surface." + depths();
         }
         String names = String.join(", ", above.stream().map(l -> "'" + l.name() + "'").toList());
         return "Heated and read inside the stack, at the top of layer " + first + ": heat flows " + down
                 + " and up through " + count(above.size()) + " above (" + names + ") to " + article(top)
-                + " top; the plane's temperature is shared by both sides and their admittances add.";
+                + " top; the plane's temperature is shared by both sides and their admittances add." + depths();
+    }
+
+    private String depths() {
+        if (!optics.inDepth()) {
+            return "";
+        }
+        String layer = "layer '" + layers.get(0).name() + "'";
+        String heat = optics.absorption() > 0 ? " The pump's heat is spread as exp(−z/δ) through " + layer
+                + ", δ = " + metres(optics.absorption()) + " (absorption depth)" : " The pump heats at the plane";
+        String read = optics.sensingFollows() ? ", and the probe reads the temperature weighted the same way."
+                : optics.sensing() > 0 ? "; the probe reads the temperature weighted by exp(−z/δₛ), δₛ = "
+                + metres(optics.sensing()) + " (sensing depth)." : "; the probe reads the temperature at the plane.";
+        return heat + read;
+    }
+
+    private static String metres(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toString()
+                + " m";
     }
 
     private static String count(int n) {

@@ -14,11 +14,13 @@ import lamella.api.Block;
 import lamella.api.BottomBoundary;
 import lamella.api.CaseDocument;
 import lamella.api.CaseFormat;
+import lamella.api.CaseModel;
 import lamella.api.ExplainedCase;
 import lamella.api.ExplainingCaseFormat;
 import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.Names;
+import lamella.api.OpticalDepths;
 import lamella.api.PhysicalRange;
 import lamella.api.Stack;
 import lamella.api.ValueOrigin;
@@ -56,8 +58,11 @@ public final class CaseFileReader implements ExplainingCaseFormat {
     static final String K_IN_PLANE_Y = "k_in_plane_y_w_mk";
     static final String HEAT_CAPACITY = "heat_capacity_j_m3k";
     static final String CONDUCTANCE = "conductance_below_w_m2k";
+    static final String ABSORPTION = CaseModel.ABSORPTION_DEPTH;
+    static final String SENSING = CaseModel.SENSING_DEPTH;
     static final Set<String> LAYER_KEYS = Set.of(NAME, THICKNESS, K_THROUGH, K_IN_PLANE, K_IN_PLANE_X, K_IN_PLANE_Y,
-            HEAT_CAPACITY, CONDUCTANCE, LayerReading.MATERIAL, LayerReading.TEMPERATURE, LayerReading.C_AXIS);
+            HEAT_CAPACITY, CONDUCTANCE, LayerReading.MATERIAL, LayerReading.TEMPERATURE, LayerReading.C_AXIS,
+            ABSORPTION, SENSING);
 
     /** The live libraries; the reader also works without any, as long as no layer names a material. */
     private final List<MaterialLibrary> libraries = new CopyOnWriteArrayList<>();
@@ -122,13 +127,14 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         Map<String, String> seen = new HashMap<>();
         List<Layer> layers = side(s, "layers", list, bottom, false, temperature, temperaturePath, catalog, lines,
                 origins, seen);
+        OpticalDepths optics = optics((Block) list.get(0), layers.get(0), lines, origins);
         if (!s.has("above")) {
             if (s.has("top")) {
                 throw InputException.at(s.pathOf("top"), "a top condition needs layers above the heated plane;"
                         + " add stack.above (layers from the top of layers[0] upward), or leave top out (with no"
                         + " layers above, no heat leaves through the surface)");
             }
-            return new Stack(layers, bottom);
+            return new Stack(layers, bottom).withOptics(optics);
         }
         if (!(s.get("above") instanceof List<?> up) || up.isEmpty()) {
             throw InputException.at(s.pathOf("above"), "expected a non-empty list of layers from the heated plane"
@@ -138,7 +144,43 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         BottomBoundary top = boundary(s, "top", BottomBoundary.SEMI_INFINITE);
         List<Layer> above = side(s, "above", up, top, true, temperature, temperaturePath, catalog, lines, origins,
                 seen);
-        return new Stack(layers, bottom, above, top);
+        return new Stack(layers, bottom, above, top, optics);
+    }
+
+    /**
+     * How deep {@code layers[0]} is heated and read: {@code absorption_depth_m} (default 0, at the plane) and
+     * {@code sensing_depth_m} (default: the absorption depth, one quantity with it).
+     */
+    private static OpticalDepths optics(Block first, Layer layer, Map<String, Integer> lines,
+                                        List<ValueOrigin> origins) throws InputException {
+        double absorption = 0;
+        if (first.has(ABSORPTION)) {
+            absorption = positive(first, ABSORPTION, "the depth over which the layer absorbs the pump, in m");
+            origins.add(new ValueOrigin(first.pathOf(ABSORPTION), layer.name(), ABSORPTION, absorption,
+                    ValueOrigin.Kind.EXPLICIT, lines.getOrDefault(first.pathOf(ABSORPTION), -1), "",
+                    Optional.empty()));
+        }
+        if (!first.has(SENSING)) {
+            if (absorption > 0) {
+                origins.add(new ValueOrigin(first.pathOf(SENSING), layer.name(), SENSING, absorption,
+                        ValueOrigin.Kind.DEFAULT, -1, "equal to " + ABSORPTION, Optional.empty()));
+            }
+            return OpticalDepths.absorbing(absorption);
+        }
+        double sensing = positive(first, SENSING, "the depth over which the probe reads the temperature, in m");
+        origins.add(new ValueOrigin(first.pathOf(SENSING), layer.name(), SENSING, sensing, ValueOrigin.Kind.EXPLICIT,
+                lines.getOrDefault(first.pathOf(SENSING), -1), "", Optional.empty()));
+        return new OpticalDepths(absorption, sensing, false);
+    }
+
+    /** Only the layer under the heated plane is heated and read in depth. */
+    private static void onlyFirstIsOptical(Block l, String at) throws InputException {
+        for (String key : List.of(ABSORPTION, SENSING)) {
+            if (l.has(key)) {
+                throw InputException.at(l.pathOf(key), "only layers[0], the layer under the heated plane, is heated"
+                        + " and read over a depth; leave " + key + " out of " + at);
+            }
+        }
     }
 
     /** {@code stack.bottom} or {@code stack.top}: one of the boundary names, or the default when not written. */
@@ -165,6 +207,9 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             String at = s.pathOf(key) + "[" + i + "]";
             if (!(list.get(i) instanceof Block l)) {
                 throw InputException.at(at, "expected a layer object, got " + Block.describe(list.get(i)));
+            }
+            if (above || i > 0) {
+                onlyFirstIsOptical(l, at);
             }
             boolean last = i == list.size() - 1;
             Layer layer = LayerReading.read(l, last, end, above, temperature, temperaturePath, catalog, lines,

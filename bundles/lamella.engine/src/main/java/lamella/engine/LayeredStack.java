@@ -26,6 +26,10 @@ import lamella.api.StackKernel;
  * 1/Z = 1/Z_below + 1/Z_above (the two-sided form of Schmidt, Cheaito &amp; Chiesa, Rev. Sci. Instrum. 80, 094901,
  * 2009, written as impedances). With no layers above the result is the one-sided reduction, unchanged.
  *
+ * <p>When the pump heats and the probe reads over a depth of the first layer ({@link lamella.api.OpticalDepths}),
+ * both sides are reduced to that layer's faces and {@link DepthWeighting} integrates the layer's Green's function
+ * over the two depth profiles.
+ *
  * <p>Immutable; no allocation per evaluation.
  */
 public final class LayeredStack implements StackKernel {
@@ -41,6 +45,8 @@ public final class LayeredStack implements StackKernel {
     private final Side above;
     /** 1/G between the heated plane and the first layer above it, m² K/W (0 for perfect contact). */
     private final double resistanceAbove;
+    /** Heating and reading over a depth of the first layer, or null when both are at the plane. */
+    private final DepthWeighting depth;
     /** Why a radial (axisymmetric) response cannot be given, or null when every layer is in-plane isotropic. */
     private final String notAxisymmetric;
 
@@ -82,6 +88,7 @@ public final class LayeredStack implements StackKernel {
             this.above = null;
             this.resistanceAbove = 0.0;
         }
+        this.depth = stack.optics().inDepth() ? new DepthWeighting(stack.optics(), below.thickness[0]) : null;
         this.notAxisymmetric = stack.allLayers().stream().filter(l -> !l.isInPlaneIsotropic()).findFirst()
                 .map(l -> "a radial (axisymmetric) response was asked of a stack whose layer '" + l.name()
                         + "' conducts differently along x (" + l.kInPlaneX() + " W/mK) and y (" + l.kInPlaneY()
@@ -114,6 +121,11 @@ public final class LayeredStack implements StackKernel {
     @Override
     public void topHalfSpaceRadialResponse(double k, double omega, double[] out) {
         requireAxisymmetric();
+        if (depth != null) {
+            throw new ModelEvaluationException("a stack heated or read over a depth of its first layer has no"
+                    + " half-space limit in closed form; a geometry refuses such a stack in bind or integrates"
+                    + " the response itself");
+        }
         halfSpace(below, 0, k * k, omega, out);
         if (above == null) {
             return;
@@ -144,14 +156,69 @@ public final class LayeredStack implements StackKernel {
     }
 
     private void evaluate(double sx2, double sy2, double omega, double[] out) {
-        reduce(below, sx2, sy2, omega, out);
+        if (depth != null) {
+            evaluateInDepth(sx2, sy2, omega, out);
+            return;
+        }
+        reduce(below, 0, sx2, sy2, omega, out);
         if (above == null) {
             return;
         }
         double dr = out[0];
         double di = out[1];
-        reduce(above, sx2, sy2, omega, out);
+        reduce(above, 0, sx2, sy2, omega, out);
         parallel(dr, di, out[0] + resistanceAbove, out[1], out);
+    }
+
+    /**
+     * The first layer heated and read over depths: the layers below it and those above the plane enter through
+     * the reflection factors of its two faces (see {@link DepthWeighting}).
+     */
+    private void evaluateInDepth(double sx2, double sy2, double omega, double[] out) {
+        double a = below.xOverZ[0] * sx2 + below.yOverZ[0] * sy2;
+        double b = omega * below.cOverZ[0];
+        double r = Math.sqrt(a * a + b * b);
+        double qr = Math.sqrt(0.5 * (r + a));
+        double qi = qr > 0 ? 0.5 * b / qr : 0.0;
+        double gr = below.kz[0] * qr;
+        double gi = below.kz[0] * qi;
+        double rbr;
+        double rbi;
+        if (below.n > 1) {
+            reduce(below, 1, sx2, sy2, omega, out);
+            reflection(gr, gi, out[0] + below.resistanceOutward[0], out[1], out);
+            rbr = out[0];
+            rbi = out[1];
+        } else {
+            // one layer: its own bottom condition (unused when it is semi-infinite)
+            rbr = below.end == BottomBoundary.ISOTHERMAL ? -1.0 : below.end == BottomBoundary.ADIABATIC ? 1.0 : 0.0;
+            rbi = 0.0;
+        }
+        double rar = 1.0;
+        double rai = 0.0;
+        if (above != null) {
+            reduce(above, 0, sx2, sy2, omega, out);
+            reflection(gr, gi, out[0] + resistanceAbove, out[1], out);
+            rar = out[0];
+            rai = out[1];
+        }
+        depth.response(qr, qi, gr, gi, rar, rai, rbr, rbi, out);
+    }
+
+    /** ρ = (γZ − 1)/(γZ + 1) of a face that sees impedance Z; 1 (adiabatic) where Z is infinite. */
+    private static void reflection(double gr, double gi, double zr, double zi, double[] out) {
+        if (!Double.isFinite(zr) || !Double.isFinite(zi)) {
+            out[0] = 1.0;
+            out[1] = 0.0;
+            return;
+        }
+        double ur = gr * zr - gi * zi;
+        double ui = gr * zi + gi * zr;
+        double nr = ur - 1;
+        double dr = ur + 1;
+        double m = dr * dr + ui * ui;
+        out[0] = (nr * dr + ui * ui) / m;
+        out[1] = (ui * dr - nr * ui) / m;
     }
 
     /**
@@ -176,8 +243,8 @@ public final class LayeredStack implements StackKernel {
         out[1] = (pi * sr - pr * si) / m;
     }
 
-    /** The impedance of one side at the heated plane, from its outermost layer inward. */
-    private static void reduce(Side s, double sx2, double sy2, double omega, double[] out) {
+    /** The impedance of one side at the top face of its layer {@code first}, from its outermost layer inward. */
+    private static void reduce(Side s, int first, double sx2, double sy2, double omega, double[] out) {
         int i = s.n - 1;
         double[] thickness = s.thickness;
         double[] kz = s.kz;
@@ -213,7 +280,7 @@ public final class LayeredStack implements StackKernel {
                 zi = -pi / m;
             }
         }
-        for (i = s.n - 2; i >= 0; i--) {
+        for (i = s.n - 2; i >= first; i--) {
             zr += s.resistanceOutward[i];
             a = s.xOverZ[i] * sx2 + s.yOverZ[i] * sy2;
             b = omega * s.cOverZ[i];
@@ -271,6 +338,13 @@ public final class LayeredStack implements StackKernel {
             c = features(above, omega, w, c);
             if (resistanceAbove > 0) {
                 w[c++] = 1.0 / (resistanceAbove * above.kz[0] * Math.sqrt(above.xOverZ[0]));
+            }
+        }
+        if (depth != null) {
+            double[] optical = depth.wavenumbers();
+            w = Arrays.copyOf(w, c + optical.length);
+            for (double o : optical) {
+                w[c++] = o;
             }
         }
         double[] s = Arrays.copyOf(w, c);

@@ -76,6 +76,11 @@ final class ResultJson {
             layers(stack.putArray("above"), doc.stack().above());
             stack.put("top", doc.stack().top().caseName());
         }
+        if (doc.stack().optics().inDepth()) {
+            number(stack, "absorption_depth_m", doc.stack().optics().absorption());
+            number(stack, "sensing_depth_m", doc.stack().optics().sensing());
+            stack.put("sensing_follows_absorption", doc.stack().optics().sensingFollows());
+        }
         stack.put("model", doc.stack().heatFlowInWords());
         ArrayNode library = c.putArray("library_values");
         for (ValueOrigin v : doc.libraryValues()) {

@@ -53,4 +53,20 @@ class TwoSidedReportTest {
                 + " layers to a semi-infinite bottom; none leaves through the surface.",
                 SyntheticFit.caseDocument().stack().heatFlowInWords());
     }
+
+    @Test
+    void theReportRecordsTheOpticalDepths() throws Exception {
+        CaseDocument one = SyntheticFit.caseDocument();
+        Stack stack = one.stack().withOptics(new lamella.api.OpticalDepths(1.5e-8, 4e-8, false));
+        CaseDocument doc = new CaseDocument(one.file(), stack, one.geometry(), one.measurement(), one.root(),
+                one.lines());
+        Path page = new FitReportWriter("0.1.0.test", Clock.fixed(Instant.parse("2026-01-02T03:04:05Z"),
+                ZoneOffset.UTC)).write(doc, SyntheticFit.outcome(), SyntheticFit.sensitivities(), dir.resolve("r"));
+        String html = Files.readString(page, StandardCharsets.UTF_8);
+        assertTrue(html.contains("δₛ = 4E-8 m (sensing depth)"), "the page says how deep the probe reads");
+        JsonNode json = new ObjectMapper().readTree(dir.resolve("r").resolve("result.json").toFile());
+        assertEquals(1.5e-8, json.at("/case/stack/absorption_depth_m").asDouble());
+        assertEquals(4e-8, json.at("/case/stack/sensing_depth_m").asDouble());
+        assertEquals(false, json.at("/case/stack/sensing_follows_absorption").asBoolean());
+    }
 }

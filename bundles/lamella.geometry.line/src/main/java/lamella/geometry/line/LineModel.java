@@ -14,7 +14,9 @@ import lamella.engine.TopLayer;
  * The bound line-heater response; see {@link LineHeater}. The integral runs numerically up to a wavenumber K with
  * K·b a whole number of half-periods of sin²(kb), beyond which the stack acts as the top layer's half-space,
  * Z∞ = 1/√(Λz(Λx k² + iωC)); that tail is summed from its asymptotic expansion
- * ∫_X^∞ sin²u/u³ du = 1/(4X²) − 3/(8X⁴) + O(X⁻⁶) at X = Kb = mπ, with the first correction in iωC/(Λx k²).
+ * ∫_X^∞ sin²u/u³ du = 1/(4X²) − 3/(8X⁴) + O(X⁻⁶) at X = Kb = mπ, with the first correction in iωC/(Λx k²). With
+ * layers above the heated plane or heating over a depth the tail is integrated from the kernel instead
+ * ({@link #numericTail}).
  */
 final class LineModel implements GeometryModel {
 
@@ -72,10 +74,10 @@ final class LineModel implements GeometryModel {
         double x4 = x2 * x2;
         double tailRe;
         double tailIm;
-        if (st.heatsBothWays()) {
+        if (st.heatsBothWays() || st.optics().inDepth()) {
             double mainRe = out[0];
             double mainIm = out[1];
-            twoSidedTail(omega, kTail, x4, q, z, out);
+            numericTail(omega, kTail, x4, q, z, out);
             tailRe = out[0];
             tailIm = out[1];
             out[0] = mainRe;
@@ -92,12 +94,13 @@ final class LineModel implements GeometryModel {
     }
 
     /**
-     * ∫_K^∞ Z(k) sin²(kb)/(kb)² dk when heat flows both ways, where Z beyond K is the two half-spaces' parallel
-     * response with the boundary between them, which has no one-term asymptote. sin² = (1 − cos 2kb)/2: the mean
+     * ∫_K^∞ Z(k) sin²(kb)/(kb)² dk when heat flows both ways or the first layer is heated over a depth, where Z beyond
+     * K (the two half-spaces' parallel response with the boundary between them; a response that falls as 1/k² for
+     * heat spread over depth) has no one-term asymptote. sin² = (1 − cos 2kb)/2: the mean
      * part ∫_K^∞ Z/(2b²k²) dk is smooth and is integrated exactly with k = K/t over t in (0, 1]; the oscillating
      * part is −(3/(8X⁴))·K·Z(K) at X = Kb a whole number of half-periods (by parts, as for the one-sided tail).
      */
-    private void twoSidedTail(double omega, double kTail, double x4, SpectralQuadrature q, double[] z,
+    private void numericTail(double omega, double kTail, double x4, SpectralQuadrature q, double[] z,
                               double[] out) {
         q.integrate((t, o) -> {
             if (t == 0) {

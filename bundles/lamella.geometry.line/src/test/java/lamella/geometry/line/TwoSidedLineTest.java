@@ -12,7 +12,7 @@ import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussInteg
 import org.apache.commons.math3.complex.Complex;
 import org.junit.jupiter.api.Test;
 
-/** A line heater inside the stack: a heater on glass covered by a liquid or by a second solid. */
+/** A line heater inside the stack (on glass, covered by a liquid or a second solid), and heated over a depth. */
 class TwoSidedLineTest {
 
     static final Layer FILM = Layer.isotropicInPlane("film", 2e-7, 0.9, 0.9, 1.8e6).withConductanceBelow(4e7);
@@ -95,6 +95,23 @@ class TwoSidedLineTest {
             }
             assertEquals(ref[0], h[0], 1e-6 * Math.hypot(ref[0], ref[1]), "in-phase at " + f + " Hz");
             assertEquals(ref[1], h[1], 1e-6 * Math.hypot(ref[0], ref[1]), "out-of-phase at " + f + " Hz");
+        }
+    }
+
+    /**
+     * Issue 13's check, common practice, no source: heating spread over a vanishing depth (1e-15 m) of the top layer
+     * is heating at the surface. The line integrates such a stack's tail numerically; here against the one-sided
+     * closed-form tail.
+     */
+    @Test
+    void vanishingAbsorptionDepthIsSurfaceHeating() throws InputException {
+        Stack one = new Stack(List.of(FILM, GLASS), BottomBoundary.SEMI_INFINITE);
+        Stack deep = one.withOptics(lamella.api.OpticalDepths.absorbing(1e-15));
+        for (double f : new double[] {10, 1e3, 1e5}) {
+            double[] a = LineHeaterTest.at(LineHeaterTest.line(one, 5e-6), f);
+            double[] b = LineHeaterTest.at(LineHeaterTest.line(deep, 5e-6), f);
+            assertEquals(a[0], b[0], 1e-7 * Math.hypot(a[0], a[1]), "in-phase at " + f + " Hz");
+            assertEquals(a[1], b[1], 1e-7 * Math.hypot(a[0], a[1]), "out-of-phase at " + f + " Hz");
         }
     }
 }

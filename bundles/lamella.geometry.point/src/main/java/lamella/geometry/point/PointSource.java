@@ -54,6 +54,11 @@ public final class PointSource implements HeatingGeometry {
                     + " the surface; this stack has layers above the heated plane (stack.above): use 'gaussian'"
                     + " (a small probe radius approaches a point) or leave stack.above out");
         }
+        if (stack.stack().optics().inDepth()) {
+            throw InputException.at(p.path() + ".type", "geometry 'point' heats and reads at the surface; this stack's"
+                    + " first layer is heated or read over a depth (absorption_depth_m, sensing_depth_m): use"
+                    + " 'gaussian' or leave the depths out");
+        }
         return new PointModel(stack, p.number(DISTANCE));
     }
 }
