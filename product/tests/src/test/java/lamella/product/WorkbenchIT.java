@@ -76,6 +76,7 @@ class WorkbenchIT {
         assertTrue(registered.contains("messages") && registered.contains("project"), registered.toString());
         List<String> shown = lines(ask("placements")).stream().map(l -> l.split(" ")[0]).sorted().toList();
         assertEquals(registered.stream().sorted().toList(), shown);
+        List<String> cut = new ArrayList<>();
         for (String size : List.of("1920 1080", "1280 800")) {
             ask("size " + size);
             for (String id : registered) {
@@ -83,9 +84,11 @@ class WorkbenchIT {
                 Path png = SHOTS.resolve("panel-" + id + "-" + size.replace(' ', 'x') + ".png");
                 ask("screenshot " + png);
                 assertTrue(Files.size(png) > 10_000, png + " is too small to show a window");
+                lines(ask("cut " + id)).forEach(l -> cut.add(size.replace(' ', 'x') + " " + id + ": " + l));
             }
         }
         ask("size 1600 1000");
+        assertEquals(List.of(), cut, "every heading, label, button and chooser is readable in full");
     }
 
     @Test

@@ -55,6 +55,7 @@ public final class ChartCanvas extends Composite {
     private final Label readout;
     private final ChartChangeListener changes = e -> stale();
     private final ChartRenderingInfo info = new ChartRenderingInfo();
+    private final AxisLabelFit labels = new AxisLabelFit();
     private JFreeChart chart;
     private Image image;
     private boolean stale = true;
@@ -74,8 +75,11 @@ public final class ChartCanvas extends Composite {
         setLayout(layout);
         canvas = new Canvas(this, SWT.NO_BACKGROUND | SWT.DOUBLE_BUFFERED);
         canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        readout = new Label(this, SWT.NONE);
-        readout.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        // Wrapped, so that a narrow plot shows the whole hint and reading on more lines instead of cutting them.
+        readout = new Label(this, SWT.WRAP);
+        GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        rd.widthHint = SMALLEST;
+        readout.setLayoutData(rd);
         readout.setText(HINT);
         canvas.addPaintListener(e -> paint(e.gc));
         canvas.addListener(SWT.Resize, e -> stale());
@@ -97,7 +101,7 @@ public final class ChartCanvas extends Composite {
         });
         canvas.addMouseMoveListener(this::moved);
         canvas.addMouseWheelListener(this::wheel);
-        canvas.addListener(SWT.MouseExit, e -> readout.setText(HINT));
+        canvas.addListener(SWT.MouseExit, e -> read(HINT));
         addDisposeListener(e -> {
             if (chart != null) {
                 chart.removeChangeListener(changes);
@@ -127,6 +131,7 @@ public final class ChartCanvas extends Composite {
             chart.removeChangeListener(changes);
         }
         chart = next;
+        labels.clear();
         if (chart != null) {
             chart.addChangeListener(changes);
         }
@@ -188,7 +193,7 @@ public final class ChartCanvas extends Composite {
             }
             placeLegend(width, height);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            chart.draw(g, new Rectangle2D.Double(0, 0, width, height), info);
+            labels.draw(chart, g, new Rectangle2D.Double(0, 0, width, height), info);
         } finally {
             g.dispose();
         }
@@ -322,7 +327,7 @@ public final class ChartCanvas extends Composite {
 
     private void showReading(int px, int py) {
         if (chart == null || !(chart.getPlot() instanceof XYPlot plot) || !dataArea().contains(px, py)) {
-            readout.setText(HINT);
+            read(HINT);
             return;
         }
         Rectangle2D area = dataArea();
@@ -331,9 +336,21 @@ public final class ChartCanvas extends Composite {
         String xl = plot.getDomainAxis().getLabel();
         String yl = plot.getRangeAxis().getLabel();
         String more = reading == null ? null : reading.apply(x, y);
-        readout.setText(AxisReading.reading(nameOf(xl), x, AxisReading.unitOf(xl)) + "     "
+        read(AxisReading.reading(nameOf(xl), x, AxisReading.unitOf(xl)) + "     "
                 + AxisReading.reading(nameOf(yl), y, AxisReading.unitOf(yl))
                 + (more == null || more.isEmpty() ? "" : "     " + more));
+    }
+
+    /** Shows a reading, laying the plot out again only when it needs another number of lines. */
+    private void read(String text) {
+        if (text.equals(readout.getText())) {
+            return;
+        }
+        readout.setText(text);
+        Point size = readout.getSize();
+        if (size.x > 0 && readout.computeSize(size.x, SWT.DEFAULT).y != size.y) {
+            layout(true);
+        }
     }
 
     private static String nameOf(String label) {
@@ -374,6 +391,8 @@ public final class ChartCanvas extends Composite {
         Rectangle r = canvas.getClientArea();
         int w = Math.max(r.width, MIN_EXPORT_WIDTH);
         int h = Math.max(r.height, MIN_EXPORT_HEIGHT);
+        // An export is at least as large as the fonts were made for; the canvas fits its labels again when painted.
+        labels.restore();
         try {
             if (kind.equals("png")) {
                 ChartFiles.png(chart, w, h, target);

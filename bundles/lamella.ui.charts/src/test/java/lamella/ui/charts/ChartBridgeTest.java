@@ -39,6 +39,32 @@ class ChartBridgeTest {
         assertEquals("t = 2.000×10⁻⁹ s", AxisReading.reading("t", 2e-9, "s"));
     }
 
+    /** The Sensitivity panel's y label in a plot as short as a third of a 1280 × 800 window gives it. */
+    @Test
+    void anAxisLabelLongerThanItsSideIsDrawnSmallerAndWholeAgainWithRoom() {
+        XYSeries s = new XYSeries("model");
+        s.add(1e-10, 0.3);
+        s.add(4e-9, -0.6);
+        String label = "S = ∂ln(signal)/∂ln p (dimensionless)";
+        XYPlot plot = new XYPlot(new XYSeriesCollection(s), PlotLook.xAxis("pump-probe delay (s)", true,
+                new double[] {1e-10, 4e-9}), PlotLook.linear(label), new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = PlotLook.chart(null, plot, true);
+        java.awt.Font own = plot.getRangeAxis().getLabelFont();
+        AxisLabelFit fit = new AxisLabelFit();
+        org.jfree.chart.ChartRenderingInfo info = new org.jfree.chart.ChartRenderingInfo();
+        java.awt.Graphics2D g = new BufferedImage(440, 300, BufferedImage.TYPE_INT_RGB).createGraphics();
+        fit.draw(chart, g, new java.awt.geom.Rectangle2D.Double(0, 0, 440, 300), info);
+        double side = info.getPlotInfo().getDataArea().getHeight();
+        java.awt.Font drawn = plot.getRangeAxis().getLabelFont();
+        assertTrue(g.getFontMetrics(own).stringWidth(label) > side, "the label at its own size is cut at " + side);
+        assertTrue(drawn.getSize() < own.getSize() && drawn.getSize() >= AxisLabelFit.LEAST_SIZE, drawn.toString());
+        assertTrue(g.getFontMetrics(drawn).stringWidth(label) <= side, "the smaller label fits " + side + " px");
+        assertEquals(own, plot.getDomainAxis().getLabelFont(), "a label that fits keeps its size");
+        fit.draw(chart, g, new java.awt.geom.Rectangle2D.Double(0, 0, 900, 700), info);
+        assertEquals(own, plot.getRangeAxis().getLabelFont(), "with room the label is drawn at its own size again");
+        g.dispose();
+    }
+
     @Test
     void exportsAreCompleteFilesAndLeaveNoPartsBehind(@TempDir Path dir) throws Exception {
         XYSeries s = new XYSeries("model");

@@ -51,6 +51,8 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 final class MapView implements PanelView {
 
     static final String WHERE = "the Map panel";
+    /** The width the data source's words and the image chooser start from; they wrap or widen as room allows. */
+    private static final int SOURCE_WIDTH = 120;
 
     /** Data and fit rules of the project's map block, read in the background. */
     record Loaded(CaseDocument doc, MapData data, CurveFit fit, String dataName) {
@@ -85,11 +87,14 @@ final class MapView implements PanelView {
         this.fitting = new LatestOnly<>(workbench, "Fitting the map");
         this.positionFit = new LatestOnly<>(workbench, "A map position's fit");
         root = new Composite(parent, SWT.NONE);
-        root.setLayout(new GridLayout(6, false));
+        // The source and its buttons on one row, the image chooser on the next: both fit a third of 1280 px.
+        root.setLayout(new GridLayout(4, false));
         Label l = new Label(root, SWT.NONE);
         l.setText("Map data:");
-        source = new Label(root, SWT.NONE);
-        source.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        source = new Label(root, SWT.WRAP);
+        GridData sourceData = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        sourceData.widthHint = SOURCE_WIDTH;
+        source.setLayoutData(sourceData);
         fitButton = new Button(root, SWT.PUSH);
         fitButton.setText("Fit map");
         fitButton.setToolTipText("Fit every position of the case's map block in the background (Stop, in the status"
@@ -102,13 +107,13 @@ final class MapView implements PanelView {
         Label s = new Label(root, SWT.NONE);
         s.setText("Show:");
         show = new Combo(root, SWT.READ_ONLY | SWT.DROP_DOWN);
-        GridData sd = new GridData(SWT.FILL, SWT.CENTER, false, false);
-        sd.widthHint = 260;
+        GridData sd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        sd.widthHint = SOURCE_WIDTH;
         show.setLayoutData(sd);
         show.addListener(SWT.Selection, e -> drawMap());
-        status = new StatusLine(root, 6);
+        status = new StatusLine(root, 4);
         SashForm sash = new SashForm(root, SWT.HORIZONTAL);
-        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 6, 1);
+        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1);
         gd.widthHint = 640;
         gd.heightHint = 380;
         sash.setLayoutData(gd);

@@ -56,16 +56,18 @@ final class SignalView implements PanelView {
         this.project = workbench.project();
         this.work = new LatestOnly<>(workbench, "Model signal");
         root = new Composite(parent, SWT.NONE);
-        root.setLayout(new GridLayout(4, false));
+        // The curve and its signal on rows of their own: a dataset's name and the signal both stay in view when
+        // the plots have a third of the window.
+        root.setLayout(new GridLayout(2, false));
         picker = new CurvePicker(root, this::recompute);
         Label sl = new Label(root, SWT.NONE);
         sl.setText("Signal:");
         signalCombo = new Combo(root, SWT.READ_ONLY);
-        signalCombo.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, false, false));
+        signalCombo.setLayoutData(new GridData(SWT.BEGINNING, SWT.CENTER, false, false));
         signalCombo.addListener(SWT.Selection, e -> recompute());
-        status = new StatusLine(root, 4);
+        status = new StatusLine(root, 2);
         canvas = new ChartCanvas(root, SWT.NONE);
-        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1);
+        GridData gd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
         gd.widthHint = 640;
         gd.heightHint = 420;
         canvas.setLayoutData(gd);
@@ -252,6 +254,9 @@ final class SignalView implements PanelView {
         List<String> items = List.of(signalCombo.getItems());
         if (!items.equals(c.signals())) {
             signalCombo.setItems(c.signals().toArray(String[]::new));
+            signalCombo.select(c.signals().indexOf(c.signal()));
+            // As wide as its longest signal's name: it was laid out empty, before the first model came.
+            root.layout(new Control[] {signalCombo});
         }
         signalCombo.select(c.signals().indexOf(c.signal()));
         String key = picker.selected() + "|" + c.signal() + "|" + c.xColumn();

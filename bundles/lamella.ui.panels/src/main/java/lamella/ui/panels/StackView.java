@@ -144,11 +144,13 @@ final class StackView implements PanelView {
         return status.text();
     }
 
+    private static final int COLUMN_PADDING = 2;
+
     private TableColumn column(String heading, int width) {
         TableColumn c = new TableColumn(table, SWT.LEFT);
         c.setText(heading);
         c.pack();
-        c.setWidth(Math.max(c.getWidth() + 8, width));
+        c.setWidth(Math.max(c.getWidth() + COLUMN_PADDING, width));
         return c;
     }
 
@@ -185,11 +187,14 @@ final class StackView implements PanelView {
         refresh();
     }
 
-    /** Every column as wide as its heading or its widest cell, so that nothing in the table is cut. */
+    /**
+     * Every column as wide as its heading or its widest cell, so that nothing in the table is cut; GTK's own cell
+     * padding is enough, a few pixels more keep the seven columns within the left column at 1280 px.
+     */
     private void fitColumns() {
         for (TableColumn c : table.getColumns()) {
             c.pack();
-            c.setWidth(c.getWidth() + 8);
+            c.setWidth(c.getWidth() + COLUMN_PADDING);
         }
     }
 

@@ -60,6 +60,8 @@ final class PlanView implements PanelView {
     static final int SIDE_BY_SIDE_WIDTH = 900;
     /** The plan block's editor needs this width (pixels) to show its fields; narrower, it scrolls. */
     private static final int MIN_SETUP_WIDTH = 380;
+    /** The design variable's key chooser starts this wide (pixels) and widens with the group. */
+    private static final int KEY_WIDTH = 140;
 
     private final Workbench workbench;
     private final Project project;
@@ -133,7 +135,10 @@ final class PlanView implements PanelView {
         editor.setLayout(new GridLayout(3, false));
         label(editor, "key");
         key = new Combo(editor, SWT.READ_ONLY | SWT.DROP_DOWN);
-        key.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
+        // Its longest key would set the editor's least width; it takes what the group has instead.
+        GridData kd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        kd.widthHint = KEY_WIDTH;
+        key.setLayoutData(kd);
         key.addListener(SWT.Selection, e -> showUnits());
         label(editor, "from");
         from = new Text(editor, SWT.BORDER);
@@ -154,7 +159,7 @@ final class PlanView implements PanelView {
         together.setToolTipText("how many values are measured together and fitted jointly: 1, or a list such as 1, 2");
         together.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
         Composite edits = new Composite(v, SWT.NONE);
-        edits.setLayout(new GridLayout(3, true));
+        edits.setLayout(new GridLayout(3, false));
         button(edits, "Add", () -> writeVariable(false));
         button(edits, "Replace selected", () -> writeVariable(true));
         button(edits, "Remove selected", this::removeVariable);

@@ -31,14 +31,18 @@ final class Arrangement {
     }
 
     /**
-     * The inputs and their tables on the left, the plots beside them, messages and the project's files in a strip
-     * along the bottom. The left column asks for {@link #INPUT_COLUMN_PX} (as much as a stack table with all its
+     * The inputs and their tables on the left (the Stack in front), the plots beside them (the Signal in front),
+     * messages and the project's files in a strip along the bottom. The left column asks for {@link #INPUT_COLUMN_PX} (as much as a stack table with all its
      * columns needs), up to {@link Split#LEADING_SHARE_LIMIT} of the window, until the user moves its sash.
      */
     static Arrangement standard() {
         Split top = new Split(true);
-        top.add(new TabArea(Area.LEFT.name()), 55);
-        top.add(new TabArea(Area.CENTER.name()), 45);
+        TabArea inputs = new TabArea(Area.LEFT.name());
+        inputs.opening = "stack";
+        TabArea plots = new TabArea(Area.CENTER.name());
+        plots.opening = "signal";
+        top.add(inputs, 55);
+        top.add(plots, 45);
         top.leadingPixels = INPUT_COLUMN_PX;
         Split bottom = new Split(true);
         bottom.add(new TabArea(Area.BOTTOM.name()), 62);
@@ -72,7 +76,7 @@ final class Arrangement {
                 .or(() -> areas.stream().filter(a -> a.role != null).findFirst())
                 .orElse(areas.get(0));
         target.panels.add(panelId);
-        if (target.front == null) {
+        if (target.front == null || panelId.equals(target.opening)) {
             target.front = panelId;
         }
     }

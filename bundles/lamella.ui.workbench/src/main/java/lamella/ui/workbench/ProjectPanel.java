@@ -41,6 +41,9 @@ public final class ProjectPanel implements WorkbenchPanel {
         return Area.RIGHT;
     }
 
+    private static final int COLUMN_PADDING = 8;
+    private static final int WIDEST_COLUMN = 420;
+
     @Override
     public PanelView open(Composite parent, Workbench workbench) {
         Table table = new Table(parent, SWT.FULL_SELECTION | SWT.SINGLE | SWT.V_SCROLL | SWT.H_SCROLL);
@@ -48,11 +51,8 @@ public final class ProjectPanel implements WorkbenchPanel {
         table.setSize(400, 160);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
-        for (String[] c : List.of(new String[] {"Item", "150"}, new String[] {"File", "230"},
-                new String[] {"State", "80"}, new String[] {"Own settings", "300"})) {
-            TableColumn col = new TableColumn(table, SWT.LEFT);
-            col.setText(c[0]);
-            col.setWidth(Integer.parseInt(c[1]));
+        for (String heading : List.of("Item", "File", "State", "Own settings")) {
+            new TableColumn(table, SWT.LEFT).setText(heading);
         }
         Project project = workbench.project();
         Project.Listener refresh = change -> fill(table, project);
@@ -92,6 +92,11 @@ public final class ProjectPanel implements WorkbenchPanel {
         row(table, "Last fit", p.lastFit().isEmpty() ? "none" : p.lastFitCurrent()
                 ? (p.fittedValuesInUse() ? "its values are in the case" : "belongs to the case")
                 : "out of date (edited since)", p.lastFit().isEmpty() ? "" : p.dirty() ? "not saved yet" : "saved");
+        // Every column as wide as its words (a long folder's path up to a limit); the table scrolls sideways.
+        for (TableColumn c : table.getColumns()) {
+            c.pack();
+            c.setWidth(Math.min(c.getWidth() + COLUMN_PADDING, WIDEST_COLUMN));
+        }
     }
 
     /** Data inside the project's folder by its relative path, which is how the case file names it. */

@@ -13,6 +13,11 @@ final class TabArea extends Part {
     final List<String> panels = new ArrayList<>();
     String front;
     String role;
+    /**
+     * The panel the standard arrangement puts in front once it arrives, whichever panel's bundle started first
+     * (the Stack among the inputs, the Signal among the plots); not saved, so the user's own choice stays.
+     */
+    String opening;
 
     TabArea(String role) {
         this.role = role;

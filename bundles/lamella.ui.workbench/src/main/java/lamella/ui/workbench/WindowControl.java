@@ -38,7 +38,8 @@ import org.eclipse.swt.widgets.Text;
  * it opens can be answered), {@code dialog}, {@code dialog-press LABEL}, {@code table HEADING},
  * {@code table-select HEADING | ROW}, {@code cell-click HEADING | ROW | COLUMN} (a click into a table's cell, as
  * the mouse gives it), {@code editor-choose TEXT} (the item of an open cell chooser that starts with TEXT),
- * {@code search PANEL_ID | TEXT} (typed into the panel's search field), {@code texts PANEL_ID} (its labels), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * {@code search PANEL_ID | TEXT} (typed into the panel's search field), {@code texts PANEL_ID} (its labels),
+ * {@code cut PANEL_ID} (what it shows cut short where it is now, see {@link CutTexts}), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
  * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
@@ -151,6 +152,8 @@ final class WindowControl implements Function<String, String> {
                 return editorChoose(rest(w, 1));
             case "texts":
                 return texts(w[1]);
+            case "cut":
+                return cut(w[1]);
             case "fields":
                 return fields(rest(w, 1));
             case "close":
@@ -359,6 +362,12 @@ final class WindowControl implements Function<String, String> {
         }
         return WidgetFinder.visible(root).stream().filter(x -> x instanceof Label).map(x -> ((Label) x).getText())
                 .filter(t -> !t.isEmpty()).collect(Collectors.joining("\n"));
+    }
+
+    private String cut(String panelId) {
+        Control c = window.shelf().control(panelId)
+                .orElseThrow(() -> new IllegalArgumentException("no panel '" + panelId + "'"));
+        return c instanceof org.eclipse.swt.widgets.Composite root ? String.join("\n", CutTexts.in(root)) : "";
     }
 
     /** Each labelled field of a group as "label text = value". */

@@ -9,6 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import lamella.ui.api.Area;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -32,6 +33,19 @@ class ArrangementTest {
         Arrangement a = withPanels();
         assertEquals("LEFT", a.areaOf("stack").orElseThrow().role);
         assertEquals("BOTTOM", a.areaOf("messages").orElseThrow().role);
+    }
+
+    @Test
+    void theStackAndTheSignalAreInFrontWhicheverPanelArrivesFirst() {
+        Arrangement a = Arrangement.standard();
+        for (String id : List.of("map", "datasets", "signal", "plan", "stack", "fit")) {
+            a.place(id, List.of("map", "signal", "plan").contains(id) ? Area.CENTER : Area.LEFT);
+        }
+        assertEquals("stack", a.areaOf("datasets").orElseThrow().front);
+        assertEquals("signal", a.areaOf("map").orElseThrow().front);
+        a.areaOf("map").orElseThrow().front = "map";
+        a.place("signal", Area.CENTER);
+        assertEquals("map", a.areaOf("map").orElseThrow().front, "a panel already placed keeps the user's choice");
     }
 
     @Test
