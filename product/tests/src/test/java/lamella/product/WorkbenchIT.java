@@ -137,12 +137,23 @@ class WorkbenchIT {
     @Test
     void helpHoldsTheUsersLoopAndTheKeysAndAboutNamesTheVersion() {
         String guide = ask("help User guide");
-        for (String step : List.of("1. Stack", "2. Set-up", "3. Import", "4. Sensitivity", "5. Fit", "6. Report",
-                "Laser and heater safety")) {
+        for (String step : List.of("1. Stack", "Materials panel", "2. Set-up", "3. Import", "4. Datasets",
+                "5. Sensitivity", "6. Fit", "7. Plan", "Map panel", "8. Report", "Laser and heater safety")) {
             assertTrue(guide.contains(step), step + " in: " + guide);
         }
         String keys = ask("help Keyboard shortcuts");
         assertTrue(keys.contains("Ctrl+Z") && keys.contains("Ctrl+Shift+Z, Ctrl+Y"), keys);
+        // the menus show their keys beside their words, where a user learns them
+        List<String> file = lines(ask("menu File"));
+        for (String item : List.of("New from case…\tCtrl+N", "Open…\tCtrl+O", "Save\tCtrl+S",
+                "Save as…\tCtrl+Shift+S", "Import data…\tCtrl+I", "Quit\tCtrl+Q")) {
+            assertTrue(file.contains(item), item + " in " + file);
+        }
+        List<String> edit = lines(ask("menu Edit"));
+        assertTrue(edit.get(0).startsWith("Undo") && edit.get(0).endsWith("\tCtrl+Z"), edit.toString());
+        assertTrue(edit.get(1).startsWith("Redo") && edit.get(1).endsWith("\tCtrl+Shift+Z"), edit.toString());
+        assertTrue(lines(ask("menu Help")).contains("User guide…\tF1"), ask("menu Help"));
+        assertTrue(lines(ask("menu View")).stream().anyMatch(i -> i.endsWith("\tCtrl+M")), ask("menu View"));
         String about = ask("help About Lamella");
         String version = bundle("lamella.ui.workbench").getVersion().toString();
         assertTrue(about.contains("Lamella " + version), version + " in: " + about);

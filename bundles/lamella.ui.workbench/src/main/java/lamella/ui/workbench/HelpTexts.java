@@ -13,7 +13,9 @@ final class HelpTexts {
             "1. Stack — describe the sample from the heated surface down: Add layer, then click a cell to type its"
                     + " value (85, or 85 nm, or 0.085 µm; click a column heading for another unit). Choose a library"
                     + " material where one fits; the layer's own values win over the library's. Give each value its"
-                    + " role in a fit: fixed, free, or uncertain by a σ in % (a transducer's thickness ±3 %, say).",
+                    + " role in a fit: fixed, free, or uncertain by a σ in % (a transducer's thickness ±3 %, say)."
+                    + " The Materials panel searches every live library (shipped, your facility's, your own) by name"
+                    + " or alias and shows each value with its range, σ and source.",
             "",
             "2. Set-up — choose the technique (tdtr, fdtr, sstr, 3omega) and the heating geometry, and type their"
                     + " settings in the units beside them: modulation 9.8 MHz, repetition 76 MHz, radii in µm."
@@ -24,20 +26,31 @@ final class HelpTexts {
             "3. Import — drop instrument files on the window, or File ▸ Import data…; a preview shows the columns"
                     + " read and the settings the file states (modulation, repetition, radii, powers), which the new"
                     + " dataset keeps as its own; Add dataset makes it a dataset of the fit, and saving copies its"
-                    + " data beside the case. The Signal panel draws the data and the model together and redraws as values change.",
+                    + " data beside the case. The Signal panel draws the data and the model together and redraws as"
+                    + " values change.",
             "",
-            "4. Sensitivity — before fitting (or before measuring), see how strongly the signal depends on each"
+            "4. Datasets — every dataset of the fit, numbered from 0 as the case file numbers them, with its file,"
+                    + " technique, signal and points. For the chosen one: its own technique and geometry settings"
+                    + " (or the case's), the fitted x range (fit from, fit to), ranges left out (0 ps to 80 ps) and"
+                    + " where σ comes from; its data are drawn with σ bars, the points left out in grey.",
+            "",
+            "5. Sensitivity — before fitting (or before measuring), see how strongly the signal depends on each"
                     + " input over the x range: an input whose sensitivity is small cannot be fitted, and an"
                     + " uncertain input with a large one will dominate the error budget.",
             "",
-            "5. Fit — Start fit fits the free inputs to every dataset at once; the values come with their 1σ"
+            "6. Fit — Start fit fits the free inputs to every dataset at once; the values come with their 1σ"
                     + " (noise and every uncertain input), the correlations, the residuals, and the uncertainty"
                     + " budget with each source's share. Structure in the residuals means the model misses"
                     + " something. The Signal panel draws each dataset's best fit over its data; Use fitted values"
                     + " takes the fitted values into the stack (Ctrl+Z takes them back). After an edit the results"
                     + " are marked out of date; saving keeps the last fit with the project.",
             "",
-            "6. Report — Write report… puts an HTML page with plots, tables, the budget and every input into a"
+            "7. Plan — before the next measurement: tick the free inputs whose σ matters and give the design"
+                    + " variables (modulation, spot size, a layer's thickness, a delay's end) a range; Plan ranks the"
+                    + " plans by the σ they predict, and Use this plan writes the chosen one into the case. The Map"
+                    + " panel fits a case's map block position by position and shows each input as an image.",
+            "",
+            "8. Report — Write report… puts an HTML page with plots, tables, the budget and every input into a"
                     + " folder to keep with the sample's record.",
             "",
             "Save (Ctrl+S) keeps the project; Save as… copies its data files beside the case file, so the folder"

@@ -79,11 +79,14 @@ final class WidgetFinder {
         return Optional.empty();
     }
 
-    /** A label without mnemonic marks. */
+    /** A label without mnemonic marks and without the key a menu item shows after a tab. */
     static String plain(String label) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < label.length(); i++) {
             char c = label.charAt(i);
+            if (c == '\t') {
+                break;
+            }
             if (c == '&' && i + 1 < label.length() && label.charAt(i + 1) == '&') {
                 sb.append('&');
                 i++;

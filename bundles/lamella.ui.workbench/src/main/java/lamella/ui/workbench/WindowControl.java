@@ -39,7 +39,7 @@ import org.eclipse.swt.widgets.Text;
  * {@code table-select HEADING | ROW}, {@code cell-click HEADING | ROW | COLUMN} (a click into a table's cell, as
  * the mouse gives it), {@code editor-choose TEXT} (the item of an open cell chooser that starts with TEXT),
  * {@code search PANEL_ID | TEXT} (typed into the panel's search field), {@code texts PANEL_ID} (its labels),
- * {@code cut PANEL_ID} (what it shows cut short where it is now, see {@link CutTexts}), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * {@code menu TITLE} (its items as shown, a key after a tab), {@code cut PANEL_ID} (what it shows cut short where it is now, see {@link CutTexts}), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
  * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
@@ -152,6 +152,8 @@ final class WindowControl implements Function<String, String> {
                 return editorChoose(rest(w, 1));
             case "texts":
                 return texts(w[1]);
+            case "menu":
+                return String.join("\n", window.menus().labels(rest(w, 1)));
             case "cut":
                 return cut(w[1]);
             case "fields":

@@ -40,8 +40,8 @@ final class WindowMenus {
         fillView();
         help = cascade(bar, "&Help");
         item(help, "&User guide…", SWT.F1, () -> HelpWindow.open(shell, HelpTexts.GUIDE_TITLE,
-                "Working with the workbench: stack, set-up, import, sensitivity, fit, report", HelpTexts.GUIDE, 640,
-                460));
+                "Working with the workbench: stack, set-up, import, datasets, sensitivity, fit, plan, report",
+                HelpTexts.GUIDE, 680, 520));
         item(help, "&Keyboard shortcuts…", 0, () -> HelpWindow.open(shell, HelpTexts.KEYS_TITLE,
                 HelpTexts.KEYS_TITLE, HelpTexts.KEYS, 560, 320));
         new MenuItem(help, SWT.SEPARATOR);
@@ -56,9 +56,9 @@ final class WindowMenus {
             return;
         }
         Project p = window.project();
-        undo.setText(label("&Undo", p.undoName()));
+        undo.setText(label("&Undo", p.undoName()) + shortcut(undo.getAccelerator()));
         undo.setEnabled(p.undoName().isPresent());
-        redo.setText(label("&Redo", p.redoName()));
+        redo.setText(label("&Redo", p.redoName()) + shortcut(redo.getAccelerator()));
         redo.setEnabled(p.redoName().isPresent());
     }
 
@@ -117,7 +117,7 @@ final class WindowMenus {
         fillView();
         return java.util.Arrays.stream(view.getItems()).filter(i -> (i.getStyle() & SWT.SEPARATOR) == 0)
                 .map(i -> ((i.getStyle() & SWT.CHECK) != 0 ? (i.getSelection() ? "[x] " : "[ ] ") : "")
-                        + i.getText().replace("&", "")).toList();
+                        + WidgetFinder.plain(i.getText())).toList();
     }
 
     /** Chooses a Help menu item as a user would. */
@@ -233,11 +233,53 @@ final class WindowMenus {
 
     private static void item(Menu menu, String text, int accelerator, Runnable action) {
         MenuItem i = new MenuItem(menu, SWT.PUSH);
-        i.setText(text);
+        i.setText(text + shortcut(accelerator));
         if (accelerator != 0) {
             i.setAccelerator(accelerator);
         }
         i.addListener(SWT.Selection, e -> action.run());
+    }
+
+    /**
+     * The key beside a menu item's words, as GTK shows it after a tab ("\tCtrl+Shift+S"); empty for none. The menu
+     * is where a user learns the keys.
+     */
+    static String shortcut(int accelerator) {
+        if (accelerator == 0) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder("\t");
+        if ((accelerator & SWT.MOD1) != 0) {
+            sb.append("Ctrl+");
+        }
+        if ((accelerator & SWT.SHIFT) != 0) {
+            sb.append("Shift+");
+        }
+        if ((accelerator & SWT.ALT) != 0) {
+            sb.append("Alt+");
+        }
+        int key = accelerator & SWT.KEY_MASK;
+        if (key >= SWT.F1 && key <= SWT.F12) {
+            sb.append('F').append(key - SWT.F1 + 1);
+        } else {
+            sb.append(Character.toUpperCase((char) key));
+        }
+        return sb.toString();
+    }
+
+    /** The items of a menu of the bar as shown, the key after a tab: "Save\tCtrl+S". */
+    List<String> labels(String menuTitle) {
+        for (MenuItem top : shell.getMenuBar().getItems()) {
+            if (WidgetFinder.plain(top.getText()).equals(menuTitle) && top.getMenu() != null) {
+                if (top.getMenu() == view) {
+                    fillView();
+                }
+                return java.util.Arrays.stream(top.getMenu().getItems())
+                        .filter(i -> (i.getStyle() & SWT.SEPARATOR) == 0).map(i -> i.getText().replace("&", ""))
+                        .toList();
+            }
+        }
+        throw new IllegalArgumentException("no menu '" + menuTitle + "'");
     }
 
     private static void clear(Menu menu) {
