@@ -259,9 +259,9 @@ public final class LayeredStack implements StackKernel {
         double zr;
         double zi;
         if (s.end == BottomBoundary.SEMI_INFINITE) {
-            double m = gr * gr + gi * gi;
-            zr = gr / m;
-            zi = -gi / m;
+            double inverse = 1 / (gr * gr + gi * gi);
+            zr = gr * inverse;
+            zi = -gi * inverse;
         } else {
             tanh(qr * thickness[i], qi * thickness[i], out);
             double tr = out[0];
@@ -289,22 +289,31 @@ public final class LayeredStack implements StackKernel {
             qi = qr > 0 ? 0.5 * b / qr : 0.0;
             gr = kz[i] * qr;
             gi = kz[i] * qi;
-            tanh(qr * thickness[i], qi * thickness[i], out);
-            double tr = out[0];
-            double ti = out[1];
             // u = γ Z_below
             double ur = gr * zr - gi * zi;
             double ui = gr * zi + gi * zr;
-            // numerator u + t, denominator γ (1 + u t)
-            double nr = ur + tr;
-            double ni = ui + ti;
-            double wr = 1.0 + ur * tr - ui * ti;
-            double wi = ur * ti + ui * tr;
+            // with t = (1 − e)/(1 + e), e = exp(−2qd): Z = (1 + u − e(1 − u)) / (γ (1 + u + e(1 − u))), one division
+            double er = 0.0;
+            double ei = 0.0;
+            double x2 = 2 * qr * thickness[i];
+            if (x2 <= OPAQUE) {
+                double mag = Math.exp(-x2);
+                double y2 = 2 * qi * thickness[i];
+                double cr = mag * Math.cos(y2);
+                double ci = -mag * Math.sin(y2);
+                // e (1 − u)
+                er = cr * (1 - ur) + ci * ui;
+                ei = ci * (1 - ur) - cr * ui;
+            }
+            double nr = 1 + ur - er;
+            double ni = ui - ei;
+            double wr = 1 + ur + er;
+            double wi = ui + ei;
             double dr = gr * wr - gi * wi;
             double di = gr * wi + gi * wr;
-            double m = dr * dr + di * di;
-            zr = (nr * dr + ni * di) / m;
-            zi = (ni * dr - nr * di) / m;
+            double inverse = 1 / (dr * dr + di * di);
+            zr = (nr * dr + ni * di) * inverse;
+            zi = (ni * dr - nr * di) * inverse;
         }
         out[0] = zr;
         out[1] = zi;
