@@ -18,12 +18,19 @@ import lamella.engine.SpectralQuadrature;
  * cos(k y₀ sin φ) dφ, the beams' own angular weight: without offset A = (π/2) e^(−k²(a+b)/2) I₀(k²|a−b|/2)
  * (the integral representation of I₀: Abramowitz & Stegun, 1964, 9.6.19), with an offset A comes from
  * {@link QuadrantTrapezoid}, which costs no evaluation of the stack. Elliptic beams then cost what round ones do.
- * <li>Layers anisotropic in the plane: the coordinates sx = ρ cos θ/√a, sy = ρ sin θ/√b turn the weight into
- * exp(−ρ²) at every angle, and H = 1/(π² √(ab)) ∫₀^5 exp(−ρ²) ρ F(ρ) dρ with F(ρ) = ∫₀^{π/2} Z cos(sx x₀) cos(sy y₀)
- * dθ; what is left of the angle in F (the anisotropy, the ellipticity as it reaches Z, offsets) is smooth and
- * periodic, and {@link QuadrantTrapezoid} integrates it.
+ * <li>Layers anisotropic in the plane, co-centred beams: in the same polar coordinates
+ * H = (1/π²) ∫₀^{k_max} A(k) k dk with A(k) = ∫₀^{π/2} exp(−k²(a cos²φ + b sin²φ)) Z(k cos φ, k sin φ) dφ, from
+ * {@link MatchedAngularRule}: Z interpolated over the angle, and the weight times each term of the interpolant
+ * integrated in closed form (Bessel functions Iₘ), so that the stack is evaluated at as many angles as Z's own
+ * dependence on the direction needs (5 for a film of Λx/Λy = 7.5), however elliptic the beams. Its angular error is
+ * held at each k to a tenth of the radial tolerance, relative to A(k) or, if looser, to the co-axial scale spread
+ * over k k_max, so that the whole angular error stays below a tenth of the radial tolerance.
+ * <li>Layers anisotropic in the plane, offset beams: the coordinates sx = ρ cos θ/√a, sy = ρ sin θ/√b turn the
+ * weight into exp(−ρ²) at every angle, and H = 1/(π² √(ab)) ∫₀^{π/2} F(θ) dθ over rays,
+ * F(θ) = ∫₀^5 exp(−ρ²) ρ Z cos(sx x₀) cos(sy y₀) dρ, each ray's radial integral with the stack's feature
+ * wavenumbers where that ray meets them; F is smooth and periodic, and {@link QuadrantTrapezoid} integrates it.
  * </ul>
- * The radial integral is adaptive Gauss–Kronrod, as for round beams. An angular integral is held to a tenth of the
+ * The radial integrals are adaptive Gauss–Kronrod, as for round beams. An angular integral is held to a tenth of the
  * radial tolerance, so that its error does not keep the radial one refining. Far-offset signals that nearly vanish are
  * held to an absolute floor of 1e-9 of the co-axial signal's scale instead.
  */
@@ -68,8 +75,10 @@ final class EllipticModel implements GeometryModel {
         double scale = Math.hypot(z[0], z[1]);
         if (inPlaneIsotropic) {
             isotropicLayers(omega, scale, out);
+        } else if (x0 == 0 && y0 == 0) {
+            coCentredOnAnisotropicLayers(omega, scale, out);
         } else {
-            anisotropicLayers(omega, scale, out);
+            offsetOnAnisotropicLayers(omega, scale, out);
         }
         Geometries.requireFinite(out, "elliptic", frequencyHz);
     }
@@ -108,38 +117,59 @@ final class EllipticModel implements GeometryModel {
         out[1] /= Math.PI * Math.PI;
     }
 
-    private void anisotropicLayers(double omega, double scale, double[] out) {
-        double[] z = new double[2];
+    private void coCentredOnAnisotropicLayers(double omega, double scale, double[] out) {
+        double[] breaks = stack.featureWavenumbers(omega);
+        double kMax = Math.sqrt(GAUSSIAN_CUTOFF / Math.min(a, b));
+        // ∫ A(k) k dk over all k is about scale π/(4√(ab)): the radial integral's co-axial scale
+        double coaxial = scale * Math.PI / (4 * Math.sqrt(a * b));
+        // an angular error below coaxial·τ/(10 k k_max) at every k adds at most coaxial·τ/10 to the radial integral
+        double angularBudget = tolerance / 10 * coaxial / kMax;
+        MatchedAngularRule angles = new MatchedAngularRule(a, b);
         double[] angular = new double[2];
+        Geometries.workspace().integrate((k, o) -> {
+            angles.integrate(stack, k, omega, tolerance / 10, angularBudget / k, angular);
+            o[0] = angular[0] * k;
+            o[1] = angular[1] * k;
+        }, 0.0, kMax, breaks, 0, tolerance, ABSOLUTE_FLOOR * coaxial, out);
+        out[0] /= Math.PI * Math.PI;
+        out[1] /= Math.PI * Math.PI;
+    }
+
+    private void offsetOnAnisotropicLayers(double omega, double scale, double[] out) {
+        double[] z = new double[2];
+        double[] radial = new double[2];
         double rootA = Math.sqrt(a);
         double rootB = Math.sqrt(b);
-        // a wavenumber k of a feature of Z lies at ρ between k√a and k√b, depending on the angle
         double[] features = stack.featureWavenumbers(omega);
-        double[] breaks = new double[2 * features.length];
-        for (int i = 0; i < features.length; i++) {
-            breaks[2 * i] = features[i] * rootA;
-            breaks[2 * i + 1] = features[i] * rootB;
-        }
+        double[] breaks = new double[features.length];
         // ∫ exp(−ρ²) ρ dρ (π/2) is π/4: the radial integral's co-axial scale
         double floor = ABSOLUTE_FLOOR * scale * Math.PI / 4;
         // the offsets' phases per unit ρ along x and y
         double px = x0 / rootA;
         double py = y0 / rootB;
-        double reach = px + py;
-        QuadrantTrapezoid angles = new QuadrantTrapezoid();
-        Geometries.workspace().integrate((rho, o) -> {
-            double sxPerCos = rho / rootA;
-            double syPerSin = rho / rootB;
-            angles.integrate((c, s, g) -> {
-                stack.response(sxPerCos * c, syPerSin * s, omega, z);
-                double w = reach > 0 ? Math.cos(rho * px * c) * Math.cos(rho * py * s) : 1.0;
-                g[0] = z[0] * w;
-                g[1] = z[1] * w;
-            }, tolerance / 10, floor / 5, angular);
-            double w = rho * Math.exp(-rho * rho);
-            o[0] = angular[0] * w;
-            o[1] = angular[1] * w;
-        }, 0.0, Math.sqrt(GAUSSIAN_CUTOFF), breaks, reach > 0 ? 2 * Math.PI / reach : 0, tolerance, floor, out);
+        SpectralQuadrature rays = Geometries.innerWorkspace();
+        new QuadrantTrapezoid().integrate((c, s, g) -> {
+            double sxPerRho = c / rootA;
+            double syPerRho = s / rootB;
+            // along this ray |s| = ρ √(sx² + sy²) per unit ρ: a feature wavenumber k sits at ρ = k / that
+            double stretch = Math.hypot(sxPerRho, syPerRho);
+            for (int i = 0; i < features.length; i++) {
+                breaks[i] = features[i] / stretch;
+            }
+            double reach = px * c + py * s;
+            rays.integrate((rho, o) -> {
+                stack.response(rho * sxPerRho, rho * syPerRho, omega, z);
+                double w = rho * Math.exp(-rho * rho);
+                if (reach > 0) {
+                    w *= Math.cos(rho * px * c) * Math.cos(rho * py * s);
+                }
+                o[0] = z[0] * w;
+                o[1] = z[1] * w;
+            }, 0.0, Math.sqrt(GAUSSIAN_CUTOFF), breaks, reach > 0 ? 2 * Math.PI / reach : 0, tolerance, floor / 5,
+                    radial);
+            g[0] = radial[0];
+            g[1] = radial[1];
+        }, tolerance / 10, floor, out);
         double prefactor = Math.PI * Math.PI * rootA * rootB;
         out[0] /= prefactor;
         out[1] /= prefactor;
