@@ -298,9 +298,12 @@ public final class LayeredStack implements StackKernel {
             double x2 = 2 * qr * thickness[i];
             if (x2 <= OPAQUE) {
                 double mag = Math.exp(-x2);
-                double y2 = 2 * qi * thickness[i];
-                double cr = mag * Math.cos(y2);
-                double ci = -mag * Math.sin(y2);
+                // cos 2y and sin 2y from one tangent, t = tan y: (1 − t²)/(1 + t²) and 2t/(1 + t²); the tangent of
+                // a finite double stays below 2e16, so t² cannot overflow
+                double t = Math.tan(qi * thickness[i]);
+                double over = mag / (1 + t * t);
+                double cr = (1 - t * t) * over;
+                double ci = -2 * t * over;
                 // e (1 − u)
                 er = cr * (1 - ur) + ci * ui;
                 ei = ci * (1 - ur) - cr * ui;
