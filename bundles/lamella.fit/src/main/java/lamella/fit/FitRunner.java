@@ -68,7 +68,7 @@ final class FitRunner {
             warnings.add("the fit did not converge within its iteration limit; the values are where it stopped");
         }
         double[] u = best.u();
-        double[][] j = solver.centralJacobian(u, unc, sigma);
+        double[][] j = solver.finalJacobian(u, unc, sigma);
         double[][] ju = problem.uncertain.isEmpty() ? new double[j.length][0]
                 : solver.uncertainJacobian(u, unc, sigma);
         Linearised lin = Linearised.of(j, ju, problem.free, problem.uncertain, u);

@@ -1,6 +1,7 @@
 package lamella.fit;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
@@ -15,10 +16,13 @@ import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.exception.TooManyIterationsException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.ValueAndJacobianFunction;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.DecompositionSolver;
+import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.util.Pair;
@@ -27,7 +31,8 @@ import org.apache.commons.math3.util.Pair;
  * Levenberg–Marquardt (Apache Commons Math) on the weighted residuals (data − model)/σ in the fitting variables u,
  * bounds enforced by projecting each trial point onto them. Jacobians by finite differences, their columns computed
  * in parallel, and only where the search needs one: at the points it accepts, not at trial points it rejects or the
- * point it stops at. A point's model is computed once: the search asks for a value several times, and the
+ * point it stops at. The search stops once an accepted step is far inside the inputs' σ ({@link #STEP_WITHIN_SIGMA}).
+ * A point's model is computed once: the search asks for a value several times, and the
  * reweighting passes and the uncertainty start where the search ended ({@link ModelMemo}).
  */
 final class Solver {
@@ -37,12 +42,20 @@ final class Solver {
     /** Central-difference step for the Jacobian the uncertainty is computed from. */
     static final double FINAL_STEP = 1e-4;
     private static final int MAX_ITERATIONS = 200;
+    /**
+     * The search stops once an accepted step moved every free input by less than this fraction of its 1σ, the σ the
+     * residuals and the Jacobian just used imply: what further steps could change is far below what the data tell.
+     */
+    static final double STEP_WITHIN_SIGMA = 0.01;
 
     private final FitProblem problem;
     private final ExecutorService pool;
     private final Progress progress;
     private final AtomicInteger evaluations = new AtomicInteger();
     private final ModelMemo memo = new ModelMemo();
+    /** The point and the weighted Jacobian the search last asked for (the search runs on one thread). */
+    private double[] jacobianPoint;
+    private double[][] jacobian;
 
     Solver(FitProblem problem, ExecutorService pool, Progress progress) {
         this.problem = problem;
@@ -76,8 +89,10 @@ final class Solver {
 
             @Override
             public RealMatrix computeJacobian(double[] u) {
-                return new Array2DRowRealMatrix(jacobian(u, uncertainValues, sigma,
-                        weighted(u, uncertainValues, sigma), parallel), false);
+                double[][] j = jacobian(u, uncertainValues, sigma, weighted(u, uncertainValues, sigma), parallel);
+                jacobianPoint = u.clone();
+                jacobian = j;
+                return new Array2DRowRealMatrix(j, false);
             }
 
             @Override
@@ -92,6 +107,7 @@ final class Solver {
                 .lazyEvaluation(true)
                 .target(target)
                 .parameterValidator(v -> new ArrayRealVector(clamp(v.toArray()), false))
+                .checker((iteration, previous, current) -> stepWithinNoise(previous, current, n))
                 .maxEvaluations(Integer.MAX_VALUE)
                 .maxIterations(MAX_ITERATIONS);
         // a relative 1e-8 in the cost and the parameters is far inside any measurement's uncertainty
@@ -105,6 +121,43 @@ final class Solver {
         } catch (TooManyIterationsException | TooManyEvaluationsException | ConvergenceException e) {
             return new Result(u0.clone(), Double.POSITIVE_INFINITY, MAX_ITERATIONS, false);
         }
+    }
+
+    /**
+     * Whether the accepted step from previous to current moved every u_a by less than {@link #STEP_WITHIN_SIGMA} of
+     * σ_a = √(s² [(JᵀJ)⁻¹]_aa), J the Jacobian at previous and s² = χ²/(n − p) the residuals' own scale (so that the
+     * test holds whatever the weights), the linearised σ of the fit (common practice, no source). Never when the
+     * residuals vanish or JᵀJ is singular: the optimizer's own tolerances decide then.
+     */
+    private boolean stepWithinNoise(LeastSquaresProblem.Evaluation previous, LeastSquaresProblem.Evaluation current,
+                                    int n) {
+        double[] from = previous.getPoint().toArray();
+        double[] to = current.getPoint().toArray();
+        int p = from.length;
+        if (n <= p || jacobian == null || !Arrays.equals(from, jacobianPoint)) {
+            return false;
+        }
+        double[][] normal = new double[p][p];
+        for (double[] row : jacobian) {
+            for (int a = 0; a < p; a++) {
+                for (int b = 0; b < p; b++) {
+                    normal[a][b] += row[a] * row[b];
+                }
+            }
+        }
+        DecompositionSolver inverse = new LUDecomposition(new Array2DRowRealMatrix(normal, false)).getSolver();
+        if (!inverse.isNonSingular()) {
+            return false;
+        }
+        RealMatrix covariance = inverse.getInverse();
+        double s2 = current.getCost() * current.getCost() / (n - p);
+        for (int a = 0; a < p; a++) {
+            double sigma = Math.sqrt(s2 * covariance.getEntry(a, a));
+            if (!(Math.abs(to[a] - from[a]) < STEP_WITHIN_SIGMA * sigma)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** The weighted model m/σ of every dataset. */
@@ -149,14 +202,17 @@ final class Solver {
         return transpose(columns, at.length);
     }
 
-    /** ∂(m/σ)/∂u by central differences, for the covariance. */
-    double[][] centralJacobian(double[] u, double[] unc, double[] sigma) {
+    /**
+     * ∂(m/σ)/∂u for the covariance, by forward differences from the model at u, which the search has already computed:
+     * p evaluations instead of the 2p of central ones; with the step {@link #FINAL_STEP} in u the truncation error is
+     * about a 1e-4 part of each derivative, far below what moves a σ.
+     */
+    double[][] finalJacobian(double[] u, double[] unc, double[] sigma) {
+        double[] at = weighted(u, unc, sigma);
         double[][] columns = columns(u.length, true, j -> {
             double[] plus = u.clone();
-            double[] minus = u.clone();
             plus[j] += FINAL_STEP;
-            minus[j] -= FINAL_STEP;
-            return difference(weighted(plus, unc, sigma), weighted(minus, unc, sigma), 2 * FINAL_STEP);
+            return difference(weighted(plus, unc, sigma), at, FINAL_STEP);
         });
         return transpose(columns, problem.points());
     }
