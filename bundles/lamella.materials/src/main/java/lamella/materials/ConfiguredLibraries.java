@@ -23,10 +23,8 @@ import org.osgi.service.component.annotations.Deactivate;
 @Component(immediate = true, service = {})
 public final class ConfiguredLibraries {
 
-    static final String FACILITY = "lamella.materials.facility";
-    static final String USER = "lamella.materials.user";
-    /** The user folder when {@value #USER} is not set, used only if it exists. */
-    static final String DEFAULT_USER_FOLDER = ".lamella/materials";
+    static final String FACILITY = PlainLibraries.FACILITY_SETTING;
+    static final String USER = PlainLibraries.USER_SETTING;
     static final String WORKING_DIRECTORY = "lamella.cwd";
 
     private final List<ServiceRegistration<?>> registrations = new ArrayList<>();
@@ -56,20 +54,11 @@ public final class ConfiguredLibraries {
         notices.clear();
     }
 
-    /** A configured folder; empty when the setting is absent or blank. Relative paths are the user's. */
     static Optional<Path> folder(String setting, Path base) {
-        if (setting == null || setting.isBlank()) {
-            return Optional.empty();
-        }
-        return Optional.of(base.resolve(setting.trim()).toAbsolutePath().normalize());
+        return PlainLibraries.folder(setting, base);
     }
 
-    /** Unset: the default folder if it exists. Set but blank: no user library. */
     static Optional<Path> userFolder(String setting, Path base, Path home) {
-        if (setting == null) {
-            Path standard = home.resolve(DEFAULT_USER_FOLDER);
-            return Files.isDirectory(standard) ? Optional.of(standard) : Optional.empty();
-        }
-        return folder(setting, base);
+        return PlainLibraries.userFolder(setting, base, home);
     }
 }

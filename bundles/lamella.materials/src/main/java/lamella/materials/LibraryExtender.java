@@ -29,9 +29,9 @@ import org.osgi.util.tracker.BundleTracker;
 @Component(immediate = true, service = {})
 public final class LibraryExtender {
 
-    static final String HEADER = "Lamella-Material-Library";
+    static final String HEADER = PlainLibraries.HEADER;
     static final String LIBRARY_TIER = "lamella.material.library.tier";
-    static final String SHIPPED_BUNDLE = "lamella.materials.shipped";
+    static final String SHIPPED_BUNDLE = PlainLibraries.SHIPPED_BUNDLE;
 
     private BundleTracker<ServiceRegistration<MaterialLibrary>> tracker;
 
@@ -76,7 +76,7 @@ public final class LibraryExtender {
 
     /** Lamella's own library bundle is the shipped tier; a lab's data bundle ranks above it. */
     static LibraryTier tierOf(String symbolicName) {
-        return SHIPPED_BUNDLE.equals(symbolicName) ? LibraryTier.SHIPPED : LibraryTier.BUNDLE;
+        return PlainLibraries.tierOf(symbolicName);
     }
 
     static ReadLibrary read(Bundle bundle, String folder, LibraryTier tier) {
