@@ -66,10 +66,36 @@ public final class ModelCatalog {
         }
         Parameters gp = Parameters.bind(geometryBlock, g.parameters(), TYPE_KEY, "geometry '" + g.type() + "'");
         Parameters tp = Parameters.bind(measurementBlock, t.parameters(), TYPE_KEY, "technique '" + t.type() + "'");
-        StackKernel kernel = kernels.compile(stack);
-        GeometryModel gm = g.bind(gp, kernel);
         TechniqueModel tm = t.bind(tp);
-        return new Simulation(t, tm, gm);
+        if (!stack.heating().isOn()) {
+            return new Simulation(t, tm, g.bind(gp, kernels.compile(stack)));
+        }
+        SelfHeating.Outcome heated = selfHeated(stack, g, gp, t);
+        return new Simulation(t, tm, g.bind(gp, kernels.compile(heated.stack())), Optional.of(heated));
+    }
+
+    /**
+     * The stack's library values consistent with the steady rise the absorbed power causes: the geometry's response
+     * at 0 Hz, the estimate {@link Simulation#steadyRisePerWatt()} gives, for the values of every iteration.
+     */
+    private SelfHeating.Outcome selfHeated(Stack stack, HeatingGeometry g, Parameters gp, Technique t)
+            throws InputException {
+        String at = stack.heating().path();
+        if (t.requiredUnit() != ResponseUnit.KELVIN_PER_WATT) {
+            throw InputException.at(at, "self-heating takes the steady rise per watt of a beam geometry; technique '"
+                    + t.type() + "' with geometry '" + g.type() + "' gives a response per unit length, so no rise"
+                    + " per watt is known (leave the self-heating block out)");
+        }
+        if (!stack.hasHeatSink()) {
+            throw InputException.at(at, "self-heating needs a steady state, and no heat leaves this stack (an"
+                    + " adiabatic bottom" + (stack.heatsBothWays() ? " and top" : "") + "); make a side"
+                    + " semi-infinite or isothermal, or leave the self-heating block out");
+        }
+        return stack.heating().settle(stack, s -> {
+            double[] h = new double[2];
+            g.bind(gp, kernels.compile(s)).at(0, h);
+            return h[0];
+        });
     }
 
     /** Builds the simulation of a whole case document. */

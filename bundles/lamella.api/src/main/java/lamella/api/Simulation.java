@@ -1,10 +1,19 @@
 package lamella.api;
 
+import java.util.Optional;
+
 /**
  * One technique measuring one geometry on one stack: the model signal, the unit every fit, sensitivity and
- * design is made of.
+ * design is made of. {@code heating} is the consistent self-heating state the geometry was bound with, when the
+ * case asks for it.
  */
-public record Simulation(Technique technique, TechniqueModel measurement, GeometryModel geometry) {
+public record Simulation(Technique technique, TechniqueModel measurement, GeometryModel geometry,
+                         Optional<SelfHeating.Outcome> heating) {
+
+    /** A simulation without self-heating. */
+    public Simulation(Technique technique, TechniqueModel measurement, GeometryModel geometry) {
+        this(technique, measurement, geometry, Optional.empty());
+    }
 
     /** The signals at the x values of the measurement settings. */
     public SignalTable run() {

@@ -15,9 +15,11 @@ import java.util.Set;
  * Only the outermost layer of each side may be semi-infinite, and it must be when that side ends
  * {@link BottomBoundary#SEMI_INFINITE}. Layer names are unique over both sides. {@code optics} says how deep the
  * heating and the reading reach into {@code layers[0]} ({@link OpticalDepths#SURFACE}: at the plane itself).
+ * {@code heating} says whether the library values are taken at the temperature the absorbed power raises the sample
+ * to ({@link SelfHeating#OFF}: at the temperatures as read); the layers hold the values as read.
  */
 public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top,
-                    OpticalDepths optics) {
+                    OpticalDepths optics, SelfHeating heating) {
 
     public Stack {
         layers = List.copyOf(layers);
@@ -25,8 +27,9 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
         if (layers.isEmpty()) {
             throw new IllegalArgumentException("a stack needs at least one layer");
         }
-        if (bottom == null || top == null || optics == null) {
-            throw new IllegalArgumentException("a stack needs its bottom and top conditions and its optical depths");
+        if (bottom == null || top == null || optics == null || heating == null) {
+            throw new IllegalArgumentException("a stack needs its bottom and top conditions, its optical depths and"
+                    + " its self-heating");
         }
         if (above.isEmpty() && top != BottomBoundary.ADIABATIC) {
             throw new IllegalArgumentException("a stack with no layers above the heated plane has an adiabatic top,"
@@ -42,6 +45,12 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
         }
     }
 
+    /** A stack without self-heating. */
+    public Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top,
+                 OpticalDepths optics) {
+        this(layers, bottom, above, top, optics, SelfHeating.OFF);
+    }
+
     /** A stack heated and read at the plane itself, with or without layers above it. */
     public Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above, BottomBoundary top) {
         this(layers, bottom, above, top, OpticalDepths.SURFACE);
@@ -54,7 +63,12 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
 
     /** The same stack, heated and read to other depths in {@code layers[0]}. */
     public Stack withOptics(OpticalDepths o) {
-        return new Stack(layers, bottom, above, top, o);
+        return new Stack(layers, bottom, above, top, o, heating);
+    }
+
+    /** The same stack, its library values taken under another self-heating. */
+    public Stack withHeating(SelfHeating h) {
+        return new Stack(layers, bottom, above, top, optics, h);
     }
 
     private static void check(List<Layer> side, BottomBoundary end, String outermost, Set<String> names) {
@@ -108,7 +122,7 @@ public record Stack(List<Layer> layers, BottomBoundary bottom, List<Layer> above
                 }
             }
         }
-        return new Stack(below, bottom, up, top, optics);
+        return new Stack(below, bottom, up, top, optics, heating);
     }
 
     /** True when every layer conducts equally along x and y (axisymmetric geometries need this). */

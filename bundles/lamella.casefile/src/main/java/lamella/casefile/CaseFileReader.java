@@ -22,6 +22,7 @@ import lamella.api.Layer;
 import lamella.api.Names;
 import lamella.api.OpticalDepths;
 import lamella.api.PhysicalRange;
+import lamella.api.SelfHeating;
 import lamella.api.Stack;
 import lamella.api.ValueOrigin;
 import lamella.api.material.MaterialCatalog;
@@ -36,7 +37,8 @@ import org.osgi.service.component.annotations.ReferencePolicy;
  * layers above that plane and the top condition), {@code geometry}
  * and {@code measurement}, each naming its service by {@code type}. Unknown keys are errors so that a typo never
  * goes unnoticed; the stack is checked here, the other blocks by the services they name. A layer may name a
- * {@code material} of the live material libraries for the values it does not write itself.
+ * {@code material} of the live material libraries for the values it does not write itself; {@code self_heating}
+ * takes those values at the temperature the absorbed power raises the sample to.
  */
 @Component(service = {CaseFormat.class, ExplainingCaseFormat.class})
 public final class CaseFileReader implements ExplainingCaseFormat {
@@ -48,7 +50,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
      * it, so any object is accepted there.
      */
     static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
-            LayerReading.TEMPERATURE, "fit", "plan", "map", WORKBENCH);
+            LayerReading.TEMPERATURE, "fit", "plan", "map", WORKBENCH, SelfHeatingReading.BLOCK);
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom", "above", "top");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
@@ -101,8 +103,13 @@ public final class CaseFileReader implements ExplainingCaseFormat {
                     : LayerReading.DEFAULT_TEMPERATURE_K;
             Supplier<MaterialCatalog> catalog = () -> new MaterialCatalog(libraries);
             List<ValueOrigin> origins = new ArrayList<>();
+            List<SelfHeating.LibraryBinding> bindings = new ArrayList<>();
             Stack stack = stack(object(root, "stack"), temperature,
-                    root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins);
+                    root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins,
+                    bindings);
+            if (root.has(SelfHeatingReading.BLOCK)) {
+                stack = stack.withHeating(SelfHeatingReading.read(object(root, SelfHeatingReading.BLOCK), bindings));
+            }
             Block geometry = block(root, "geometry");
             Block measurement = block(root, "measurement");
             return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines, origins),
@@ -113,7 +120,8 @@ public final class CaseFileReader implements ExplainingCaseFormat {
     }
 
     static Stack stack(Block s, double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
-                       Map<String, Integer> lines, List<ValueOrigin> origins) throws InputException {
+                       Map<String, Integer> lines, List<ValueOrigin> origins,
+                       List<SelfHeating.LibraryBinding> bindings) throws InputException {
         onlyKnownKeys(s, STACK_KEYS, "the stack");
         BottomBoundary bottom = boundary(s, "bottom", BottomBoundary.SEMI_INFINITE);
         Object raw = s.get("layers");
@@ -126,7 +134,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         }
         Map<String, String> seen = new HashMap<>();
         List<Layer> layers = side(s, "layers", list, bottom, false, temperature, temperaturePath, catalog, lines,
-                origins, seen);
+                origins, bindings, seen);
         OpticalDepths optics = optics((Block) list.get(0), layers.get(0), lines, origins);
         if (!s.has("above")) {
             if (s.has("top")) {
@@ -143,7 +151,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         }
         BottomBoundary top = boundary(s, "top", BottomBoundary.SEMI_INFINITE);
         List<Layer> above = side(s, "above", up, top, true, temperature, temperaturePath, catalog, lines, origins,
-                seen);
+                bindings, seen);
         return new Stack(layers, bottom, above, top, optics);
     }
 
@@ -200,7 +208,8 @@ public final class CaseFileReader implements ExplainingCaseFormat {
     /** One side's layers; names are unique over both sides ({@code seen}: name to the path that used it). */
     private static List<Layer> side(Block s, String key, List<?> list, BottomBoundary end, boolean above,
                                     double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
-                                    Map<String, Integer> lines, List<ValueOrigin> origins, Map<String, String> seen)
+                                    Map<String, Integer> lines, List<ValueOrigin> origins,
+                                    List<SelfHeating.LibraryBinding> bindings, Map<String, String> seen)
             throws InputException {
         List<Layer> layers = new ArrayList<>();
         for (int i = 0; i < list.size(); i++) {
@@ -213,7 +222,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
             }
             boolean last = i == list.size() - 1;
             Layer layer = LayerReading.read(l, last, end, above, temperature, temperaturePath, catalog, lines,
-                    origins);
+                    origins, bindings);
             String before = seen.put(layer.name(), at);
             if (before != null) {
                 throw InputException.at(l.pathOf(NAME), "the name '" + layer.name() + "' is already used by "

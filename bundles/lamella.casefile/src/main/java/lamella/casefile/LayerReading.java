@@ -10,7 +10,9 @@ import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.ValueOrigin;
 import lamella.api.material.Material;
+import lamella.api.SelfHeating;
 import lamella.api.material.MaterialCatalog;
+import lamella.api.material.MaterialProperty;
 import lamella.api.material.MaterialQuantity;
 import lamella.api.material.OutOfRangeException;
 import lamella.api.material.PropertyValue;
@@ -32,6 +34,7 @@ final class LayerReading {
     private final Block l;
     private final Map<String, Integer> lines;
     private final List<ValueOrigin> origins;
+    private final List<SelfHeating.LibraryBinding> bindings;
     private final String name;
     private final Optional<Material> material;
     private final double temperature;
@@ -52,9 +55,10 @@ final class LayerReading {
     }
 
     private LayerReading(Block l, String name, Map<String, Integer> lines, List<ValueOrigin> origins,
-                         Optional<Material> material, double temperature, String temperaturePath,
-                         Optional<CAxis> cAxis) {
+                         List<SelfHeating.LibraryBinding> bindings, Optional<Material> material, double temperature,
+                         String temperaturePath, Optional<CAxis> cAxis) {
         this.l = l;
+        this.bindings = bindings;
         this.name = name;
         this.lines = lines;
         this.origins = origins;
@@ -68,10 +72,11 @@ final class LayerReading {
      * @param caseTemperature     the case's temperature_k, or the default
      * @param caseTemperaturePath where that temperature was set ({@code temperature_k}), or null for the default
      * @param catalog             the live libraries, asked only when the layer names a material
+     * @param bindings            receives every value taken from a library, for self-heating
      */
     static Layer read(Block l, boolean last, BottomBoundary bottom, boolean above, double caseTemperature,
                       String caseTemperaturePath, Supplier<MaterialCatalog> catalog, Map<String, Integer> lines,
-                      List<ValueOrigin> origins) throws InputException {
+                      List<ValueOrigin> origins, List<SelfHeating.LibraryBinding> bindings) throws InputException {
         CaseFileReader.onlyKnownKeys(l, CaseFileReader.LAYER_KEYS, "a layer");
         String name = l.requireString(CaseFileReader.NAME);
         if (name.isBlank()) {
@@ -106,7 +111,7 @@ final class LayerReading {
                     .findFirst().orElseThrow(() -> InputException.at(l.pathOf(C_AXIS), "unknown c_axis '" + given
                             + "'; expected one of: normal, in-plane-x, in-plane-y")));
         }
-        return new LayerReading(l, name, lines, origins, material, temperature,
+        return new LayerReading(l, name, lines, origins, bindings, material, temperature,
                 temperaturePath == null ? l.pathOf(MATERIAL) : temperaturePath, axis).layer(last, bottom, above);
     }
 
@@ -256,6 +261,13 @@ final class LayerReading {
         }
         origins.add(new ValueOrigin(l.pathOf(key), name, key, v.value(), ValueOrigin.Kind.LIBRARY, line(MATERIAL),
                 how, Optional.of(v)));
+        double low = 0;
+        double high = Double.POSITIVE_INFINITY;
+        for (MaterialProperty p : v.from()) {
+            low = Math.max(low, p.curve().lowK());
+            high = Math.min(high, p.curve().highK());
+        }
+        bindings.add(new SelfHeating.LibraryBinding(name, key, v.material(), q, temperature, v.value(), low, high));
         source = LIBRARY_SOURCE + q.key();
         return v.value();
     }

@@ -84,6 +84,7 @@ final class FitResultJson {
                 r[i] = d.data()[i] - d.model()[i];
             }
             numbers(n.putArray("residuals"), r);
+            d.heating().ifPresent(h -> n.set("self_heating", MAPPER.valueToTree(h.record())));
         }
         ArrayNode budget = root.putArray("budget");
         for (BudgetLine b : o.budget()) {

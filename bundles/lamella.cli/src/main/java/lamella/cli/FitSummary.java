@@ -28,6 +28,10 @@ final class FitSummary {
                     String.format(Locale.ROOT, "%.3f", d.reducedChiSquare()), d.sigmaFromData() ? "data" : "residuals");
         }
         sb.append("\nDatasets\n").append(data.render("  "));
+        for (DatasetFit d : o.datasets()) {
+            d.heating().ifPresent(h -> sb.append("\nDataset ").append(d.index()).append(", at the best fit\n")
+                    .append(SelfHeatingText.render(h)));
+        }
         if (o.budget().size() > 1) {
             String[] header = new String[o.parameters().size() + 1];
             header[0] = "source of uncertainty (1σ)";

@@ -12,6 +12,7 @@ import lamella.api.InputException;
 import lamella.api.ModelEvaluationException;
 import lamella.api.OwnInputs;
 import lamella.api.SignalTable;
+import lamella.api.SelfHeating;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
@@ -77,7 +78,10 @@ public final class SimulateCommand implements Command {
                 technique's signal columns, 13 significant digits, SI units. Without --out the CSV goes to
                 standard output. Bad input is reported with the file, line and JSON path; exit status 2.
                 --explain also writes to standard error every layer value used and where it came from: the case
-                file (with its line), a material library (entry, version, source, temperature) or a default.
+                file (with its line), a material library (entry, version, source, temperature) or a default;
+                with a self_heating block, also the steady rise and the temperature every library value was
+                taken at. A library value whose temperature under self-heating leaves its entry's range is
+                warned about on standard error, with or without --explain.
                 """;
     }
 
@@ -122,6 +126,13 @@ public final class SimulateCommand implements Command {
             CaseDocument doc = explain ? ValueOrigins.readExplaining(caseFormat, casePath, io.err())
                     : caseFormat.read(casePath);
             Simulation simulation = models.catalog(kernels).simulation(doc);
+            if (simulation.heating().isPresent()) {
+                SelfHeating.Outcome h = simulation.heating().get();
+                if (explain) {
+                    io.err().print(SelfHeatingText.render(h));
+                }
+                h.warnings().forEach(w -> io.err().println("lamella simulate: warning: " + w));
+            }
             if (simulation.measurement().xValues().length == 0) {
                 String key = simulation.technique().xParameter().orElse("x values");
                 throw doc.locate(InputException.at(doc.measurement().pathOf(key), "missing; a simulation needs the"

@@ -125,4 +125,41 @@ class ExplainTest {
                 + " semi-infinite top; the plane's temperature is shared by both sides and their admittances add.\n"),
                 err);
     }
+
+    /**
+     * Self-heating: the rise and the temperature of every library value go to standard error with --explain, and a
+     * value stated at 300 K only is warned about with or without it. The rise is Lax's probe-averaged steady rise of a
+     * half-space, P / (√(2π) Λ √(w0² + w1²)) (Lax, J. Appl. Phys. 48, 3919, 1977, for 1/e² radii and a Gaussian
+     * probe); the held value keeps it unchanged.
+     */
+    @Test
+    void explainShowsTheSelfHeatingRiseAndWarnsWhereAnEntrysRangeIsLeft() throws Exception {
+        Files.writeString(dir.resolve("case.json"), """
+                {
+                  "self_heating": {"absorbed_power_w": 1e-3},
+                  "stack": {"layers": [
+                    {"name": "film", "material": "oxide", "heat_capacity_j_m3k": 1.6e6}
+                  ]},
+                  "geometry": {"type": "gaussian", "pump_radius_m": 5e-6, "probe_radius_m": 5e-6},
+                  "measurement": {"type": "sstr"}
+                }
+                """);
+        double rise = 1e-3 / (Math.sqrt(2 * Math.PI) * 1.2 * Math.hypot(5e-6, 5e-6));
+        String riseText = new java.math.BigDecimal(rise).round(new java.math.MathContext(4)).toPlainString();
+        String heated = java.math.BigDecimal.valueOf(300 + rise).setScale(2, java.math.RoundingMode.HALF_EVEN)
+                .stripTrailingZeros().toPlainString();
+        Run plain = run("case.json");
+        assertEquals(Command.OK, plain.status(), plain.err());
+        assertTrue(plain.err().contains("lamella simulate: warning: layer 'film': material 'oxide' (library Lab films"
+                + " (facility), entry oxide v2) states k_w_mk at 300 K only, but under self-heating the layer is at "
+                + heated + " K (300 K + the steady rise " + riseText + " K); its value at 300 K is used"), plain.err());
+        assertTrue(!plain.err().contains("Self-heating:"), "the explanation only with --explain: " + plain.err());
+        Run explained = run("case.json", "--explain");
+        assertEquals(plain.out(), explained.out());
+        String err = explained.err();
+        assertTrue(err.contains("Self-heating: 1 mW absorbed raise the heated plane by " + riseText + " K"), err);
+        assertTrue(err.matches("(?s).*\\n  film +k_through_w_mk +" + java.util.regex.Pattern.quote(
+                new java.math.BigDecimal(300 + rise).round(new java.math.MathContext(6)).toPlainString())
+                + " +1\\.2 +1\\.2 +W/\\(m K\\)\\n.*"), err);
+    }
 }

@@ -2,6 +2,7 @@ package lamella.fit;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
@@ -9,6 +10,7 @@ import lamella.api.InputException;
 import lamella.api.ModelCatalog;
 import lamella.api.ModelEvaluationException;
 import lamella.api.ParameterRef;
+import lamella.api.SelfHeating;
 import lamella.api.Simulation;
 import lamella.api.Technique;
 
@@ -195,6 +197,18 @@ final class FitProblem {
             at += m.length;
         }
         return out;
+    }
+
+    /**
+     * The self-heating state of one dataset at these input values (the rise depends on them, so it is settled anew
+     * at every evaluation); empty when the case asks for none.
+     */
+    Optional<SelfHeating.Outcome> heating(PreparedDataset d, double[] values) {
+        try {
+            return d.with(refs, values).simulation(catalog).heating();
+        } catch (InputException e) {
+            throw new ModelEvaluationException("the fit reached inputs the model rejects: " + e.getMessage(), e);
+        }
     }
 
     /** The measured signal of every dataset, concatenated. */

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.SplittableRandom;
 import java.util.concurrent.ExecutorService;
+import lamella.api.SelfHeating;
 import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
@@ -114,7 +115,7 @@ final class FitRunner {
             }
         }
         double[] model = solver.unweighted(u, unc).clone();
-        List<DatasetFit> datasets = datasetFits(model, y, sigma, warnings);
+        List<DatasetFit> datasets = datasetFits(model, y, sigma, problem.values(u, unc), warnings);
         double chi2 = 0;
         for (int i = 0; i < y.length; i++) {
             double r = (y[i] - model[i]) / sigma[i];
@@ -201,7 +202,8 @@ final class FitRunner {
         return s;
     }
 
-    private List<DatasetFit> datasetFits(double[] model, double[] y, double[] sigma, List<String> warnings) {
+    private List<DatasetFit> datasetFits(double[] model, double[] y, double[] sigma, double[] values,
+                                         List<String> warnings) {
         List<DatasetFit> out = new ArrayList<>();
         int at = 0;
         int p = problem.free.size();
@@ -222,8 +224,11 @@ final class FitRunner {
                         + " the model does not describe these data within their noise, or σ is underestimated",
                         d.spec.index(), d.spec.given(), reduced));
             }
+            Optional<SelfHeating.Outcome> heating = problem.heating(d, values);
+            heating.ifPresent(h -> h.warnings().forEach(w -> warnings.add(String.format(Locale.ROOT,
+                    "dataset %d (%s), self-heating at the best fit: %s", d.spec.index(), d.spec.given(), w))));
             out.add(new DatasetFit(d.spec.index(), d.spec.given(), d.technique, d.signal, d.xColumn, d.x.clone(),
-                    d.y.clone(), s, m, d.dataSigma != null, reduced));
+                    d.y.clone(), s, m, d.dataSigma != null, reduced, heating));
             at += d.size();
         }
         return out;

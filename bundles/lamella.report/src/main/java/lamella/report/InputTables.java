@@ -9,10 +9,12 @@ import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.Layer;
 import lamella.api.ParameterRef;
+import lamella.api.SelfHeating;
 import lamella.api.Units;
 import lamella.api.ValueOrigin;
 import lamella.api.material.Material;
 import lamella.api.material.PropertyValue;
+import lamella.api.fit.DatasetFit;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FittedParameter;
 
@@ -43,6 +45,7 @@ final class InputTables {
                 .text(" values are fitted; the case file's starting value is shown here, the result above.")
                 .raw("</p>\n");
         libraryValues(h, doc);
+        selfHeating(h, o);
         if (doc.states("geometry")) {
             block(h, "Geometry", doc.geometry());
         }
@@ -103,6 +106,33 @@ final class InputTables {
                     p.uncertaintyRel().isPresent() ? Numbers.percent(p.uncertaintyRel().getAsDouble()) + " %" : "—"));
         }
         h.raw("</tbody></table>\n");
+    }
+
+    /** The steady rise and the temperatures of the library values at the best fit, dataset by dataset. */
+    private static void selfHeating(Html h, FitOutcome o) {
+        List<DatasetFit> heated = o.datasets().stream().filter(d -> d.heating().isPresent()).toList();
+        if (heated.isEmpty()) {
+            return;
+        }
+        h.element("h3", "Self-heating at the best fit");
+        for (DatasetFit d : heated) {
+            SelfHeating.Outcome s = d.heating().orElseThrow();
+            h.element("p", "Dataset " + d.index() + " (" + d.source() + "): " + s.inWords());
+            if (s.values().isEmpty()) {
+                continue;
+            }
+            h.raw("<table class=\"inputs keys\"><thead>");
+            h.headRow(List.of("layer", "key", "temperature (K)", "value as read", "value used", "unit"));
+            h.raw("</thead><tbody>\n");
+            for (SelfHeating.ShiftedValue v : s.values()) {
+                h.row(List.of(v.layer(), v.key(), Numbers.plain(v.temperatureK()), Numbers.plain(v.baseValue()),
+                        Numbers.plain(v.value()), unit(v.key())));
+            }
+            h.raw("</tbody></table>\n");
+            for (String w : s.warnings()) {
+                h.element("p", "note", w);
+            }
+        }
     }
 
     private static void cell(Html h, Set<String> free, Layer l, String text, String... keys) {

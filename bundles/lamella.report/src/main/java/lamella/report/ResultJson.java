@@ -132,6 +132,7 @@ final class ResultJson {
             n.set("data", numbers(d.data()));
             n.set("sigma", numbers(d.sigma()));
             n.set("model", numbers(d.model()));
+            d.heating().ifPresent(h -> n.set("self_heating", MAPPER.valueToTree(h.record())));
         }
         ArrayNode budget = f.putArray("budget");
         for (BudgetLine line : o.budget()) {
