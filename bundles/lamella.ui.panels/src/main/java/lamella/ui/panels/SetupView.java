@@ -1,9 +1,11 @@
 package lamella.ui.panels;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import lamella.api.CaseModel;
 import lamella.api.HeatingGeometry;
+import lamella.api.SelfHeating;
 import lamella.api.Technique;
 import lamella.ui.api.PanelView;
 import lamella.ui.api.Project;
@@ -11,6 +13,7 @@ import lamella.ui.api.Workbench;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Group;
@@ -19,8 +22,9 @@ import org.eclipse.swt.widgets.Text;
 
 /**
  * The Set-up panel: the technique and the heating geometry with their case-file parameters (SI values, units from
- * the keys), and an estimate of the steady temperature rise from an absorbed power, which is a panel setting and
- * not part of the case.
+ * the keys), and an estimate of the steady temperature rise from an absorbed power. The power is a panel setting
+ * until self-heating is ticked: it is then the case's {@code self_heating.absorbed_power_w}, and the estimate is the
+ * rise consistent with the library values taken at the heated temperature.
  */
 final class SetupView implements PanelView {
 
@@ -34,8 +38,9 @@ final class SetupView implements PanelView {
     private final BlockEditor technique;
     private final BlockEditor geometry;
     private final Text power;
+    private final Button selfHeating;
     private final StatusLine rise;
-    private final LatestOnly<Outcome<Double>> work;
+    private final LatestOnly<Outcome<SteadyRise.Estimate>> work;
     private final Project.Listener listener = c -> refresh();
 
     SetupView(Composite parent, Workbench workbench) {
@@ -63,8 +68,12 @@ final class SetupView implements PanelView {
         pgd.widthHint = 90;
         power.setLayoutData(pgd);
         power.setText("10");
-        power.addListener(SWT.DefaultSelection, e -> estimate());
-        power.addListener(SWT.FocusOut, e -> estimate());
+        power.addListener(SWT.DefaultSelection, e -> powerEntered());
+        power.addListener(SWT.FocusOut, e -> powerEntered());
+        selfHeating = new Button(heat, SWT.CHECK);
+        selfHeating.setText("self-heating: library values at the heated temperature (case key self_heating)");
+        selfHeating.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
+        selfHeating.addListener(SWT.Selection, e -> selfHeatingToggled());
         rise = new StatusLine(heat, 2);
         Label caution = new Label(heat, SWT.WRAP);
         GridData cgd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
@@ -95,6 +104,16 @@ final class SetupView implements PanelView {
         return rise.text();
     }
 
+    /** Ticks or clears the self-heating box as a user would, for tests. */
+    void setSelfHeating(boolean on) {
+        selfHeating.setSelection(on);
+        selfHeatingToggled();
+    }
+
+    boolean selfHeatingShown() {
+        return selfHeating.getSelection();
+    }
+
     /** A field of the technique's or the geometry's block, by its case-file key, for tests. */
     QuantityField field(String block, String key) {
         return (block.equals("geometry") ? geometry : technique).field(key);
@@ -111,8 +130,45 @@ final class SetupView implements PanelView {
         ObjectNode tree = project.tree();
         technique.show(tree.path("measurement"));
         geometry.show(tree.path("geometry"));
+        JsonNode heating = tree.path(SELF_HEATING);
+        selfHeating.setSelection(heating.isObject());
+        JsonNode watts = heating.path(POWER_KEY);
+        Double shown = NumberText.parse(power.getText());
+        if (watts.isNumber() && (shown == null || shown * 1e-3 != watts.asDouble())) {
+            power.setText(NumberText.format(watts.asDouble() * 1e3));
+        }
         root.layout(true, true);
         estimate();
+    }
+
+    private static final String SELF_HEATING = "self_heating";
+    private static final String POWER_KEY = "absorbed_power_w";
+
+    /** With self-heating on, the power typed is the case's; otherwise it only feeds the estimate. */
+    private void powerEntered() {
+        Double mw = NumberText.parse(power.getText());
+        if (selfHeating.getSelection() && mw != null && mw >= 0) {
+            double watts = mw * 1e-3;
+            project.edit("absorbed power " + NumberText.format(mw) + " mW", t -> t.putObject(SELF_HEATING)
+                    .put(POWER_KEY, watts));
+        }
+        estimate();
+    }
+
+    private void selfHeatingToggled() {
+        if (!selfHeating.getSelection()) {
+            project.edit("turn off self-heating", t -> t.remove(SELF_HEATING));
+            return;
+        }
+        Double mw = NumberText.parse(power.getText());
+        if (mw == null || !(mw >= 0)) {
+            selfHeating.setSelection(false);
+            rise.show("self-heating needs an absorbed power: " + (mw == null ? NumberText.notANumber(power.getText())
+                    : "a power is 0 mW or more"), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        double watts = mw * 1e-3;
+        project.edit("turn on self-heating", t -> t.putObject(SELF_HEATING).put(POWER_KEY, watts));
     }
 
     private void estimate() {
@@ -132,7 +188,7 @@ final class SetupView implements PanelView {
         double watts = mw * 1e-3;
         work.submit(p -> SteadyRise.perWatt(model, workbench.catalog()), new LatestOnly.View<>() {
             @Override
-            public void done(Outcome<Double> o) {
+            public void done(Outcome<SteadyRise.Estimate> o) {
                 showRise(o, mw, watts);
             }
 
@@ -156,7 +212,7 @@ final class SetupView implements PanelView {
         });
     }
 
-    private void showRise(Outcome<Double> o, double mw, double watts) {
+    private void showRise(Outcome<SteadyRise.Estimate> o, double mw, double watts) {
         if (root.isDisposed()) {
             return;
         }
@@ -164,17 +220,29 @@ final class SetupView implements PanelView {
             rise.show(o.problem(), StatusLine.Tone.CAUTION);
             return;
         }
-        double k = o.value() * watts;
+        double perWatt = o.value().perWatt();
+        double k = perWatt * watts;
         String text = "Predicted steady temperature rise: " + NumberText.format(k) + " K ("
-                + NumberText.format(o.value()) + " K/W at 0 Hz × " + NumberText.format(mw) + " mW).";
+                + NumberText.format(perWatt) + " K/W at 0 Hz × " + NumberText.format(mw) + " mW)."
+                + o.value().heating().map(SetupView::selfHeatingText).orElse("");
         if (k > SteadyRise.WARNING_K) {
             rise.show(text + " That is large: properties at this temperature may differ from those in the"
-                    + " case; lower the power or model the heated sample.", StatusLine.Tone.PROBLEM);
+                    + " case; lower the power"
+                    + (o.value().heating().isPresent() ? "." : ", or tick self-heating to take library values at the"
+                    + " heated temperature."), StatusLine.Tone.PROBLEM);
         } else if (k > SteadyRise.CAUTION_K) {
             rise.show(text + " Consider whether the properties still hold at this temperature.",
                     StatusLine.Tone.CAUTION);
         } else {
             rise.show(text, StatusLine.Tone.PLAIN);
         }
+    }
+
+    /** What self-heating did, in a sentence for the rise line. */
+    private static String selfHeatingText(SelfHeating.Outcome h) {
+        String s = " Self-heating is on: " + h.values().size() + " library value" + (h.values().size() == 1 ? "" : "s")
+                + " taken at the heated temperature (" + h.iterations() + " evaluations to settle).";
+        return h.warnings().isEmpty() ? s : s + " " + h.warnings().size() + " outside the library's range: "
+                + h.warnings().get(0);
     }
 }

@@ -1,9 +1,11 @@
 package lamella.ui.panels;
 
+import java.util.Optional;
 import lamella.api.CaseModel;
 import lamella.api.InputException;
 import lamella.api.ModelCatalog;
 import lamella.api.ModelEvaluationException;
+import lamella.api.SelfHeating;
 import lamella.api.Simulation;
 
 /**
@@ -19,8 +21,17 @@ final class SteadyRise {
     private SteadyRise() {
     }
 
+    /**
+     * The rise per watt and, when the case asks for self-heating, the consistent state at the case's absorbed power.
+     *
+     * @param perWatt the steady rise in K per W of absorbed power (with the case's self-heated values, if any)
+     * @param heating the self-heating state, when the case has a {@code self_heating} block
+     */
+    record Estimate(double perWatt, Optional<SelfHeating.Outcome> heating) {
+    }
+
     /** The rise in K per W of absorbed power. */
-    static Outcome<Double> perWatt(CaseModel model, ModelCatalog catalog) {
+    static Outcome<Estimate> perWatt(CaseModel model, ModelCatalog catalog) {
         try {
             Simulation sim = model.simulation(catalog);
             double perWatt = sim.steadyRisePerWatt();
@@ -28,7 +39,7 @@ final class SteadyRise {
                 return Outcome.failed("a line heater's response is per unit length; its steady rise is not estimated"
                         + " here");
             }
-            return Outcome.of(perWatt);
+            return Outcome.of(new Estimate(perWatt, sim.heating()));
         } catch (InputException e) {
             return Outcome.failed(e.getMessage());
         } catch (ModelEvaluationException e) {

@@ -1,5 +1,6 @@
 package lamella.ui.panels;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
@@ -19,6 +20,27 @@ class OtherPanelsTest {
             h.screenshot("setup-warning");
             v.setPower("abc");
             assertTrue(v.riseText().contains("'abc' is not a number"), v.riseText());
+        }
+    }
+
+    @Test
+    void theSetUpPanelTurnsSelfHeatingOnInTheCaseAsOneUndoableStep() throws Exception {
+        try (PanelHarness h = new PanelHarness(760, 820)) {
+            SetupView v = (SetupView) h.open(new SetupPanel());
+            assertTrue(h.pumpUntil(() -> v.riseText().startsWith("Predicted"), 20_000), v.riseText());
+            assertTrue(!v.riseText().contains("Self-heating is on"), v.riseText());
+            int steps = h.workbench.project().undoSteps();
+            v.setPower("4");
+            v.setSelfHeating(true);
+            assertEquals(0.004, h.workbench.project().tree().path("self_heating").path("absorbed_power_w").asDouble(),
+                    1e-15, "the panel's power becomes the case's");
+            assertEquals(steps + 1, h.workbench.project().undoSteps());
+            assertTrue(h.pumpUntil(() -> v.riseText().contains("Self-heating is on"), 20_000), v.riseText());
+            h.screenshot("setup-self-heating");
+            h.workbench.project().undo();
+            h.pump(50);
+            assertTrue(h.workbench.project().tree().path("self_heating").isMissingNode());
+            assertTrue(!v.selfHeatingShown(), "the box follows the undo");
         }
     }
 
