@@ -36,17 +36,36 @@ record FitRecord(FitOutcome outcome, String basis, String applied) {
             .setSerializationInclusion(com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL);
 
     /** A fit's outcome as recorded, in a form without Optional (Monte Carlo may be null). */
-    private record Stored(List<FittedParameter> parameters, double[][] correlation, List<DatasetFit> datasets,
+    private record Stored(List<FittedParameter> parameters, double[][] correlation, List<StoredDataset> datasets,
                           List<BudgetLine> budget, MonteCarloSummary monteCarlo, List<String> warnings,
                           int evaluations, double reducedChiSquare, boolean converged, String basis,
                           String applied) {
     }
 
+    /**
+     * A dataset's fit as recorded: its data and best-fit model. The self-heating state at the best fit is not kept
+     * (it holds the library entries themselves); the fit's output and report carry it.
+     */
+    private record StoredDataset(int index, String source, String technique, String signal, String xColumn,
+                                 double[] x, double[] data, double[] sigma, double[] model, boolean sigmaFromData,
+                                 double reducedChiSquare) {
+
+        static StoredDataset of(DatasetFit d) {
+            return new StoredDataset(d.index(), d.source(), d.technique(), d.signal(), d.xColumn(), d.x(), d.data(),
+                    d.sigma(), d.model(), d.sigmaFromData(), d.reducedChiSquare());
+        }
+
+        DatasetFit fit() {
+            return new DatasetFit(index, source, technique, signal, xColumn, x, data, sigma, model, sigmaFromData,
+                    reducedChiSquare);
+        }
+    }
+
     ObjectNode toJson() {
         FitOutcome o = outcome;
-        return JSON.valueToTree(new Stored(o.parameters(), o.correlation(), o.datasets(), o.budget(),
-                o.monteCarlo().orElse(null), o.warnings(), o.evaluations(), o.reducedChiSquare(), o.converged(),
-                basis, applied));
+        return JSON.valueToTree(new Stored(o.parameters(), o.correlation(),
+                o.datasets().stream().map(StoredDataset::of).toList(), o.budget(), o.monteCarlo().orElse(null),
+                o.warnings(), o.evaluations(), o.reducedChiSquare(), o.converged(), basis, applied));
     }
 
     /** Reads a recorded fit; an IllegalArgumentException says what is wrong with it. */
@@ -62,7 +81,11 @@ record FitRecord(FitOutcome outcome, String basis, String applied) {
             throw new IllegalArgumentException("values, correlations, datasets, budget or the inputs' fingerprint"
                     + " are missing");
         }
-        FitOutcome o = new FitOutcome(s.parameters(), s.correlation(), s.datasets(), s.budget(),
+        if (s.datasets().stream().anyMatch(d -> d == null)) {
+            throw new IllegalArgumentException("a dataset of the recorded fit is empty");
+        }
+        FitOutcome o = new FitOutcome(s.parameters(), s.correlation(),
+                s.datasets().stream().map(StoredDataset::fit).toList(), s.budget(),
                 Optional.ofNullable(s.monteCarlo()), s.warnings() == null ? List.of() : s.warnings(),
                 s.evaluations(), s.reducedChiSquare(), s.converged());
         return new FitRecord(o, s.basis(), s.applied());
