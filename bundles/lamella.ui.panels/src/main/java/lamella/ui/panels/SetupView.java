@@ -240,8 +240,10 @@ final class SetupView implements PanelView {
 
     /** What self-heating did, in a sentence for the rise line. */
     private static String selfHeatingText(SelfHeating.Outcome h) {
-        String s = " Self-heating is on: " + h.values().size() + " library value" + (h.values().size() == 1 ? "" : "s")
-                + " taken at the heated temperature (" + h.iterations() + " evaluations to settle).";
+        int n = h.values().size();
+        String s = n == 0 ? " Self-heating is on, but no layer takes a value from a library: nothing is shifted."
+                : " Self-heating is on: " + n + " library value" + (n == 1 ? "" : "s") + " taken at the heated"
+                + " temperature (" + h.iterations() + " evaluations to settle).";
         return h.warnings().isEmpty() ? s : s + " " + h.warnings().size() + " outside the library's range: "
                 + h.warnings().get(0);
     }

@@ -21,7 +21,8 @@ final class HelpTexts {
                     + " settings in the units beside them: modulation 9.8 MHz, repetition 76 MHz, radii in µm."
                     + " Frequency and delay lists take ranges: 1 kHz to 10 MHz, 30 log. Switching to another"
                     + " technique and back keeps each one's values. Enter the absorbed power to see the predicted"
-                    + " steady temperature rise.",
+                    + " steady temperature rise; tick self-heating to take the library values at the heated"
+                    + " temperature (the power is then kept in the case).",
             "",
             "3. Import — drop instrument files on the window, or File ▸ Import data…; a preview shows the columns"
                     + " read and the settings the file states (modulation, repetition, radii, powers), which the new"
