@@ -52,7 +52,7 @@ public final class BatchCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella batch MANIFEST.json|FOLDER --out DIR [--threads N]
+                usage: lamella batch MANIFEST.json|FOLDER --out DIR [--threads N] [--engine local|spark]
 
                 Fits every case file directly inside FOLDER (*.json, by name), or every case a manifest lists
                 (with optional per-case names and overrides; see README, "Many cases: batch"). Writes each
@@ -62,7 +62,8 @@ public final class BatchCommand implements Command {
                 and the rest go on. A second run into the same DIR skips every case whose result was made from
                 the same inputs, so an interrupted run resumes; a changed or failed case is fitted again.
                 Progress and the time left go to standard error. --threads: worker threads of each fit
-                (default: all cores). Exit status 0 when every case fitted, 1 when any failed, 2 for bad usage,
+                (default: all cores). --engine spark: the same batch as an Apache Spark application, one task
+                per case (see the README), started by the lamella script. Exit status 0 when every case fitted, 1 when any failed, 2 for bad usage,
                 a bad manifest or an output that would overwrite an input.
                 """;
     }
@@ -72,9 +73,19 @@ public final class BatchCommand implements Command {
         Options o;
         FitSettings settings;
         try {
-            o = Options.parse(args, "batch", List.of("--out", "--threads"));
+            o = Options.parse(args, "batch", List.of("--out", "--threads", "--engine"));
             if (!o.has("--out")) {
                 throw new IllegalArgumentException("lamella batch: --out DIR is needed (the results folder)");
+            }
+            String engine = o.has("--engine") ? o.value("--engine") : "local";
+            if (engine.equals("spark")) {
+                throw new IllegalArgumentException("lamella batch: --engine spark runs the batch as a Spark"
+                        + " application outside this runtime; start it with the lamella script (./lamella batch"
+                        + " MANIFEST.json --out DIR --engine spark), which builds and runs the Spark job");
+            }
+            if (!engine.equals("local")) {
+                throw new IllegalArgumentException("lamella batch: --engine expects local or spark, got '" + engine
+                        + "'");
             }
             settings = FitReportRun.settings(o);
         } catch (IllegalArgumentException e) {
@@ -111,7 +122,8 @@ public final class BatchCommand implements Command {
     }
 
     /** Refuses an output folder that is the folder of cases, or a result file that is one of the inputs. */
-    static String refusal(Path input, Path out, List<BatchManifest.Entry> entries, List<Path> runtimeInputs) {
+    public static String refusal(Path input, Path out, List<BatchManifest.Entry> entries,
+                                 List<Path> runtimeInputs) {
         try {
             if (Files.isDirectory(input) && Files.isDirectory(out) && Files.isSameFile(input, out)) {
                 return "lamella batch: --out " + out + " is the folder of cases itself; nothing was written (choose"

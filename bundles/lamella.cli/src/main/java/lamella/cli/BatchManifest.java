@@ -34,7 +34,7 @@ import lamella.api.json.StrictJson;
  * {@code .json}) names the result file and must be unique; {@code set} replaces inputs of the case by their parameter
  * paths before it is fitted. Every problem is an InputException at the manifest's line and JSON path.
  */
-final class BatchManifest {
+public final class BatchManifest {
 
     static final String VERSION_KEY = "batch_manifest";
     static final Set<String> TOP_KEYS = Set.of(VERSION_KEY, "description", "cases");
@@ -52,7 +52,7 @@ final class BatchManifest {
      * @param path      its JSON path in the manifest ({@code cases[2]}), or null
      * @param lines     the manifest's line of every JSON path
      */
-    record Entry(String name, Path file, Map<String, Double> overrides, Path manifest, String path,
+    public record Entry(String name, Path file, Map<String, Double> overrides, Path manifest, String path,
                  Map<String, Integer> lines) {
 
         /** A problem of this entry's key {@code sub} ({@code set.film.thickness_m}) at its manifest line. */
@@ -70,7 +70,7 @@ final class BatchManifest {
     }
 
     /** A folder's cases, or a manifest's. */
-    static List<Entry> read(Path input) throws InputException {
+    public static List<Entry> read(Path input) throws InputException {
         if (Files.isDirectory(input)) {
             return folder(input);
         }

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintStream;
+import java.io.Serializable;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -36,22 +37,26 @@ import lamella.api.fit.Progress;
  * that was killed resumes where it stopped; files appear only complete (written beside, then moved). A failing case
  * is recorded and the rest go on; a failed case is tried again by the next run.
  */
-final class BatchRun {
+public final class BatchRun {
 
     static final String RESULTS = "results";
-    static final String TABLE = "results.csv";
+    public static final String TABLE = "results.csv";
     static final String TABLE_HEADER = "case,parameter,value,sigma,unit,reduced_chi_square,status,message";
 
     /** What became of one case. */
-    enum Status { FITTED, DONE_BEFORE, FAILED }
+    public enum Status { FITTED, DONE_BEFORE, FAILED }
 
     /** One line of the table. */
-    record Row(String caseName, String parameter, double value, double sigma, String unit, double reducedChiSquare,
-               String status, String message) {
+    public record Row(String caseName, String parameter, double value, double sigma, String unit,
+                      double reducedChiSquare, String status, String message) implements Serializable {
+    }
+
+    /** One case done: what became of it, its rows of the table, and that in words for the progress line. */
+    public record Case(Status status, List<Row> rows, String said) implements Serializable {
     }
 
     /** The counts of a finished run. */
-    record Summary(int fitted, int doneBefore, int failed, double seconds) {
+    public record Summary(int fitted, int doneBefore, int failed, double seconds) {
     }
 
     private final CaseFormat format;
@@ -60,7 +65,7 @@ final class BatchRun {
     private final Path out;
     private final PrintStream err;
 
-    BatchRun(CaseFormat format, FitService fitter, FitSettings settings, Path out, PrintStream err) {
+    public BatchRun(CaseFormat format, FitService fitter, FitSettings settings, Path out, PrintStream err) {
         this.format = format;
         this.fitter = fitter;
         this.settings = settings;
@@ -85,10 +90,9 @@ final class BatchRun {
      * Runs every case. Throws CancellationException when interrupted (what is done stays done) and IOException when a
      * result cannot be written.
      */
-    Summary run(List<BatchManifest.Entry> entries) throws IOException {
+    public Summary run(List<BatchManifest.Entry> entries) throws IOException {
         long start = System.nanoTime();
-        clearPartials(out.resolve(RESULTS), ".");
-        clearPartials(out, "." + TABLE + ".");
+        clearPartials(out);
         List<List<Row>> rows = new ArrayList<>();
         int fitted = 0;
         int doneBefore = 0;
@@ -101,44 +105,18 @@ final class BatchRun {
             }
             BatchManifest.Entry e = entries.get(i);
             long t0 = System.nanoTime();
-            String fingerprint = fingerprint(e);
-            Path result = resultFile(out, e.name());
-            List<Row> previous = previous(result, e.name(), fingerprint);
-            String said;
-            if (previous != null) {
-                rows.add(previous);
-                doneBefore++;
-                said = "already done";
-            } else {
-                List<Row> mine;
-                try {
-                    CaseDocument doc = read(e);
-                    FitOutcome outcome = fitter.fit(doc, settings, Progress.NONE);
-                    ObjectNode tree = FitResultJson.tree(doc, outcome);
-                    ObjectNode record = tree.putObject("batch");
-                    record.put("name", e.name());
-                    record.put("fingerprint", fingerprint);
-                    ObjectNode set = record.putObject("set");
-                    e.overrides().forEach(set::put);
-                    AtomicText.write(result, FitResultJson.text(tree));
-                    mine = rows(e.name(), outcome);
-                    fitted++;
-                    said = "fitted";
-                } catch (InputException | ModelEvaluationException | IllegalArgumentException x) {
-                    mine = List.of(failure(e, x));
-                    failed++;
-                    said = "FAILED: " + mine.get(0).message();
-                } catch (CancellationException x) {
-                    throw x;
-                } catch (RuntimeException x) {
-                    mine = List.of(failure(e, x));
-                    failed++;
-                    said = "FAILED: " + mine.get(0).message();
-                }
-                rows.add(mine);
+            Case c = one(e, format, fitter, settings, out);
+            rows.add(c.rows());
+            switch (c.status()) {
+                case DONE_BEFORE -> doneBefore++;
+                case FITTED -> fitted++;
+                case FAILED -> failed++;
+            }
+            if (c.status() != Status.DONE_BEFORE) {
                 workSeconds += (System.nanoTime() - t0) * 1e-9;
                 worked++;
             }
+            String said = c.said();
             AtomicText.write(out.resolve(TABLE), table(rows));
             int remaining = entries.size() - i - 1;
             String left = remaining == 0 ? "" : worked == 0 ? "; time left not known yet"
@@ -147,6 +125,51 @@ final class BatchRun {
                     duration((System.nanoTime() - t0) * 1e-9), left);
         }
         return new Summary(fitted, doneBefore, failed, (System.nanoTime() - start) * 1e-9);
+    }
+
+    /**
+     * One case of a batch: its result read back when one made from the same inputs is there, else fitted and written
+     * (complete or not at all); a failure becomes the case's row. Depends on nothing but its arguments and the files,
+     * so any engine (this run's loop, a Spark task) gives the same result. Throws CancellationException when
+     * interrupted and IOException when the result cannot be written.
+     */
+    public static Case one(BatchManifest.Entry e, CaseFormat format, FitService fitter, FitSettings settings,
+                           Path out) throws IOException {
+        String fingerprint = fingerprint(e);
+        Path result = resultFile(out, e.name());
+        List<Row> previous = previous(result, e.name(), fingerprint);
+        if (previous != null) {
+            return new Case(Status.DONE_BEFORE, previous, "already done");
+        }
+        try {
+            CaseDocument doc = read(format, e);
+            FitOutcome outcome = fitter.fit(doc, settings, Progress.NONE);
+            ObjectNode tree = FitResultJson.tree(doc, outcome);
+            ObjectNode record = tree.putObject("batch");
+            record.put("name", e.name());
+            record.put("fingerprint", fingerprint);
+            ObjectNode set = record.putObject("set");
+            e.overrides().forEach(set::put);
+            AtomicText.write(result, FitResultJson.text(tree));
+            return new Case(Status.FITTED, rows(e.name(), outcome), "fitted");
+        } catch (InputException | ModelEvaluationException | IllegalArgumentException x) {
+            return failedCase(e, x);
+        } catch (CancellationException x) {
+            throw x;
+        } catch (RuntimeException x) {
+            return failedCase(e, x);
+        }
+    }
+
+    private static Case failedCase(BatchManifest.Entry e, Exception x) {
+        Row row = failure(e, x);
+        return new Case(Status.FAILED, List.of(row), "FAILED: " + row.message());
+    }
+
+    /** Removes what a killed run into {@code out} left of the files it was writing. */
+    public static void clearPartials(Path out) throws IOException {
+        clearPartials(out.resolve(RESULTS), ".");
+        clearPartials(out, "." + TABLE + ".");
     }
 
     /** Removes what a killed run left of the files it was writing (AtomicText's {@code .NAME.….part}). */
@@ -164,7 +187,7 @@ final class BatchRun {
         }
     }
 
-    private CaseDocument read(BatchManifest.Entry e) throws InputException {
+    private static CaseDocument read(CaseFormat format, BatchManifest.Entry e) throws InputException {
         CaseDocument doc = format.read(e.file());
         try {
             return CaseOverrides.apply(doc, e.overrides());
@@ -242,7 +265,7 @@ final class BatchRun {
         return HexFormat.of().formatHex(d.digest());
     }
 
-    static String table(List<List<Row>> rows) {
+    public static String table(List<List<Row>> rows) {
         StringBuilder sb = new StringBuilder(TABLE_HEADER).append('\n');
         for (List<Row> list : rows) {
             for (Row r : list) {
@@ -267,7 +290,7 @@ final class BatchRun {
         return '"' + s.replace("\"", "\"\"") + '"';
     }
 
-    static String duration(double seconds) {
+    public static String duration(double seconds) {
         if (seconds < 60) {
             return String.format(Locale.ROOT, "%.1f s", seconds);
         }

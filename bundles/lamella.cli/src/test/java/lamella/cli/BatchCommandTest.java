@@ -311,4 +311,20 @@ class BatchCommandTest {
         assertArrayEquals(before, Files.readAllBytes(caseInResults));
         assertFalse(Files.exists(dir.resolve("out/results.csv")));
     }
+
+    @Test
+    void theSparkEngineIsRefusedInsideTheRuntimeWithThePointerToTheScriptAndAnUnknownEngineIsBadUsage()
+            throws Exception {
+        Path in = threeCases();
+        Run spark = run(in.toString(), "--out", "out", "--engine", "spark");
+        assertEquals(2, spark.status());
+        assertTrue(spark.err().contains("with the lamella script"), spark.err());
+        Run other = run(in.toString(), "--out", "out", "--engine", "cluster");
+        assertEquals(2, other.status());
+        assertTrue(other.err().contains("--engine expects local or spark, got 'cluster'"), other.err());
+        assertFalse(Files.exists(dir.resolve("out")), "nothing written");
+        Run local = run(in.toString(), "--out", "out", "--engine", "local");
+        assertEquals(1, local.status(), local.err());
+        assertTrue(Files.isRegularFile(dir.resolve("out/results.csv")));
+    }
 }

@@ -92,6 +92,14 @@ public final class PlainLibraries {
         return libraries;
     }
 
+    /** The configured facility and user folders that are in effect, as {@link #configured} reads them. */
+    public static List<Path> configuredFolders(String facility, String user, Path base, Path home) {
+        List<Path> folders = new ArrayList<>();
+        folder(facility, base).ifPresent(folders::add);
+        userFolder(user, base, home).ifPresent(folders::add);
+        return folders;
+    }
+
     /** Lamella's own library bundle is the shipped tier; a lab's data bundle ranks above it. */
     static LibraryTier tierOf(String symbolicName) {
         return SHIPPED_BUNDLE.equals(symbolicName) ? LibraryTier.SHIPPED : LibraryTier.BUNDLE;

@@ -45,7 +45,7 @@ final class JobModels {
     }
 
     static JobModels of(JobSettings settings) {
-        return BY_SETTINGS.computeIfAbsent(settings.withFailTile(-1), s -> {
+        return BY_SETTINGS.computeIfAbsent(settings.withFailTask(-1), s -> {
             try {
                 return new JobModels(s);
             } catch (IOException e) {

@@ -19,13 +19,14 @@ import lamella.materials.PlainLibraries;
  * @param user       the user library folder setting, or null (the default folder if it exists)
  * @param base       the folder relative paths are the user's from
  * @param home       the user's home folder (for the default user library)
- * @param failTile   a tile whose first attempt fails on purpose (tests of Spark's retries), or −1
+ * @param failTask   the tile (map) or case (batch) whose first attempt fails on purpose (tests of Spark's
+ *                   retries), or −1
  */
-record JobSettings(String facility, String user, String base, String home, int failTile) implements Serializable {
+record JobSettings(String facility, String user, String base, String home, int failTask) implements Serializable {
 
     static final String CONF = "lamella.conf";
     static final String CWD = "lamella.cwd";
-    static final String FAIL_TILE = "lamella.spark.fail-first-attempt-of-tile";
+    static final String FAIL_TASK = "lamella.spark.fail-first-attempt-of-task";
 
     /** The settings of this JVM's system properties and the properties file they name. */
     static JobSettings fromSystem() throws IOException {
@@ -43,11 +44,11 @@ record JobSettings(String facility, String user, String base, String home, int f
                 p.getProperty(PlainLibraries.FACILITY_SETTING));
         String user = System.getProperty(PlainLibraries.USER_SETTING, p.getProperty(PlainLibraries.USER_SETTING));
         String base = System.getProperty(CWD, System.getProperty("user.dir"));
-        int failTile = Integer.parseInt(System.getProperty(FAIL_TILE, "-1"));
-        return new JobSettings(facility, user, base, System.getProperty("user.home"), failTile);
+        int failTask = Integer.parseInt(System.getProperty(FAIL_TASK, "-1"));
+        return new JobSettings(facility, user, base, System.getProperty("user.home"), failTask);
     }
 
-    JobSettings withFailTile(int tile) {
+    JobSettings withFailTask(int tile) {
         return new JobSettings(facility, user, base, home, tile);
     }
 

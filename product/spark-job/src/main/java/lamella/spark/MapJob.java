@@ -116,7 +116,7 @@ final class MapJob {
         }
         JavaSparkContext jsc = JavaSparkContext.fromSparkContext(spark.sparkContext());
         int slices = partitions > 0 ? partitions : Math.max(1, Math.min(todo.size(), 4 * jsc.defaultParallelism()));
-        Progress progress = new Progress(err, slices, positions.size() - countTodo(todo));
+        Progress progress = new Progress(err, slices, positions.size() - countTodo(todo), "map");
         spark.sparkContext().addSparkListener(progress);
         String file = caseFile.toString();
         String signal = fit.signal();
@@ -144,7 +144,7 @@ final class MapJob {
     static TileDone fitTile(TileTask task, String caseFile, String signal, double[] x, double reach,
                             MapJournal journal, JobSettings settings) throws Exception {
         TaskContext context = TaskContext.get();
-        if (task.index() == settings.failTile() && context != null && context.attemptNumber() == 0) {
+        if (task.index() == settings.failTask() && context != null && context.attemptNumber() == 0) {
             throw new IllegalStateException("fault injected into the first attempt of tile " + task.index());
         }
         CurveFit fit = JobModels.of(settings).curves(caseFile, signal);
@@ -172,12 +172,14 @@ final class MapJob {
         private final PrintStream err;
         private final int tasks;
         private final int readBack;
+        private final String job;
         private final long start = System.nanoTime();
         private final AtomicInteger done = new AtomicInteger();
         private volatile long last = start;
 
-        Progress(PrintStream err, int tasks, int readBack) {
+        Progress(PrintStream err, int tasks, int readBack, String job) {
             this.err = err;
+            this.job = job;
             this.tasks = tasks;
             this.readBack = readBack;
         }
@@ -196,7 +198,7 @@ final class MapJob {
             double seconds = (now - start) * 1e-9;
             String left = n < tasks ? String.format(Locale.ROOT, ", about %.0f s left", (tasks - n) * seconds / n)
                     : "";
-            err.printf(Locale.ROOT, "map: %d/%d partitions done%s%s%n", n, tasks,
+            err.printf(Locale.ROOT, "%s: %d/%d partitions done%s%s%n", job, n, tasks,
                     readBack > 0 ? " (" + readBack + " positions read back)" : "", left);
         }
     }

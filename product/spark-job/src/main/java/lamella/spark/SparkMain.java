@@ -11,7 +11,8 @@ import org.apache.spark.sql.SparkSession;
 
 /**
  * The Spark job's entry point, for {@code spark-submit} and for the {@code lamella} script's {@code --engine spark}:
- * {@code map CASE.json --out DIR [--master URL | --threads N] [--partitions N]}. The master is {@code --master}, else
+ * {@code map CASE.json --out DIR [--master URL | --threads N] [--partitions N]} and
+ * {@code batch MANIFEST.json|FOLDER --out DIR [--master URL | --threads N] [--partitions N]}. The master is {@code --master}, else
  * {@code local[N]} for {@code --threads N}, else the one spark-submit gives ({@code spark.master}), else
  * {@code local[*]}. Exit status as the runtime's commands: 0
  * done, 1 failed while working, 2 bad input or usage.
@@ -25,11 +26,12 @@ public final class SparkMain {
 
     static final String USAGE = """
             usage: lamella-spark-job map CASE.json --out DIR [--master URL | --threads N] [--partitions N]
-            The map command of Lamella as a Spark application (see the README, "On Apache Spark").
+                   lamella-spark-job batch MANIFEST.json|FOLDER --out DIR [--master URL | --threads N] [--partitions N]
+            The map or batch command of Lamella as a Spark application (see the README, "On Apache Spark").
             --master: a Spark master URL (default: the one spark-submit gives, else local[*]); --threads N:
             Spark in this process on N threads (local[N]);
-            --partitions: how many partitions the map's tiles are spread over (default: four per core of the
-            cluster, at most one per tile).""";
+            --partitions: how many partitions the map's tiles or the batch's cases are spread over (default:
+            four per core of the cluster, at most one per tile or case).""";
 
     private SparkMain() {
     }
@@ -40,8 +42,8 @@ public final class SparkMain {
 
     /** Runs one job and returns its exit status; starts and stops its own Spark session. */
     static int run(List<String> args, PrintStream stdout, PrintStream err) {
-        if (args.isEmpty() || !args.get(0).equals("map")) {
-            err.println("lamella spark: which job? (map)\n" + USAGE);
+        if (args.isEmpty() || !(args.get(0).equals("map") || args.get(0).equals("batch"))) {
+            err.println("lamella spark: which job? (map or batch)\n" + USAGE);
             return BAD_INPUT;
         }
         String job = args.get(0);
@@ -72,7 +74,8 @@ public final class SparkMain {
             return BAD_INPUT;
         }
         if (input == null) {
-            err.println("lamella " + job + ": which case file?\n" + USAGE);
+            err.println("lamella " + job + ": which " + (job.equals("map") ? "case file" : "manifest or folder")
+                    + "?\n" + USAGE);
             return BAD_INPUT;
         }
         if (!options.containsKey("--out")) {
@@ -120,7 +123,8 @@ public final class SparkMain {
         try {
             err.printf(java.util.Locale.ROOT, "lamella %s: Spark %s on %s, started in %.1f s%n", job,
                     spark.version(), spark.sparkContext().master(), startup);
-            return MapJob.run(spark, in, out, partitions, settings, stdout, err);
+            return job.equals("map") ? MapJob.run(spark, in, out, partitions, settings, stdout, err)
+                    : BatchJob.run(spark, in, out, partitions, settings, stdout, err);
         } finally {
             spark.stop();
         }

@@ -46,7 +46,7 @@ class MapJobTest {
 
     @AfterEach
     void clearFault() {
-        System.clearProperty(JobSettings.FAIL_TILE);
+        System.clearProperty(JobSettings.FAIL_TASK);
     }
 
     /** The demo case beside the first {@link #POSITIONS} positions of its map. */
@@ -162,7 +162,7 @@ class MapJobTest {
     void aTaskThatFailsItsFirstAttemptIsRetriedAndEveryPositionAppearsOnce() throws Exception {
         Path caseFile = demoCase();
         local(caseFile, dir.resolve("local"));
-        System.setProperty(JobSettings.FAIL_TILE, "1");
+        System.setProperty(JobSettings.FAIL_TASK, "1");
         // local[2,3]: two threads, a task may fail three times before the job does.
         Run r = spark("map", "case.json", "--out", "spark", "--master", "local[2,3]");
         assertEquals(0, r.status(), r.err());
@@ -187,7 +187,7 @@ class MapJobTest {
         }
         assertTrue(tiles.size() >= 3, "the test map needs several tiles, has " + tiles.size());
         // No retries (local[1]): the last tile fails, the job fails after the tiles before it are journaled.
-        System.setProperty(JobSettings.FAIL_TILE, Integer.toString(tiles.size() - 1));
+        System.setProperty(JobSettings.FAIL_TASK, Integer.toString(tiles.size() - 1));
         Run failed = spark("map", "case.json", "--out", "spark", "--master", "local[1]", "--partitions",
                 Integer.toString(tiles.size()));
         assertEquals(1, failed.status(), failed.err());
@@ -198,7 +198,7 @@ class MapJobTest {
             journaled = s.filter(p -> p.getFileName().toString().startsWith("tile-")).count();
         }
         assertEquals(tiles.size() - 1, journaled);
-        System.clearProperty(JobSettings.FAIL_TILE);
+        System.clearProperty(JobSettings.FAIL_TASK);
         Run resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
         assertEquals(0, resumed.status(), resumed.err());
         assertTrue(resumed.out().contains("read back"), resumed.out());
