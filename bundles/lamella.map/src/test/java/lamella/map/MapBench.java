@@ -17,6 +17,13 @@ public final class MapBench {
     private MapBench() {
     }
 
+    /** The benchmark's map data: a smooth field of film conductivity and a conductance rising along y, with noise. */
+    static String table(CaseDocument doc, int side) throws lamella.api.InputException {
+        return SyntheticMap.table(doc, SyntheticMap.grid(side, side, 2e-6, 0, 0),
+                (x, y) -> new double[] {1.0 + 0.5 * Math.sin(x / 4e-5) * Math.cos(y / 6e-5), 9e7 + 1e11 * y},
+                WaferMapDemo.FREQUENCIES_HZ, 0.15, 42, "# invented benchmark map\n");
+    }
+
     public static void main(String[] args) throws Exception {
         int side = args.length > 0 ? Integer.parseInt(args[0]) : 100;
         int[] threads = args.length > 1 ? java.util.Arrays.stream(args, 1, args.length).mapToInt(Integer::parseInt)
@@ -26,9 +33,7 @@ public final class MapBench {
                 Files.readString(Path.of("demo-data/wafer-map/case.json")));
         CaseDocument doc = SyntheticMap.read(caseFile);
         long t0 = System.nanoTime();
-        String table = SyntheticMap.table(doc, SyntheticMap.grid(side, side, 2e-6, 0, 0),
-                (x, y) -> new double[] {1.0 + 0.5 * Math.sin(x / 4e-5) * Math.cos(y / 6e-5), 9e7 + 1e11 * y},
-                WaferMapDemo.FREQUENCIES_HZ, 0.15, 42, "# invented benchmark map\n");
+        String table = table(doc, side);
         Files.writeString(tmp.resolve("map.csv"), table);
         System.out.printf(Locale.ROOT, "map of %d × %d positions, %d frequencies, made in %.1f s%n", side, side,
                 WaferMapDemo.FREQUENCIES_HZ.length, (System.nanoTime() - t0) * 1e-9);
