@@ -206,6 +206,47 @@ class MapJobTest {
     }
 
     @Test
+    void aJobKilledOutrightResumesAndEqualsOneRunInOneGo() throws Exception {
+        Path caseFile = demoCase();
+        local(caseFile, dir.resolve("local"));
+        // The job in a JVM of its own on one thread, killed (SIGKILL) once its first tile is journaled.
+        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
+                .toString()));
+        command.addAll(List.of(System.getProperty("lamella.test.spark-opens", "").split(" ")));
+        command.removeIf(String::isBlank);
+        command.addAll(List.of("-cp", System.getProperty("java.class.path"), "-D" + JobSettings.CWD + "=" + dir,
+                "lamella.spark.SparkMain", "map", "case.json", "--out", "spark", "--threads", "1", "--partitions",
+                "64"));
+        Process job = new ProcessBuilder(command).directory(dir.toFile()).redirectErrorStream(true)
+                .redirectOutput(dir.resolve("killed.log").toFile()).start();
+        Path journal = dir.resolve("spark").resolve(MapJournal.FOLDER);
+        long deadline = System.nanoTime() + 240_000_000_000L;
+        while (tiles(journal) == 0 && job.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(50);
+        }
+        assertTrue(job.isAlive(), "the job ended before it could be killed: " + Files.readString(
+                dir.resolve("killed.log")));
+        job.destroyForcibly().waitFor();
+        long kept = tiles(journal);
+        assertTrue(kept >= 1, "a tile journaled before the kill");
+        assertFalse(Files.exists(dir.resolve("spark/map.csv")), "no map from a killed run");
+        Run resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+        assertEquals(0, resumed.status(), resumed.err());
+        assertTrue(resumed.out().contains("read back"), resumed.out());
+        assertEquals(Files.readString(dir.resolve("local/map.csv")), Files.readString(dir.resolve("spark/map.csv")));
+    }
+
+    static long tiles(Path journal) throws IOException {
+        if (!Files.isDirectory(journal)) {
+            return 0;
+        }
+        try (Stream<Path> s = Files.list(journal)) {
+            return s.filter(p -> p.getFileName().toString().startsWith("tile-")
+                    && p.getFileName().toString().endsWith(".txt")).count();
+        }
+    }
+
+    @Test
     void parquetMapDataGiveTheSameMapAsTheirCsv() throws Exception {
         Path caseFile = demoCase();
         local(caseFile, dir.resolve("local"));
