@@ -62,6 +62,8 @@ public final class Project {
     public static final String WORKBENCH_KEY = "workbench";
 
     private static final String REMEMBERED = "remembered";
+    private static final String REMEMBERED_ROLES = "remembered_roles";
+    private static final List<String> ROLE_LISTS = List.of("free", "uncertain");
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private final CaseReader reader;
@@ -344,6 +346,8 @@ public final class Project {
      * Switches a geometry or measurement block (the case's, or dataset's own when dataset ≥ 0) to another type. The
      * values of the type left are remembered with the project; the new block takes the values it remembers for its
      * type, and then every value of the old block that the new type also reads (keys: the new type's parameters).
+     * The fit block's free and uncertain entries of keys the new type lacks go with the remembered values and come
+     * back with them.
      */
     public void switchType(String block, int dataset, String type, Collection<String> keys) {
         if (!block.equals("geometry") && !block.equals("measurement")) {
@@ -373,7 +377,93 @@ public final class Project {
                 }
             }
             holder.set(block, fresh);
+            keepRolesAside(d, block, dataset, oldType, type, keys);
         });
+    }
+
+    /**
+     * Fit entries (free or uncertain) of the type switched away from that the new type has no key for are kept
+     * under {@code workbench.remembered_roles.BLOCK.TYPE} with the values, so that the fit block never names a key
+     * the case lacks, and come back when that type is chosen again.
+     */
+    private static void keepRolesAside(ObjectNode d, String block, int dataset, String oldType, String type,
+            Collection<String> keys) {
+        if (oldType.equals(type)) {
+            return;
+        }
+        ObjectNode memory = objectAt(objectAt(objectAt(d, WORKBENCH_KEY), REMEMBERED_ROLES), block);
+        if (!oldType.isEmpty()) {
+            ArrayNode kept = memory.get(oldType) instanceof ArrayNode a ? a : memory.putArray(oldType);
+            dropEntriesOf(d, kept, block, dataset);
+            for (String list : ROLE_LISTS) {
+                if (!(d.path("fit").get(list) instanceof ArrayNode entries)) {
+                    continue;
+                }
+                for (int i = 0; i < entries.size(); i++) {
+                    JsonNode e = entries.get(i);
+                    if (addresses(d, e, block, dataset) && !keys.contains(e.path(block).asText())) {
+                        kept.add(JSON.createObjectNode().set(list, e.deepCopy()));
+                        entries.remove(i--);
+                    }
+                }
+            }
+            if (kept.isEmpty()) {
+                memory.remove(oldType);
+            }
+        }
+        if (memory.get(type) instanceof ArrayNode remembered) {
+            for (JsonNode r : remembered) {
+                String list = r.fieldNames().next();
+                JsonNode e = r.get(list);
+                if (addresses(d, e, block, dataset) && keys.contains(e.path(block).asText())
+                        && refOf(e).filter(ref -> roleIn(d, ref) == Role.FIXED).isPresent()) {
+                    fitArray(d, list).add(e.deepCopy());
+                }
+            }
+            dropEntriesOf(d, remembered, block, dataset);
+            if (remembered.isEmpty()) {
+                memory.remove(type);
+            }
+        }
+        if (memory.isEmpty()) {
+            ((ObjectNode) d.get(WORKBENCH_KEY).get(REMEMBERED_ROLES)).remove(block);
+        }
+        if (d.get(WORKBENCH_KEY).get(REMEMBERED_ROLES).isEmpty()) {
+            ((ObjectNode) d.get(WORKBENCH_KEY)).remove(REMEMBERED_ROLES);
+        }
+    }
+
+    private static void dropEntriesOf(ObjectNode d, ArrayNode remembered, String block, int dataset) {
+        for (int i = remembered.size() - 1; i >= 0; i--) {
+            JsonNode r = remembered.get(i);
+            if (addresses(d, r.get(r.fieldNames().next()), block, dataset)) {
+                remembered.remove(i);
+            }
+        }
+    }
+
+    /**
+     * Whether a fit entry names a key of the block being switched: a dataset's own block for its dataset's entries,
+     * the case's block for entries without a dataset and for those of datasets that have no block of their own.
+     */
+    private static boolean addresses(ObjectNode d, JsonNode entry, String block, int dataset) {
+        if (!entry.has(block)) {
+            return false;
+        }
+        int of = entry.path("dataset").asInt(-1);
+        if (dataset >= 0) {
+            return of == dataset;
+        }
+        return of < 0 || !d.path("fit").path("datasets").path(of).has(block);
+    }
+
+    private static Role roleIn(ObjectNode d, ParameterRef ref) {
+        for (String list : ROLE_LISTS) {
+            if (d.path("fit").get(list) instanceof ArrayNode a && find(a, ref) >= 0) {
+                return list.equals("free") ? Role.FREE : Role.UNCERTAIN;
+            }
+        }
+        return Role.FIXED;
     }
 
     private static String blockWords(String block) {

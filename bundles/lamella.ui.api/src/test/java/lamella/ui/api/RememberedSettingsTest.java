@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
 import java.util.List;
 import lamella.api.CaseDocument;
+import lamella.api.ParameterRef;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -57,6 +58,48 @@ class RememberedSettingsTest {
         assertEquals(5e-6, g.path("probe_radius_m").asDouble(), "the probe radius last set wins");
         p.switchType("geometry", -1, "ring", RING);
         assertEquals(2e-5, p.tree().path("geometry").path("ring_radius_m").asDouble());
+    }
+
+    @Test
+    void theFitRolesOfKeysTheNewTypeLacksGoAsideAndComeBack() throws Exception {
+        Project p = Project.open(ProjectTest.DEMO, ProjectTest.READER);
+        ParameterRef pump = ParameterRef.geometry("pump_radius_m");
+        ParameterRef probe = ParameterRef.geometry("probe_radius_m");
+        ParameterRef fdtrPump = pump.inDataset(2);
+        assertEquals(Project.Role.UNCERTAIN, p.role(pump));
+        p.switchType("geometry", -1, "ring", RING);
+        assertEquals(Project.Role.FIXED, p.role(pump), "the ring has no pump radius to be uncertain");
+        assertEquals(Project.Role.UNCERTAIN, p.role(probe), "the probe radius is read by both and keeps its role");
+        assertEquals(Project.Role.UNCERTAIN, p.role(fdtrPump), "dataset 2's own gaussian geometry is not switched");
+        assertTrue(p.problem().isEmpty(), p.problem().map(Throwable::getMessage).orElse(""));
+        ParameterRef ring = ParameterRef.geometry("ring_radius_m");
+        p.edit("ring radius", d -> d.with("geometry").put("ring_radius_m", 2e-5));
+        p.setFree(ring, Double.NaN, Double.NaN);
+
+        p.switchType("geometry", -1, "gaussian", GAUSSIAN);
+        assertEquals(Project.Role.UNCERTAIN, p.role(pump));
+        assertEquals(0.04, p.relativeSigma(pump), 1e-15, "its σ came back with it");
+        assertEquals(Project.Role.FIXED, p.role(ring));
+        p.switchType("geometry", -1, "ring", RING);
+        assertEquals(Project.Role.FREE, p.role(ring), "the ring's own free radius came back");
+        assertEquals(Project.Role.FIXED, p.role(pump));
+        p.undo();
+        p.undo();
+        assertEquals(Project.Role.FREE, p.role(ring), "undo takes a switch back with its roles");
+        assertEquals(Project.Role.FIXED, p.role(pump));
+    }
+
+    @Test
+    void aDatasetsOwnBlockTakesOnlyItsOwnRolesAside() throws Exception {
+        Project p = Project.open(ProjectTest.DEMO, ProjectTest.READER);
+        ParameterRef pump = ParameterRef.geometry("pump_radius_m");
+        p.switchType("geometry", 2, "ring", RING);
+        assertEquals(Project.Role.FIXED, p.role(pump.inDataset(2)));
+        assertEquals(Project.Role.UNCERTAIN, p.role(pump), "the case's own pump radius stays uncertain");
+        p.switchType("geometry", 2, "gaussian", GAUSSIAN);
+        assertEquals(Project.Role.UNCERTAIN, p.role(pump.inDataset(2)));
+        assertFalse(p.tree().path(Project.WORKBENCH_KEY).has("remembered_roles"), "nothing left aside: "
+                + p.tree().path(Project.WORKBENCH_KEY));
     }
 
     @Test
