@@ -112,6 +112,7 @@ final class FitView implements PanelView {
         status = new StatusLine(root, 1);
         body = new Composite(root, SWT.NONE);
         body.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        Tables.keepLeastHeight(body);
         body.setLayout(bodyLayout);
         sash = new SashForm(body, SWT.HORIZONTAL);
         tabs = new TabFolder(body, SWT.TOP);

@@ -50,7 +50,10 @@ final class MaterialsView implements PanelView {
         count.setLayoutData(new GridData(SWT.RIGHT, SWT.CENTER, false, false));
         // Entries above, details below: both tables get the panel's full width, so source and library stay in view.
         SashForm sash = new SashForm(root, SWT.VERTICAL);
-        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 3, 1));
+        GridData sgd = new GridData(SWT.FILL, SWT.FILL, true, true, 3, 1);
+        // Room for both tables, the entries' above the details' (a title, a wrapped source line, the properties).
+        sgd.minimumHeight = 3 * Tables.LEAST_HEIGHT;
+        sash.setLayoutData(sgd);
         entries = Tables.create(sash);
         entries.addListener(SWT.Selection, e -> details());
         Composite right = new Composite(sash, SWT.NONE);
@@ -64,6 +67,7 @@ final class MaterialsView implements PanelView {
         provenance.setLayoutData(pgd);
         properties = Tables.create(right);
         properties.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        Tables.keepLeastHeight(properties);
         sash.setWeights(new int[] {45, 55});
         filter();
     }

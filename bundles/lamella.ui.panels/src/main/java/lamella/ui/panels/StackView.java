@@ -80,6 +80,7 @@ final class StackView implements PanelView {
         GridData tgd = new GridData(SWT.FILL, SWT.FILL, true, true);
         tgd.heightHint = 120;
         table.setLayoutData(tgd);
+        Tables.keepLeastHeight(table);
         column("layer", 80);
         column("material", 90);
         for (int c = 0; c < LayerColumn.VALUES.size(); c++) {

@@ -51,6 +51,20 @@ final class Tables {
         s.setSize(START_WIDTH, START_HEIGHT);
     }
 
+    /** The least height of a scrolled part laid out in a grid: a header, two rows and a scroll bar. */
+    static final int LEAST_HEIGHT = 96;
+
+    /**
+     * Keeps a table or scrolled part laid out in a grid at least {@link #LEAST_HEIGHT} tall: in a panel made short,
+     * what lies below it is cut off at the panel's edge instead of the part being squeezed, which GTK reports as a
+     * scroll bar of negative size.
+     */
+    static void keepLeastHeight(org.eclipse.swt.widgets.Control c) {
+        if (c.getLayoutData() instanceof org.eclipse.swt.layout.GridData gd) {
+            gd.minimumHeight = Math.max(gd.minimumHeight, LEAST_HEIGHT);
+        }
+    }
+
     /** Replaces columns and rows. */
     static void fill(Table t, String[] headings, java.util.List<String[]> rows) {
         t.setRedraw(false);

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.stream.Stream;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.CTabFolder;
 import org.eclipse.swt.custom.CTabFolder2Adapter;
@@ -18,6 +19,7 @@ import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Sash;
 
 /**
  * Shows an {@link Arrangement} as widgets — splits as sash forms, areas as tab folders — and rebuilds them from the
@@ -95,6 +97,50 @@ final class ArrangementView {
                 }
             }
         }
+    }
+
+    /**
+     * Moves the sash beside the panel's area (or beside the row or column holding it) so that it has the given
+     * width or height, as a drag of that sash would; answers the pixels it had, or -1 when no split of that
+     * direction holds the area.
+     */
+    int resizeArea(String panelId, boolean wide, int pixels) {
+        for (CTabFolder folder : folders.keySet()) {
+            if (Stream.of(folder.getItems()).noneMatch(i -> panelId.equals(i.getData(PANEL)))) {
+                continue;
+            }
+            Control part = folder;
+            Composite p = folder.getParent();
+            while (p != null && !(p instanceof SashForm s && ((s.getStyle() & SWT.HORIZONTAL) != 0) == wide)) {
+                part = p;
+                p = p.getParent();
+            }
+            if (p == null) {
+                return -1;
+            }
+            Control holding = part;
+            List<Control> parts = Stream.of(p.getChildren()).filter(c -> !(c instanceof Sash)).toList();
+            int total = parts.stream().mapToInt(c -> extent(c, wide)).sum();
+            int had = extent(holding, wide);
+            int[] weights = new int[parts.size()];
+            for (int k = 0; k < weights.length; k++) {
+                weights[k] = parts.get(k) == holding ? pixels : Math.max(1,
+                        (int) Math.round((double) extent(parts.get(k), wide) * (total - pixels) / Math.max(1, total - had)));
+            }
+            for (Control c : p.getChildren()) {
+                if (c instanceof Sash bar) {
+                    bar.setData(USER_DRAG, Boolean.TRUE);
+                }
+            }
+            ((SashForm) p).setWeights(weights);
+            p.layout(true, true);
+            return had;
+        }
+        return -1;
+    }
+
+    private static int extent(Control c, boolean wide) {
+        return wide ? c.getSize().x : c.getSize().y;
     }
 
     /** The area under a point of the display and the zone of it the point is in, for a tab being dragged. */
@@ -221,8 +267,7 @@ final class ArrangementView {
             CTabItem item = new CTabItem(folder, SWT.CLOSE);
             item.setText(shelf.title(id));
             item.setData(PANEL, id);
-            control.get().setParent(folder);
-            item.setControl(control.get());
+            item.setControl(PanelHolder.around(folder, control.get()));
             if (id.equals(area.front)) {
                 folder.setSelection(item);
             }

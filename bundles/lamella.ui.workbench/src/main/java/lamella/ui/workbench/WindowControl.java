@@ -30,7 +30,9 @@ import org.eclipse.swt.widgets.Text;
  * Drives the open window from another thread with words only (a JDK type crosses the bundle boundary): each
  * command runs on the UI thread, as the user's gesture would, and answers with text. Commands:
  * {@code panels}, {@code placements}, {@code move ID TARGET_ID TABS|LEFT|RIGHT|TOP|BOTTOM}, {@code view-menu},
- * {@code toggle ID}, {@code front ID}, {@code enlarge ID}, {@code safety}, {@code help ITEM}, {@code save-as PATH}, {@code status},
+ * {@code toggle ID}, {@code front ID}, {@code enlarge ID},
+ * {@code area-size ID wide|high PIXELS} (the sash beside its area dragged to give it that width or height; answers
+ * whether the panel is shown and its tables' heights), {@code safety}, {@code help ITEM}, {@code save-as PATH}, {@code status},
  * {@code title}, {@code size W H}, {@code screenshot PATH}, {@code messages}, {@code first-paint-ms},
  * {@code open PATH} (as File ▸ Recent with that file), {@code import PATH} (as File ▸ Import data… with that file chosen, without waiting for its preview),
  * {@code close}; the Edit menu: {@code edit-menu}, {@code undo}, {@code redo}; keys pressed as on the keyboard:
@@ -89,6 +91,8 @@ final class WindowControl implements Function<String, String> {
             case "front":
                 window.show(w[1]);
                 return "ok";
+            case "area-size":
+                return areaSize(w[1], w[2].equals("wide"), Integer.parseInt(w[3]));
             case "enlarge":
                 window.layout().toggleEnlarged(w[1]);
                 return window.layout().enlarged() ? "enlarged" : "restored";
@@ -268,6 +272,25 @@ final class WindowControl implements Function<String, String> {
         t.setSelection(row);
         t.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
         return "selected " + t.getItem(row).getText(0);
+    }
+
+    /** Drags the sash beside a panel's area to give it this width or height; answers what it had and what it has. */
+    private String areaSize(String id, boolean wide, int pixels) {
+        Control panel = window.shelf().control(id)
+                .orElseThrow(() -> new IllegalArgumentException("no panel '" + id + "'"));
+        int had = window.layout().resizeArea(id, wide, pixels);
+        if (had < 0) {
+            throw new IllegalArgumentException("no " + (wide ? "side-by-side" : "stacked") + " split holds '" + id + "'");
+        }
+        settle(SETTLE_MS);
+        org.eclipse.swt.graphics.Point room = panel.getParent().getSize();
+        if (!panel.getVisible()) {
+            return "had " + had + "; room " + room.x + "x" + room.y + "; panel hidden";
+        }
+        String tables = WidgetFinder.visible((org.eclipse.swt.widgets.Composite) panel).stream()
+                .filter(c -> c instanceof Table).map(c -> String.valueOf(c.getSize().y))
+                .collect(Collectors.joining(","));
+        return "had " + had + "; room " + room.x + "x" + room.y + "; panel shown; table heights " + tables;
     }
 
     private String choose(List<String> args) {
