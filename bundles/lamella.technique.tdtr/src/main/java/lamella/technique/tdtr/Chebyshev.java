@@ -94,9 +94,23 @@ final class Chebyshev {
                 return c;
             }
         }
-        throw new ModelEvaluationException("the high-frequency response could not be interpolated to " + tol
-                + " with " + maxDegree + " Chebyshev nodes; it is not smooth between " + Math.exp(a) + " and "
-                + Math.exp(b) + " Hz");
+        throw new ModelEvaluationException("the high-frequency response could not be interpolated to a relative "
+                + String.format(java.util.Locale.ROOT, "%.0e", tol) + " with " + maxDegree
+                + " Chebyshev nodes; it is not smooth between " + frequency(Math.exp(a)) + " and "
+                + frequency(Math.exp(b)));
+    }
+
+    /** A frequency in words for a message: three significant digits in Hz, kHz, MHz, GHz or THz. */
+    static String frequency(double hz) {
+        String[] units = {"Hz", "kHz", "MHz", "GHz", "THz"};
+        int k = 0;
+        double v = hz;
+        while (k < units.length - 1 && Math.abs(v) >= 999.5) {
+            v /= 1000;
+            k++;
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString()
+                + " " + units[k];
     }
 
     private static void g(FrequencyResponse h, double s, double[] out) {

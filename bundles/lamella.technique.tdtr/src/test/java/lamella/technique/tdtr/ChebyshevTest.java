@@ -1,16 +1,44 @@
 package lamella.technique.tdtr;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.List;
 import lamella.api.BottomBoundary;
 import lamella.api.FrequencyResponse;
 import lamella.api.Layer;
+import lamella.api.ModelEvaluationException;
 import lamella.api.Stack;
 import lamella.engine.LayeredStack;
 import org.junit.jupiter.api.Test;
 
 class ChebyshevTest {
+
+    /**
+     * A response that is not smooth (alternating sign from one evaluation to the next) is refused in words, its
+     * band in the trade's units (common practice, no source).
+     */
+    @Test
+    void aResponseThatIsNotSmoothIsRefusedWithItsBandInWords() {
+        boolean[] flip = {false};
+        FrequencyResponse rough = (f, out) -> {
+            flip[0] = !flip[0];
+            out[0] = flip[0] ? 1 : -1;
+            out[1] = 0;
+        };
+        ModelEvaluationException e = assertThrows(ModelEvaluationException.class,
+                () -> Chebyshev.fit(rough, Math.log(8.262e8), Math.log(5.42e11), 48, 768, 1e-9));
+        assertEquals("the high-frequency response could not be interpolated to a relative 1e-09 with 768 Chebyshev"
+                + " nodes; it is not smooth between 826 MHz and 542 GHz", e.getMessage());
+    }
+
+    @Test
+    void frequenciesInWordsTakeTheirUnit() {
+        assertEquals("950 Hz", Chebyshev.frequency(950));
+        assertEquals("1 kHz", Chebyshev.frequency(999.7));
+        assertEquals("9.8 MHz", Chebyshev.frequency(9.8e6));
+        assertEquals("1.2 THz", Chebyshev.frequency(1.2e12));
+    }
 
     /**
      * The many-point recurrence is the one-point recurrence run side by side: on the one-dimensional response of a
