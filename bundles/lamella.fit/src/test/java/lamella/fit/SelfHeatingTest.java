@@ -227,4 +227,33 @@ class SelfHeatingTest {
         assertEquals(5e7, g.value(), 3 * g.sigma(), "conductance " + g);
         assertTrue(g.sigma() < 0.05 * 5e7, "the data pin it: " + g);
     }
+
+    @Test
+    void selfHeatingNeedsAPerWattGeometryASteadyStateAndAPowerOfZeroOrMore() throws Exception {
+        CaseFileReader r = new CaseFileReader();
+        r.addLibrary(new Library(LIBRARY, List.of(LINEAR), List.of()));
+        String layers = "\"stack\": {\"layers\": [{\"name\": \"cap\", \"thickness_m\": 1e-7,"
+                + " \"k_through_w_mk\": 100, \"heat_capacity_j_m3k\": 2.4e6}, {\"name\": \"bulk\","
+                + " \"material\": \"linear-glass\"%s}]%s},";
+        Path line = Files.writeString(dir.resolve("line.json"), "{\"self_heating\": {\"absorbed_power_w\": 1e-3},"
+                + layers.formatted("", "") + "\"geometry\": {\"type\": \"line\", \"half_width_m\": 5e-6},"
+                + " \"measurement\": {\"type\": \"3omega\", \"drive_frequencies_hz\": [100, 1000]}}");
+        InputException perLength = assertThrows(InputException.class, () -> simulation(r.read(line)));
+        assertEquals("self_heating.absorbed_power_w", perLength.path());
+        assertTrue(perLength.getMessage().contains("per unit length"), perLength.getMessage());
+        Path insulated = Files.writeString(dir.resolve("insulated.json"), "{\"self_heating\":"
+                + " {\"absorbed_power_w\": 1e-3}," + layers.formatted(", \"thickness_m\": 1e-3",
+                ", \"bottom\": \"adiabatic\"") + "\"geometry\": {\"type\": \"gaussian\", \"pump_radius_m\": 5e-6,"
+                + " \"probe_radius_m\": 5e-6}, \"measurement\": {\"type\": \"fdtr\", \"frequencies_hz\": [1e5]}}");
+        InputException noSink = assertThrows(InputException.class, () -> simulation(r.read(insulated)));
+        assertTrue(noSink.getMessage().contains("no heat leaves this stack"), noSink.getMessage());
+        Path negative = Files.writeString(dir.resolve("negative.json"), "{\"self_heating\":"
+                + " {\"absorbed_power_w\": -1e-3}," + layers.formatted("", "") + "\"geometry\": {\"type\":"
+                + " \"gaussian\", \"pump_radius_m\": 5e-6, \"probe_radius_m\": 5e-6}, \"measurement\":"
+                + " {\"type\": \"sstr\"}}");
+        InputException below = assertThrows(InputException.class, () -> r.read(negative));
+        assertEquals("self_heating.absorbed_power_w", below.path());
+        assertTrue(below.getMessage().contains("negative.json:1:") && below.getMessage().contains("-0.001"),
+                below.getMessage());
+    }
 }
