@@ -6,6 +6,7 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.regex.Pattern;
 import lamella.api.ParameterSpec;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
@@ -42,8 +43,20 @@ final class QuantityField {
     private final List<DisplayUnit> choices;
     private DisplayUnit unit;
     private JsonNode shown;
+    /** An SI unit named in a key's description ("… in m", "… in Hz,"). */
+    private static final Pattern SI_UNIT_PHRASE = Pattern.compile(
+            " in (m|s|Hz|W|K|A|V|ohm|Ω|W/\\(m K\\)|W/\\(m² K\\)|J/\\(m³ K\\))(?=$|[ ,;:)])");
+
     private Object visit = new Object();
     private boolean showing;
+
+    /**
+     * A key's description without the SI unit it names ("the ring's radius in m" → "the ring's radius"): the field
+     * shows and reads the unit chosen beside it, so the file's unit would mislead there.
+     */
+    static String shownUnitless(String description) {
+        return SI_UNIT_PHRASE.matcher(description).replaceAll("");
+    }
 
     QuantityField(Composite parent, ParameterSpec spec, String memory, Commit commit, StatusLine problem) {
         this.spec = spec;
@@ -59,8 +72,8 @@ final class QuantityField {
         GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
         gd.widthHint = list() ? 220 : 120;
         text.setLayoutData(gd);
-        text.setToolTipText(spec.description() + (list() ? "; a list such as 1, 10, 100 kHz or a range such as"
-                + " 1 kHz to 10 MHz, 30 log" : "; a number in the unit beside it, or with its own unit"));
+        text.setToolTipText(shownUnitless(spec.description()) + (list() ? "; a list such as 1, 10, 100 kHz or a range"
+                + " such as 1 kHz to 10 MHz, 30 log" : "; a number in the unit beside it, or with its own unit"));
         units = new Combo(parent, SWT.READ_ONLY);
         units.setItems(choices.stream().map(DisplayUnit::unit).toArray(String[]::new));
         units.select(Math.max(0, choices.indexOf(unit)));
