@@ -18,8 +18,17 @@ import java.util.Optional;
  */
 public record PhysicalRange(String quantity, String unit, double min, double max) {
 
-    /** Suffixes, longest first so that {@code _w_m2k} is not taken for {@code _k}. */
+    /**
+     * Suffixes, a longer one before any it ends in: {@code _w_m2k} is not taken for {@code _k}, {@code _m2k_w} not
+     * for {@code _w}, {@code _ohm_per_k} not for {@code _k}.
+     */
     private static final List<Suffix> SUFFIXES = List.of(
+            new Suffix("_m2k_w", new PhysicalRange("a thermal boundary resistance", "m² K/W", 1e-13, 1e-3)),
+            new Suffix("_ohm_per_k", new PhysicalRange("a temperature coefficient of resistance", "Ω/K", 1e-9,
+                    1e6)),
+            new Suffix("_ohm", new PhysicalRange("an electrical resistance", "Ω", 1e-6, 1e9)),
+            new Suffix("_v", new PhysicalRange("a voltage", "V", 1e-15, 1e3)),
+            new Suffix("_a", new PhysicalRange("an electrical current", "A", 1e-12, 10.0)),
             new Suffix("_w_mk", new PhysicalRange("a thermal conductivity", "W/(m K)", 1e-4, 1e4)),
             new Suffix("_w_m2k", new PhysicalRange("a thermal boundary conductance", "W/(m² K)", 1e3, 1e13)),
             new Suffix("_j_m3k", new PhysicalRange("a volumetric heat capacity", "J/(m³ K)", 1e2, 1e8)),

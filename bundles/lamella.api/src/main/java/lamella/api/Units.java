@@ -19,7 +19,12 @@ public final class Units {
             Map.entry("_deg", "°"),
             Map.entry("_w", "W"),
             Map.entry("_k_per_w", "K/W"),
-            Map.entry("_k_m_per_w", "K m/W"));
+            Map.entry("_k_m_per_w", "K m/W"),
+            Map.entry("_m2k_w", "m² K/W"),
+            Map.entry("_v", "V"),
+            Map.entry("_a", "A"),
+            Map.entry("_ohm", "Ω"),
+            Map.entry("_ohm_per_k", "Ω/K"));
 
     private Units() {
     }

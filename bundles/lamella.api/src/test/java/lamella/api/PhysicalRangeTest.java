@@ -24,7 +24,9 @@ class PhysicalRangeTest {
         "conductance_below_w_m2k, a thermal boundary conductance", "heat_capacity_j_m3k, a volumetric heat capacity",
         "modulation_hz, a frequency", "frequencies_hz, a frequency", "temperature_k, a temperature",
         "pump_power_w, a power", "delays_s, a time", "thickness_m, a length", "pump_radius_m, a length",
-        "ring_radius_m, a length"})
+        "ring_radius_m, a length", "heater_boundary_resistance_m2k_w, a thermal boundary resistance",
+        "dr_dt_ohm_per_k, a temperature coefficient of resistance", "heater_resistance_ohm, an electrical resistance",
+        "drive_voltage_v, a voltage", "v3_in_phase_v, a voltage", "drive_current_a, an electrical current"})
     void theUnitAKeyEndsInNamesItsQuantity(String key, String quantity) {
         assertEquals(quantity, PhysicalRange.forKey(key).orElseThrow().quantity());
     }
@@ -38,7 +40,8 @@ class PhysicalRangeTest {
     @Test
     void extremesAreRefusedAtTheirPathAndTypicalValuesPass() {
         for (String key : List.of("k_through_w_mk", "thickness_m", "pump_radius_m", "heat_capacity_j_m3k",
-                "conductance_below_w_m2k", "modulation_hz")) {
+                "conductance_below_w_m2k", "modulation_hz", "heater_boundary_resistance_m2k_w", "dr_dt_ohm_per_k",
+                "heater_resistance_ohm", "drive_voltage_v", "drive_current_a")) {
             for (double extreme : new double[] {1e308, 1e-308, -1e308, Double.MIN_VALUE}) {
                 InputException e = assertThrows(InputException.class,
                         () -> PhysicalRange.checkKey(key, extreme, "stack.layers[0]." + key));
@@ -53,6 +56,23 @@ class PhysicalRangeTest {
                 "modulation_hz", 1e7, "repetition_hz", 8e7, "delays_s", 4e-9, "temperature_k", 300.0,
                 "pump_power_w", 0.02);
         typical.forEach((k, v) -> assertTrue(PhysicalRange.forKey(k).orElseThrow().admits(v), k));
+        // A 3ω heater (common practice, no source): 1e-8 m² K/W to the sample, 20 Ω with 0.05 Ω/K, driven by
+        // 10 mA or 0.2 V, a third-harmonic voltage of 10 µV.
+        Map<String, Double> heater = Map.of("heater_boundary_resistance_m2k_w", 1e-8, "heater_resistance_ohm", 20.0,
+                "dr_dt_ohm_per_k", 0.05, "drive_current_a", 0.01, "drive_voltage_v", 0.2, "v3_in_phase_v", 1e-5);
+        heater.forEach((k, v) -> assertTrue(PhysicalRange.forKey(k).orElseThrow().admits(v), k));
+    }
+
+    /** A suffix is not read as the shorter one it ends in: m² K/W is no power, Ω/K no temperature. */
+    @Test
+    void aLongerSuffixWinsOverTheOneItEndsIn() {
+        assertEquals("m² K/W", PhysicalRange.forKey("heater_boundary_resistance_m2k_w").orElseThrow().unit());
+        assertEquals("Ω/K", PhysicalRange.forKey("dr_dt_ohm_per_k").orElseThrow().unit());
+        assertEquals("m² K/W", Units.ofKey("heater_boundary_resistance_m2k_w"));
+        assertEquals("Ω/K", Units.ofKey("dr_dt_ohm_per_k"));
+        assertEquals("V", Units.ofKey("v3_amplitude_v"));
+        assertEquals("A", Units.ofKey("drive_current_a"));
+        assertEquals("Ω", Units.ofKey("heater_resistance_ohm"));
     }
 
     @Test

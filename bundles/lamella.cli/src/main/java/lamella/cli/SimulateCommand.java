@@ -79,9 +79,10 @@ public final class SimulateCommand implements Command {
                 standard output. Bad input is reported with the file, line and JSON path; exit status 2.
                 --explain also writes to standard error every layer value used and where it came from: the case
                 file (with its line), a material library (entry, version, source, temperature) or a default;
-                with a self_heating block, also the steady rise and the temperature every library value was
-                taken at. A library value whose temperature under self-heating leaves its entry's range is
-                warned about on standard error, with or without --explain.
+                every number of the geometry and measurement blocks with its unit and line; and with a
+                self_heating block, also the steady rise and the temperature every library value was taken at.
+                A library value whose temperature under self-heating leaves its entry's range is warned about on
+                standard error, with or without --explain.
                 """;
     }
 

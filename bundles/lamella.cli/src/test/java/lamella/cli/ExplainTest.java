@@ -95,6 +95,8 @@ class ExplainTest {
         assertTrue(err.matches("(?s).*\\n  film +heat_capacity_j_m3k +1600000 +J/\\(m³ K\\) +explicit in case file"
                 + " \\(line 3\\)\\n.*"), err);
         assertTrue(err.matches("(?s).*\\n  film +thickness_m +∞ +m +default: semi-infinite.*"), err);
+        assertTrue(err.matches("(?s).*\\n  geometry +pump_radius_m +0\\.000005 +m +explicit in case file"
+                + " \\(line 5\\)\\n.*"), err);
     }
 
     @Test

@@ -33,6 +33,7 @@ import lamella.technique.fdtr.FrequencyDomain;
 import lamella.technique.sstr.SteadyState;
 import lamella.technique.tdtr.TimeDomain;
 import lamella.technique.threeomega.ThreeOmega;
+import lamella.technique.threeomega.ThreeOmegaVoltage;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
@@ -55,7 +56,8 @@ class SimulateCommandTest {
             "fdtr", "frequency_hz,re_k_per_w,im_k_per_w,amplitude_k_per_w,phase_deg",
             "tdtr", "delay_s,in_phase,out_of_phase,ratio,phase_deg",
             "sstr", "k_per_w",
-            "3omega", "frequency_hz,re_k_m_per_w,im_k_m_per_w,amplitude_k_m_per_w,phase_deg");
+            "3omega", "frequency_hz,re_k_m_per_w,im_k_m_per_w,amplitude_k_m_per_w,phase_deg",
+            "3omega-voltage", "frequency_hz,v3_in_phase_v,v3_out_of_phase_v,v3_amplitude_v,phase_deg");
 
     static final String STACK = """
               "stack": {
@@ -94,6 +96,7 @@ class SimulateCommandTest {
         command.addTechnique(Registrations.shipped("lamella.technique.tdtr"), new TimeDomain());
         command.addTechnique(Registrations.shipped("lamella.technique.sstr"), new SteadyState());
         command.addTechnique(Registrations.shipped("lamella.technique.threeomega"), new ThreeOmega());
+        command.addTechnique(Registrations.shipped("lamella.technique.threeomega"), new ThreeOmegaVoltage());
     }
 
     /** What Declarative Services does for the static references. */
@@ -178,7 +181,7 @@ class SimulateCommandTest {
         Object xs = switch (type) {
             case "fdtr" -> doc.measurement().get("frequencies_hz");
             case "tdtr" -> doc.measurement().get("delays_s");
-            case "3omega" -> doc.measurement().get("drive_frequencies_hz");
+            case "3omega", "3omega-voltage" -> doc.measurement().get("drive_frequencies_hz");
             default -> List.of();
         };
 
@@ -327,7 +330,7 @@ class SimulateCommandTest {
         void unknownTechniqueType() throws Exception {
             String json = caseOf(GAUSSIAN, "{\"type\": \"fdrt\", \"frequencies_hz\": [1e3]}");
             bad(json, "measurement.type", "\"fdrt\"", "unknown technique 'fdrt'",
-                    "live techniques: 3omega, fdtr, sstr, tdtr");
+                    "live techniques: 3omega, 3omega-voltage, fdtr, sstr, tdtr");
         }
 
         @Test

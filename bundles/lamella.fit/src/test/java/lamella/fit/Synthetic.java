@@ -21,6 +21,7 @@ import lamella.technique.fdtr.FrequencyDomain;
 import lamella.technique.sstr.SteadyState;
 import lamella.technique.tdtr.TimeDomain;
 import lamella.technique.threeomega.ThreeOmega;
+import lamella.technique.threeomega.ThreeOmegaVoltage;
 
 /**
  * Test fixtures: the real services, and synthetic data made by the model itself with seeded Gaussian noise. The
@@ -31,7 +32,7 @@ final class Synthetic {
 
     static final List<HeatingGeometry> GEOMETRIES = List.of(new GaussianBeams(), new LineHeater(), new PointSource());
     static final List<Technique> TECHNIQUES = List.of(new FrequencyDomain(), new TimeDomain(), new SteadyState(),
-            new ThreeOmega());
+            new ThreeOmega(), new ThreeOmegaVoltage());
     static final ModelCatalog CATALOG = new ModelCatalog(GEOMETRIES, TECHNIQUES, new Engine());
 
     static final String STACK = """

@@ -17,7 +17,10 @@ final class ColumnWords {
             "phase_deg", "phase (°)",
             "in_phase", "in-phase signal V_in (K/W)",
             "out_of_phase", "out-of-phase signal V_out (K/W)",
-            "k_per_w", "steady temperature rise per absorbed power (K/W)");
+            "k_per_w", "steady temperature rise per absorbed power (K/W)",
+            "v3_in_phase_v", "in-phase third-harmonic voltage V3ω (V)",
+            "v3_out_of_phase_v", "out-of-phase third-harmonic voltage V3ω (V)",
+            "v3_amplitude_v", "third-harmonic voltage amplitude |V3ω| (V)");
 
     /** The complex-response columns: a part's name, then the response unit's suffix. */
     private static final Map<String, String> PARTS = Map.of(
@@ -31,7 +34,8 @@ final class ColumnWords {
     /** The x axis; a 3ω heater is driven at the frequency, a thermoreflectance pump modulated. */
     static String x(String column, String technique) {
         if (column.equals("frequency_hz")) {
-            return "3omega".equals(technique) ? "heater drive frequency (Hz)" : "modulation frequency (Hz)";
+            return technique != null && technique.startsWith("3omega") ? "heater drive frequency (Hz)"
+                    : "modulation frequency (Hz)";
         }
         if (column.equals("delay_s")) {
             return "pump–probe delay (s)";

@@ -48,9 +48,11 @@ final class InputTables {
         selfHeating(h, o);
         if (doc.states("geometry")) {
             block(h, "Geometry", doc.geometry());
+            HeaterWords.geometry(doc.geometry()).ifPresent(w -> h.element("p", w));
         }
         if (doc.states("measurement")) {
             block(h, "Measurement", doc.measurement());
+            HeaterWords.measurement(doc.measurement()).ifPresent(w -> h.element("p", w));
         }
         if (doc.root().get("fit") instanceof Block fit) {
             block(h, "Fit settings", fit);

@@ -16,6 +16,7 @@ class AxisWordsTest {
     void xColumnsReadAsWordsWithUnits() {
         assertEquals("modulation frequency (Hz)", ColumnWords.x("frequency_hz", "fdtr"));
         assertEquals("heater drive frequency (Hz)", ColumnWords.x("frequency_hz", "3omega"));
+        assertEquals("heater drive frequency (Hz)", ColumnWords.x("frequency_hz", "3omega-voltage"));
         assertEquals("pump–probe delay (s)", ColumnWords.x("delay_s", "tdtr"));
         assertEquals("offset_m (m)", ColumnWords.x("offset_m", "sstr"));
         assertEquals("count (dimensionless)", ColumnWords.x("count", "sstr"));
@@ -27,6 +28,7 @@ class AxisWordsTest {
         assertEquals("phase (°)", ColumnWords.signal("phase_deg"));
         assertEquals("in-phase (real) part (K m/W)", ColumnWords.signal("re_k_m_per_w"));
         assertEquals("amplitude (K/W)", ColumnWords.signal("amplitude_k_per_w"));
+        assertEquals("in-phase third-harmonic voltage V3ω (V)", ColumnWords.signal("v3_in_phase_v"));
     }
 
     @Test

@@ -76,7 +76,8 @@ class ShippedServicesIT {
 
     @Test
     void theShippedTechniquesAreRegistered() throws Exception {
-        assertNamesEventually("lamella.api.Technique", "type", Set.of("fdtr", "tdtr", "sstr", "3omega"));
+        assertNamesEventually("lamella.api.Technique", "type", Set.of("fdtr", "tdtr", "sstr", "3omega",
+                "3omega-voltage"));
     }
 
     @Test

@@ -26,6 +26,7 @@ import lamella.io.exchange.ExchangeImporter;
 import lamella.technique.fdtr.FrequencyDomain;
 import lamella.technique.tdtr.TimeDomain;
 import lamella.technique.threeomega.ThreeOmega;
+import lamella.technique.threeomega.ThreeOmegaVoltage;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -37,7 +38,7 @@ import org.junit.jupiter.api.io.TempDir;
 class DatasetSettingsTest {
 
     private static final List<Technique> TECHNIQUES = List.of(new TimeDomain(), new FrequencyDomain(),
-            new ThreeOmega());
+            new ThreeOmega(), new ThreeOmegaVoltage());
     private static final List<HeatingGeometry> GEOMETRIES = List.of(new GaussianBeams(), new LineHeater());
     private static final Map<String, Object> CASE_TDTR = block("type", "tdtr", "modulation_hz", 9.8e6,
             "repetition_hz", 7.6e7, "delays_s", List.of(1e-10, 1e-9));
@@ -92,7 +93,7 @@ class DatasetSettingsTest {
                 Choices.none());
         assertTrue(s.technique().isEmpty());
         assertEquals(1, s.problems().size());
-        assertTrue(s.problems().get(0).contains("choose one of: 3omega, fdtr"), s.problems().toString());
+        assertTrue(s.problems().get(0).contains("choose one of: 3omega, 3omega-voltage, fdtr"), s.problems().toString());
         DatasetSettings chosen = DatasetSettings.of(StatedSettings.of(d), d.xColumn(),
                 context(CASE_TDTR, CASE_GAUSSIAN), new Choices("fdtr", Map.of()));
         assertEquals(List.of(), chosen.problems());

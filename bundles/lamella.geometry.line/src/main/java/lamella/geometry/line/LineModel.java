@@ -16,7 +16,8 @@ import lamella.engine.TopLayer;
  * Z∞ = 1/√(Λz(Λx k² + iωC)); that tail is summed from its asymptotic expansion
  * ∫_X^∞ sin²u/u³ du = 1/(4X²) − 3/(8X⁴) + O(X⁻⁶) at X = Kb = mπ, with the first correction in iωC/(Λx k²). With
  * layers above the heated plane or heating over a depth the tail is integrated from the kernel instead
- * ({@link #numericTail}).
+ * ({@link #numericTail}). A heater of its own heat capacity or behind a boundary resistance then turns that sample
+ * response into the heater's own temperature ({@link #heaterTemperature}).
  */
 final class LineModel implements GeometryModel {
 
@@ -33,10 +34,16 @@ final class LineModel implements GeometryModel {
     private final double kx;
     private final double c;
     private final double kHalfSpace;
+    /** The heater's heat capacity per unit area (ρc d)_h, J/(m² K). */
+    private final double heaterMass;
+    /** The heater–sample boundary resistance, m² K/W. */
+    private final double boundaryResistance;
 
-    LineModel(StackKernel stack, double halfWidth) {
+    LineModel(StackKernel stack, double halfWidth, double heaterMass, double boundaryResistance) {
         this.stack = stack;
         this.b = halfWidth;
+        this.heaterMass = heaterMass;
+        this.boundaryResistance = boundaryResistance;
         Layer top = stack.stack().layers().get(0);
         this.kz = top.kThrough();
         this.kx = top.kInPlaneX();
@@ -90,7 +97,27 @@ final class LineModel implements GeometryModel {
         }
         out[0] = (out[0] + tailRe) / Math.PI;
         out[1] = (out[1] + tailIm) / Math.PI;
+        heaterTemperature(omega, out);
         Geometries.requireFinite(out, "line", frequencyHz);
+    }
+
+    /**
+     * The lumped heater (Borca-Tasciuc, Kumar & Chen, Rev. Sci. Instrum. 72, 2139, 2001): from the sample's
+     * width-averaged response H per W/m to the heater's, H_h = (H + R/(2b)) / (1 + iω (ρc d)_h (R + 2b H)); the
+     * heater's admittance iω (ρc d)_h 2b in parallel with the series of R/(2b) and H. Without either, H itself.
+     */
+    private void heaterTemperature(double omega, double[] h) {
+        if (heaterMass == 0 && boundaryResistance == 0) {
+            return;
+        }
+        double nRe = h[0] + boundaryResistance / (2 * b);
+        double nIm = h[1];
+        double wm = omega * heaterMass;
+        double dRe = 1 - wm * 2 * b * h[1];
+        double dIm = wm * (boundaryResistance + 2 * b * h[0]);
+        double d2 = dRe * dRe + dIm * dIm;
+        h[0] = (nRe * dRe + nIm * dIm) / d2;
+        h[1] = (nIm * dRe - nRe * dIm) / d2;
     }
 
     /**

@@ -12,14 +12,18 @@ final class Words {
             "ratio", "ratio −V_in/V_out (dimensionless)",
             "phase_deg", "phase (°)",
             "in_phase", "in-phase signal V_in (K/W)",
-            "out_of_phase", "out-of-phase signal V_out (K/W)");
+            "out_of_phase", "out-of-phase signal V_out (K/W)",
+            "v3_in_phase_v", "in-phase third-harmonic voltage V3ω (V)",
+            "v3_out_of_phase_v", "out-of-phase third-harmonic voltage V3ω (V)",
+            "v3_amplitude_v", "third-harmonic voltage amplitude |V3ω| (V)");
 
     private Words() {
     }
 
     static String x(String column, String technique) {
         if (column.equals("frequency_hz")) {
-            return "3omega".equals(technique) ? "heater drive frequency (Hz)" : "modulation frequency (Hz)";
+            return technique != null && technique.startsWith("3omega") ? "heater drive frequency (Hz)"
+                    : "modulation frequency (Hz)";
         }
         if (column.equals("delay_s")) {
             return "pump–probe delay (s)";

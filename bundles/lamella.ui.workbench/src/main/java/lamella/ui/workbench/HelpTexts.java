@@ -17,8 +17,9 @@ final class HelpTexts {
                     + " The Materials panel searches every live library (shipped, your facility's, your own) by name"
                     + " or alias and shows each value with its range, σ and source.",
             "",
-            "2. Set-up — choose the technique (tdtr, fdtr, sstr, 3omega) and the heating geometry, and type their"
-                    + " settings in the units beside them: modulation 9.8 MHz, repetition 76 MHz, radii in µm."
+            "2. Set-up — choose the technique (tdtr, fdtr, sstr, 3omega, 3omega-voltage) and the heating"
+                    + " geometry, and type their settings in the units beside them: modulation 9.8 MHz, repetition"
+                    + " 76 MHz, radii in µm."
                     + " Frequency and delay lists take ranges: 1 kHz to 10 MHz, 30 log. Switching to another"
                     + " technique and back keeps each one's values. Enter the absorbed power to see the predicted"
                     + " steady temperature rise; tick self-heating to take the library values at the heated"
