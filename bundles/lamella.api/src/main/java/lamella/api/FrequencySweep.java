@@ -81,6 +81,15 @@ public abstract class FrequencySweep implements Technique {
             public double[][] evaluate(double[] x, FrequencyResponse h) {
                 return ComplexColumns.sample(x, responseFactor, h);
             }
+
+            @Override
+            public double[] heatingFrequencies(double[] x) {
+                double[] h = new double[x.length];
+                for (int i = 0; i < x.length; i++) {
+                    h[i] = responseFactor * x[i];
+                }
+                return h;
+            }
         };
     }
 }

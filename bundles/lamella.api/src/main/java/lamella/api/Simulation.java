@@ -1,5 +1,6 @@
 package lamella.api;
 
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -37,6 +38,14 @@ public record Simulation(Technique technique, TechniqueModel measurement, Geomet
             throw new ModelEvaluationException("the steady response at 0 Hz is not finite for this stack");
         }
         return h[0];
+    }
+
+    /**
+     * The geometry's cautions for the heating frequencies these x values are read at (for example a 3ω frequency
+     * range outside the usual penetration-depth band), each one sentence.
+     */
+    public List<String> cautions(double[] x) {
+        return geometry.cautions(measurement.heatingFrequencies(x));
     }
 
     /** The signals at given x values (for example those of a data file). */

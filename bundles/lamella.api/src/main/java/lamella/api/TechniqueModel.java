@@ -15,4 +15,13 @@ public interface TechniqueModel {
      * @return one array per signal column, each as long as {@code x}
      */
     double[][] evaluate(double[] x, FrequencyResponse response);
+
+    /**
+     * The heating frequencies at which {@link #evaluate} reads the response for these x values (3ω: twice each drive
+     * frequency), for the geometry's {@link GeometryModel#cautions}; empty where the technique does not say (the
+     * default), such as for a sum over many harmonics.
+     */
+    default double[] heatingFrequencies(double[] x) {
+        return new double[0];
+    }
 }

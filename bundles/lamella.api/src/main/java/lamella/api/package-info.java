@@ -3,5 +3,5 @@
  * case files, fitters and user interfaces address in one way. SI units throughout.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.4.0")
+@org.osgi.annotation.versioning.Version("0.5.0")
 package lamella.api;

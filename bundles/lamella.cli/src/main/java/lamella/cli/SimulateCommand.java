@@ -76,7 +76,9 @@ public final class SimulateCommand implements Command {
                 Reads the case (stack, geometry, measurement), evaluates the model at the measurement's x values
                 and writes one CSV row per x value: the x column (frequency_hz, delay_s; none for sstr) and the
                 technique's signal columns, 13 significant digits, SI units. Without --out the CSV goes to
-                standard output. Bad input is reported with the file, line and JSON path; exit status 2.
+                standard output. A warning on standard error tells of x values outside the geometry's usual
+                range (a 3ω penetration depth outside the slope-method band). Bad input is reported with the
+                file, line and JSON path; exit status 2.
                 --explain also writes to standard error every layer value used and where it came from: the case
                 file (with its line), a material library (entry, version, source, temperature) or a default;
                 every number of the geometry and measurement blocks with its unit and line; and with a
@@ -123,6 +125,7 @@ public final class SimulateCommand implements Command {
             return BAD_INPUT;
         }
         SignalTable table;
+        List<String> cautions;
         try {
             CaseDocument doc = explain ? ValueOrigins.readExplaining(caseFormat, casePath, io.err())
                     : caseFormat.read(casePath);
@@ -140,12 +143,16 @@ public final class SimulateCommand implements Command {
                         + " list of " + simulation.technique().xColumn().orElse("x") + " values to compute"));
             }
             table = simulation.run();
+            cautions = simulation.cautions(table.x());
         } catch (InputException e) {
             io.err().println("lamella simulate: " + e.getMessage());
             return BAD_INPUT;
         } catch (ModelEvaluationException e) {
             io.err().println("lamella simulate: " + casePath + ": cannot evaluate the model: " + e.getMessage());
             return BAD_INPUT;
+        }
+        for (String c : cautions) {
+            io.err().println("lamella simulate: warning: " + casePath + ": " + c);
         }
         String csv = SignalCsv.format(table);
         if (outArg == null) {

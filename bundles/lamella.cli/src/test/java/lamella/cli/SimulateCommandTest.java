@@ -206,6 +206,26 @@ class SimulateCommandTest {
         }
     }
 
+    /**
+     * A 3ω range outside the usual penetration-depth band (Cahill, Rev. Sci. Instrum. 61, 802, 1990) is simulated
+     * and told on standard error with the drive frequency and the depth: at f = 1 Hz the substrate's λ =
+     * √(D/(2π·2f)) = 2.61 mm (D = 140/1.63e6 m²/s), more than a fifth of a 0.5 mm substrate.
+     */
+    @Test
+    void aThreeOmegaRangeOutsideTheUsualBandIsSimulatedWithAWarning() throws Exception {
+        Path f = writeCase("wide.json", caseOf("{\"type\": \"line\", \"half_width_m\": 5e-6}",
+                "{\"type\": \"3omega-voltage\", \"drive_frequencies_hz\": [1, 1000], \"heater_resistance_ohm\": 20,"
+                        + " \"dr_dt_ohm_per_k\": 0.05, \"heater_length_m\": 1e-3, \"drive_current_a\": 0.01}"));
+        Run r = run("wide.json");
+        assertEquals(Command.OK, r.status(), r.err());
+        assertEquals("lamella simulate: warning: " + f + ": at the lowest drive frequency, 1.00 Hz, the thermal"
+                + " penetration depth λ = √(D/(2π·2f)) in the semi-infinite bottom layer 'substrate' is 0.00261 m, more"
+                + " than a fifth of a 0.000500 m substrate", r.err().substring(0, r.err().indexOf(": outside")));
+        assertEquals(1, r.err().split("\n").length, r.err());
+        assertTrue(r.out().startsWith(HEADERS.get("3omega-voltage") + "\n"), r.out());
+        assertEquals(3, r.out().split("\n").length, r.out());
+    }
+
     // ---------------------------------------------------------------- --out
 
     @Nested

@@ -2,6 +2,7 @@ package lamella.fit;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import lamella.api.Block;
 import lamella.api.CaseDocument;
@@ -209,6 +210,24 @@ final class FitProblem {
         } catch (InputException e) {
             throw new ModelEvaluationException("the fit reached inputs the model rejects: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * Every dataset's geometry cautions at these values (a 3ω frequency range outside the usual band, judged with the
+     * fitted conductivities), each prefixed by the dataset it concerns.
+     */
+    List<String> cautions(double[] values) {
+        List<String> out = new ArrayList<>();
+        for (PreparedDataset d : datasets) {
+            try {
+                for (String c : d.cautions(catalog, refs, values)) {
+                    out.add(String.format(Locale.ROOT, "dataset %d (%s): %s", d.spec.index(), d.spec.given(), c));
+                }
+            } catch (InputException e) {
+                throw new ModelEvaluationException("the fit reached inputs the model rejects: " + e.getMessage(), e);
+            }
+        }
+        return out;
     }
 
     /** The measured signal of every dataset, concatenated. */

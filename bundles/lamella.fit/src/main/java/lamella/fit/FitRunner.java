@@ -116,6 +116,7 @@ final class FitRunner {
         }
         double[] model = solver.unweighted(u, unc).clone();
         List<DatasetFit> datasets = datasetFits(model, y, sigma, problem.values(u, unc), warnings);
+        warnings.addAll(problem.cautions(problem.values(u, unc)));
         double chi2 = 0;
         for (int i = 0; i < y.length; i++) {
             double r = (y[i] - model[i]) / sigma[i];

@@ -60,6 +60,11 @@ final class PreparedDataset {
         return m;
     }
 
+    /** The geometry's cautions for this dataset's x values with the given parameters set. */
+    List<String> cautions(ModelCatalog catalog, List<ParameterRef> refs, double[] values) throws InputException {
+        return with(refs, values).simulation(catalog).cautions(x);
+    }
+
     /** The modelled signal at this dataset's x values. */
     double[] evaluate(ModelCatalog catalog, List<ParameterRef> refs, double[] values) throws InputException {
         Simulation s = with(refs, values).simulation(catalog);

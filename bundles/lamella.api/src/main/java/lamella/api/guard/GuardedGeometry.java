@@ -64,20 +64,28 @@ public final class GuardedGeometry implements HeatingGeometry {
         if (model == null) {
             throw blame.failed("bind() returned null", null);
         }
-        return (frequencyHz, out) -> {
-            if (Thread.currentThread().isInterrupted()) {
-                // The caller's thread was asked to stop: every geometry stops between frequencies, whether or not
-                // its own code looks at the interrupt.
-                throw new CancellationException("the model evaluation was cancelled");
+        return new GeometryModel() {
+            @Override
+            public void at(double frequencyHz, double[] out) {
+                if (Thread.currentThread().isInterrupted()) {
+                    // The caller's thread was asked to stop: every geometry stops between frequencies, whether or
+                    // not its own code looks at the interrupt.
+                    throw new CancellationException("the model evaluation was cancelled");
+                }
+                try {
+                    model.at(frequencyHz, out);
+                } catch (RuntimeException | LinkageError e) {
+                    throw blame.fault(e);
+                }
+                if (!Double.isFinite(out[0]) || !Double.isFinite(out[1])) {
+                    throw blame.failed("a non-finite response (" + out[0] + ", " + out[1] + ") at " + frequencyHz
+                            + " Hz", null);
+                }
             }
-            try {
-                model.at(frequencyHz, out);
-            } catch (RuntimeException | LinkageError e) {
-                throw blame.fault(e);
-            }
-            if (!Double.isFinite(out[0]) || !Double.isFinite(out[1])) {
-                throw blame.failed("a non-finite response (" + out[0] + ", " + out[1] + ") at " + frequencyHz
-                        + " Hz", null);
+
+            @Override
+            public List<String> cautions(double[] heatingFrequenciesHz) {
+                return blame.call("cautions()", () -> List.copyOf(model.cautions(heatingFrequenciesHz.clone())));
             }
         };
     }

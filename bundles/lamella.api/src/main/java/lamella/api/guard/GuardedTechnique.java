@@ -90,6 +90,11 @@ public final class GuardedTechnique implements Technique {
                 checkSignals(signals, x, columns);
                 return signals;
             }
+
+            @Override
+            public double[] heatingFrequencies(double[] x) {
+                return blame.call("heatingFrequencies()", () -> model.heatingFrequencies(x.clone())).clone();
+            }
         };
     }
 

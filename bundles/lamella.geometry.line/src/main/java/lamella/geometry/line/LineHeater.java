@@ -83,6 +83,7 @@ public final class LineHeater implements HeatingGeometry {
         }
         double massPerArea = p.has(HEATER_THICKNESS) ? p.number(HEATER_THICKNESS) * p.number(HEATER_HEAT_CAPACITY)
                 : 0.0;
-        return new LineModel(stack, b, massPerArea, p.number(BOUNDARY_RESISTANCE, 0.0));
+        return new LineModel(stack, b, p.number(LENGTH, Double.NaN), massPerArea,
+                p.number(BOUNDARY_RESISTANCE, 0.0));
     }
 }

@@ -1,5 +1,6 @@
 package lamella.geometry.line;
 
+import java.util.List;
 import lamella.api.BottomBoundary;
 import lamella.api.GeometryModel;
 import lamella.api.Layer;
@@ -38,10 +39,12 @@ final class LineModel implements GeometryModel {
     private final double heaterMass;
     /** The heater–sample boundary resistance, m² K/W. */
     private final double boundaryResistance;
+    private final ValidBand band;
 
-    LineModel(StackKernel stack, double halfWidth, double heaterMass, double boundaryResistance) {
+    LineModel(StackKernel stack, double halfWidth, double length, double heaterMass, double boundaryResistance) {
         this.stack = stack;
         this.b = halfWidth;
+        this.band = new ValidBand(stack.stack(), halfWidth, length);
         this.heaterMass = heaterMass;
         this.boundaryResistance = boundaryResistance;
         Layer top = stack.stack().layers().get(0);
@@ -99,6 +102,11 @@ final class LineModel implements GeometryModel {
         out[1] = (out[1] + tailIm) / Math.PI;
         heaterTemperature(omega, out);
         Geometries.requireFinite(out, "line", frequencyHz);
+    }
+
+    @Override
+    public List<String> cautions(double[] heatingFrequenciesHz) {
+        return band.cautions(heatingFrequenciesHz);
     }
 
     /**

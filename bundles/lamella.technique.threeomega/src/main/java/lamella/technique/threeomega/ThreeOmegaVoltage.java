@@ -113,6 +113,15 @@ public final class ThreeOmegaVoltage implements Technique {
                 }
                 return v;
             }
+
+            @Override
+            public double[] heatingFrequencies(double[] x) {
+                double[] h = new double[x.length];
+                for (int i = 0; i < x.length; i++) {
+                    h[i] = 2 * x[i];
+                }
+                return h;
+            }
         };
     }
 }

@@ -92,6 +92,14 @@ class ThreeOmegaVoltageTest {
         assertEquals(Math.toDegrees(Math.atan2(H_IM, H_RE)), v[3][0], 1e-12);
     }
 
+    /** The geometry's band check is asked at the frequencies the response is read at: twice the drive's. */
+    @Test
+    void theHeatingFrequenciesAreTwiceTheDrive() throws InputException {
+        double[] h = bind(Map.of(ThreeOmegaVoltage.CURRENT, 0.01)).heatingFrequencies(new double[] {10, 250});
+        assertEquals(20, h[0], 0);
+        assertEquals(500, h[1], 0);
+    }
+
     /** A voltage drive V is the current drive I = V/R0 (the constant-current assumption). */
     @Test
     void aDriveVoltageIsTheCurrentItDrives() throws InputException {
