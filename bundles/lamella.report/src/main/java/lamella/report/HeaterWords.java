@@ -12,11 +12,23 @@ final class HeaterWords {
     private HeaterWords() {
     }
 
-    /** For a {@code line} geometry: a massless heater in perfect contact, or the lumped heater with its values. */
+    /**
+     * For a {@code line} geometry: a massless heater in perfect contact, or the lumped heater with its values; for
+     * {@code line-film-difference} the same, said of the sample's heater and the reference's.
+     */
     static Optional<String> geometry(Block g) {
+        if ("line-film-difference".equals(g.get("type"))) {
+            return heater(g).map(w -> "The signal is the difference between the heater's temperature on this stack"
+                    + " and on the same stack without its first layer (the differential method, Lee & Cahill, J."
+                    + " Appl. Phys. 81, 2590, 1997), at the same power per unit length. For both: " + w);
+        }
         if (!"line".equals(g.get("type"))) {
             return Optional.empty();
         }
+        return heater(g);
+    }
+
+    private static Optional<String> heater(Block g) {
         Object d = g.get("heater_thickness_m");
         Object c = g.get("heater_heat_capacity_j_m3k");
         Object r = g.get("heater_boundary_resistance_m2k_w");

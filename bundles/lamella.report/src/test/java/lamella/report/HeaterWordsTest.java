@@ -25,6 +25,8 @@ class HeaterWordsTest {
         assertTrue(HeaterWords.geometry(new Block("geometry", Map.of("type", "line", "half_width_m", 5e-6)))
                 .orElseThrow().startsWith("The heater is modelled as a massless strip"));
         assertEquals(Optional.empty(), HeaterWords.geometry(new Block("geometry", Map.of("type", "gaussian"))));
+        assertTrue(HeaterWords.geometry(new Block("geometry", Map.of("type", "line-film-difference", "half_width_m",
+                5e-6))).orElseThrow().startsWith("The signal is the difference between the heater's temperature"));
         assertTrue(HeaterWords.measurement(new Block("measurement", Map.of("type", "3omega-voltage")))
                 .orElseThrow().contains("V3ω = ½ I³ R0 (dR/dT) H_h(2f)/L"));
         assertEquals(Optional.empty(), HeaterWords.measurement(new Block("measurement", Map.of("type", "3omega"))));

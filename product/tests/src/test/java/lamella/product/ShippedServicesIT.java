@@ -71,7 +71,8 @@ class ShippedServicesIT {
 
     @Test
     void theShippedGeometriesAreRegistered() throws Exception {
-        assertNamesEventually("lamella.api.HeatingGeometry", "type", Set.of("gaussian", "point", "line"));
+        assertNamesEventually("lamella.api.HeatingGeometry", "type", Set.of("gaussian", "point", "line",
+                "line-film-difference"));
     }
 
     @Test

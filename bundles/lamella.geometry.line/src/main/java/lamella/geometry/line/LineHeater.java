@@ -69,6 +69,11 @@ public final class LineHeater implements HeatingGeometry {
 
     @Override
     public GeometryModel bind(Parameters p, StackKernel stack) throws InputException {
+        return model(p, stack);
+    }
+
+    /** The heater of these parameters on a stack; {@link FilmDifference} binds it twice. */
+    static LineModel model(Parameters p, StackKernel stack) throws InputException {
         double b = p.number(HALF_WIDTH);
         if (p.has(LENGTH) && p.number(LENGTH) < MIN_LENGTH_OVER_WIDTH * 2 * b) {
             throw InputException.at(p.pathOf(LENGTH), "the heater is " + p.number(LENGTH) + " m long but " + 2 * b
