@@ -39,7 +39,8 @@ class PlainServicesTest {
         PlainServices shipped = PlainServices.find(getClass().getClassLoader());
         Set<String> own = types(shipped);
         for (String want : new String[] {"geometry gaussian", "geometry point", "geometry ring", "geometry line",
-                "geometry elliptic", "technique tdtr", "technique fdtr", "technique sstr", "technique 3omega"}) {
+                "geometry elliptic", "geometry line-film-difference", "technique tdtr", "technique fdtr", "technique sstr",
+                "technique 3omega", "technique 3omega-voltage"}) {
             assertTrue(own.contains(want), want + " missing from " + own);
         }
         assertTrue(shipped.skipped.isEmpty(), shipped.skipped.toString());
