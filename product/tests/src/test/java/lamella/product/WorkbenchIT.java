@@ -252,6 +252,10 @@ class WorkbenchIT {
         assertEquals("chosen ring", ask("choose Heating geometry | ring"));
         String status = ask("status");
         assertTrue(status.startsWith("Case invalid at geometry.ring_radius_m: "), status);
+        ask("size 1280 800");
+        assertTrue(ask("cut status").lines().anyMatch(l -> l.equals("(unsaved changes)\twhole")),
+                "beside a long problem the project's state stays readable: " + ask("cut status"));
+        ask("size 1600 1000");
         ask("screenshot " + SHOTS.resolve("ring-without-radius.png"));
         ask("field Heating geometry | ring radius | 3");
         ask("field Heating geometry | ring width | 1");

@@ -54,6 +54,16 @@ final class CutTexts {
         return out;
     }
 
+    /** Whether one control shows its text cut short where it is now. */
+    static boolean isCut(Control c) {
+        Rectangle b = c.getBounds();
+        List<String> out = new ArrayList<>();
+        if (b.width > 0 && b.height > 0) {
+            check(c, b, out);
+        }
+        return !out.isEmpty() || b.width <= 0;
+    }
+
     private static void check(Control c, Rectangle b, List<String> out) {
         if (c instanceof Label l && (l.getStyle() & SWT.SEPARATOR) == 0 && !l.getText().isEmpty()) {
             if ((l.getStyle() & SWT.WRAP) != 0) {

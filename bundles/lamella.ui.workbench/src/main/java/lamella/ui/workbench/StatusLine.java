@@ -18,12 +18,13 @@ final class StatusLine {
 
     private final Composite bar;
     private final Label validity;
+    private final Label state;
     private final Label work;
     private final Button stop;
 
     StatusLine(Composite parent, Runnable onStop) {
         bar = new Composite(parent, SWT.NONE);
-        GridLayout layout = new GridLayout(3, false);
+        GridLayout layout = new GridLayout(4, false);
         layout.marginHeight = 2;
         layout.marginWidth = 8;
         bar.setLayout(layout);
@@ -32,6 +33,9 @@ final class StatusLine {
         GridData v = new GridData(SWT.FILL, SWT.CENTER, true, false);
         v.widthHint = 200;
         validity.setLayoutData(v);
+        // Whether the project is saved, on a label of its own: a long problem beside it is cut, never this.
+        state = new Label(bar, SWT.NONE);
+        state.setLayoutData(new GridData(SWT.BEGINNING, SWT.CENTER, false, false));
         work = new Label(bar, SWT.RIGHT);
         GridData w = new GridData(SWT.END, SWT.CENTER, false, false);
         w.widthHint = 360;
@@ -48,7 +52,7 @@ final class StatusLine {
         if (bar.isDisposed()) {
             return;
         }
-        String state = p.dirty() ? "unsaved changes" : p.file().isPresent() ? "saved" : "not saved yet";
+        String saved = p.dirty() ? "unsaved changes" : p.file().isPresent() ? "saved" : "not saved yet";
         String text;
         boolean bad;
         if (p.problem().isPresent()) {
@@ -70,7 +74,8 @@ final class StatusLine {
         }
         validity.setForeground(bar.getDisplay().getSystemColor(bad ? SWT.COLOR_DARK_RED
                 : SWT.COLOR_WIDGET_FOREGROUND));
-        validity.setText((text + "   (" + state + ")").replace("&", "&&"));
+        validity.setText(text.replace("&", "&&"));
+        state.setText("(" + saved + ")");
         validity.setToolTipText(p.problem().map(Throwable::getMessage)
                 .orElse(panelProblems.isEmpty() ? null : String.join("\n", panelProblems.values())));
         bar.layout();
@@ -86,7 +91,12 @@ final class StatusLine {
     }
 
     String text() {
-        return validity.getText().replace("&&", "&") + " | " + work.getText();
+        return validity.getText().replace("&&", "&") + "   " + state.getText() + " | " + work.getText();
+    }
+
+    /** The line's controls, for the window control's check of cut texts. */
+    Composite bar() {
+        return bar;
     }
 
     void pressStop() {

@@ -41,7 +41,7 @@ import org.eclipse.swt.widgets.Text;
  * {@code table-select HEADING | ROW}, {@code cell-click HEADING | ROW | COLUMN} (a click into a table's cell, as
  * the mouse gives it), {@code editor-choose TEXT} (the item of an open cell chooser that starts with TEXT),
  * {@code search PANEL_ID | TEXT} (typed into the panel's search field), {@code texts PANEL_ID} (its labels),
- * {@code menu TITLE} (its items as shown, a key after a tab), {@code cut PANEL_ID} (what it shows cut short where it is now, see {@link CutTexts}), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
+ * {@code menu TITLE} (its items as shown, a key after a tab), {@code cut PANEL_ID} (what it shows cut short where it is now, see {@link CutTexts}; {@code cut status}: each label of the status line, then cut or whole), {@code choose GROUP | VALUE}, {@code field GROUP | LABEL | TEXT}. A failure
  * answers {@code error: …}.
  */
 final class WindowControl implements Function<String, String> {
@@ -390,6 +390,11 @@ final class WindowControl implements Function<String, String> {
     }
 
     private String cut(String panelId) {
+        if (panelId.equals("status")) {
+            return Arrays.stream(window.status().bar().getChildren()).filter(c -> c instanceof Label)
+                    .map(c -> ((Label) c).getText() + (CutTexts.isCut(c) ? "\tcut" : "\twhole"))
+                    .collect(Collectors.joining("\n"));
+        }
         Control c = window.shelf().control(panelId)
                 .orElseThrow(() -> new IllegalArgumentException("no panel '" + panelId + "'"));
         return c instanceof org.eclipse.swt.widgets.Composite root ? String.join("\n", CutTexts.in(root)) : "";
