@@ -92,6 +92,16 @@ final class ProjectSession {
     }
 
     /** Offers the recovery copy left by a session that ended with unsaved changes. */
+    /** When a recovery copy was kept, in the reader's local time ("17:22 on 3 Dec 2026"); other text as it is. */
+    static String keptAt(String written, java.time.ZoneId zone) {
+        try {
+            return java.time.format.DateTimeFormatter.ofPattern("HH:mm 'on' d MMM yyyy", java.util.Locale.ENGLISH)
+                    .withZone(zone).format(Instant.parse(written));
+        } catch (java.time.format.DateTimeParseException e) {
+            return written;
+        }
+    }
+
     void offerRecovery() {
         Path copy = recoveryCase();
         if (!Files.isRegularFile(copy)) {
@@ -101,8 +111,8 @@ final class ProjectSession {
         Path of = null;
         try {
             ObjectNode info = (ObjectNode) JsonFiles.read(recoveryInfo());
-            about = info.path("project").asText("an untitled project") + " (copy of " + info.path("written")
-                    .asText("unknown time") + ")";
+            about = info.path("project").asText("an untitled project") + " (copy kept at "
+                    + keptAt(info.path("written").asText("an unknown time"), java.time.ZoneId.systemDefault()) + ")";
             of = info.hasNonNull("project") ? Path.of(info.get("project").asText()) : null;
         } catch (IOException | RuntimeException e) {
             messages.warning("The recovery note " + recoveryInfo() + " is unreadable: " + e.getMessage());
