@@ -16,19 +16,69 @@ import java.util.Map;
  * @param lines       the 1-based line of every JSON path's key (or list element), for error messages
  * @param origins     where every value of the stack came from, in layer order (empty when not recorded), so that
  *                    every result can name the library, tier, entry version and source of each library value
+ * @param samples     every sample of the case, in file order: the one unnamed sample of {@code stack}, or the named
+ *                    ones of {@code samples} ({@code stack} is then the first one's, {@code geometry} the case's
+ *                    own, empty where every sample or dataset has its own)
  */
 public record CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root,
-                           Map<String, Integer> lines, List<ValueOrigin> origins) {
+                           Map<String, Integer> lines, List<ValueOrigin> origins, List<Sample> samples) {
 
     public CaseDocument {
         lines = Map.copyOf(lines);
         origins = List.copyOf(origins);
+        samples = samples.isEmpty() && stack != null ? List.of(new Sample("", stack, null, "stack"))
+                : List.copyOf(samples);
+    }
+
+    /** A document of one stack, the case's only sample. */
+    public CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root,
+                        Map<String, Integer> lines, List<ValueOrigin> origins) {
+        this(file, stack, geometry, measurement, root, lines, origins, List.of());
     }
 
     /** A document that records no origins (built in code rather than read). */
     public CaseDocument(Path file, Stack stack, Block geometry, Block measurement, Block root,
                         Map<String, Integer> lines) {
-        this(file, stack, geometry, measurement, root, lines, List.of());
+        this(file, stack, geometry, measurement, root, lines, List.of(), List.of());
+    }
+
+    /** Whether the case holds several samples (a {@code samples} list of more than one). */
+    public boolean severalSamples() {
+        return samples.size() > 1;
+    }
+
+    /** The sample of this name, if the case has it. */
+    public java.util.Optional<Sample> sample(String name) {
+        return samples.stream().filter(s -> s.name().equals(name)).findFirst();
+    }
+
+    /** The names of the samples, in file order, for messages. */
+    public List<String> sampleNames() {
+        return samples.stream().map(Sample::name).toList();
+    }
+
+    /**
+     * The case as one of its samples alone: that sample's stack and geometry (its own, else the case's), for a
+     * command that simulates one stack. Unknown names are an error at {@code at} with the list of names.
+     */
+    public CaseDocument only(String name, String at) throws InputException {
+        Sample s = sample(name).filter(Sample::named).orElseThrow(() -> InputException.at(at, samples.get(0).named()
+                ? "there is no sample '" + name + "'" + Names.closest(name, sampleNames())
+                .map(n -> " (did you mean '" + n + "'?)").orElse("") + "; samples: " + String.join(", ", sampleNames())
+                : "the case has one stack and no samples list; leave " + at + " out"));
+        return new CaseDocument(file, s.stack(), s.geometryOr(geometry), measurement, root, lines, origins,
+                List.of(s));
+    }
+
+    /**
+     * Refuses a case of several samples where only one stack can be used ({@code what}: the command or block), with
+     * the names to choose from.
+     */
+    public void requireOneSample(String what) throws InputException {
+        if (severalSamples()) {
+            throw InputException.at("samples", what + " works on one sample at a time, and this case has "
+                    + samples.size() + ": " + String.join(", ", sampleNames()));
+        }
     }
 
     /** The stack values taken from material libraries, in layer order. */
@@ -50,7 +100,9 @@ public record CaseDocument(Path file, Stack stack, Block geometry, Block measure
             case "k_in_plane_w_mk" -> "k_in_plane_x_w_mk";
             default -> ref.key();
         };
-        return origins.stream().filter(o -> o.layer().equals(ref.layer()) && o.key().equals(key)).findFirst();
+        String within = ref.sample() == null ? "" : sample(ref.sample()).map(s -> s.path() + ".").orElse("");
+        return origins.stream().filter(o -> o.layer().equals(ref.layer()) && o.key().equals(key)
+                && o.path().startsWith(within)).findFirst();
     }
 
     /** Whether the case states a top-level block of this name itself ({@code geometry}, {@code measurement}). */

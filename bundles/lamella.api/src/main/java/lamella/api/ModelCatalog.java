@@ -101,6 +101,7 @@ public final class ModelCatalog {
     /** Builds the simulation of a whole case document. */
     public Simulation simulation(CaseDocument doc) throws InputException {
         try {
+            doc.requireOneSample("a simulation (name one with --sample)");
             return simulation(doc.stack(), doc.geometry(), doc.measurement());
         } catch (InputException e) {
             throw doc.locate(e);

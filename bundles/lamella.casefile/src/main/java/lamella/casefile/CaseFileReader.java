@@ -23,6 +23,7 @@ import lamella.api.Names;
 import lamella.api.OpticalDepths;
 import lamella.api.PhysicalRange;
 import lamella.api.SelfHeating;
+import lamella.api.Sample;
 import lamella.api.Stack;
 import lamella.api.ValueOrigin;
 import lamella.api.material.MaterialCatalog;
@@ -49,8 +50,11 @@ public final class CaseFileReader implements ExplainingCaseFormat {
      * only lets them through. {@code workbench} holds what the workbench remembers with a project (settings of techniques and geometries switched away from); no model reads
      * it, so any object is accepted there.
      */
-    static final Set<String> TOP_KEYS = Set.of("description", "stack", "geometry", "measurement",
+    static final Set<String> TOP_KEYS = Set.of("description", "stack", "samples", "geometry", "measurement",
             LayerReading.TEMPERATURE, "fit", "plan", "map", WORKBENCH, SelfHeatingReading.BLOCK);
+    /** The keys of one entry of {@code samples}. */
+    static final Set<String> SAMPLE_KEYS = Set.of("name", "stack", "geometry", LayerReading.TEMPERATURE,
+            "description");
     static final Set<String> STACK_KEYS = Set.of("layers", "bottom", "above", "top");
     static final String NAME = "name";
     static final String THICKNESS = "thickness_m";
@@ -103,20 +107,89 @@ public final class CaseFileReader implements ExplainingCaseFormat {
                     : LayerReading.DEFAULT_TEMPERATURE_K;
             Supplier<MaterialCatalog> catalog = () -> new MaterialCatalog(libraries);
             List<ValueOrigin> origins = new ArrayList<>();
-            List<SelfHeating.LibraryBinding> bindings = new ArrayList<>();
-            Stack stack = stack(object(root, "stack"), temperature,
-                    root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null, catalog, lines, origins,
-                    bindings);
-            if (root.has(SelfHeatingReading.BLOCK)) {
-                stack = stack.withHeating(SelfHeatingReading.read(object(root, SelfHeatingReading.BLOCK), bindings));
+            String temperaturePath = root.has(LayerReading.TEMPERATURE) ? LayerReading.TEMPERATURE : null;
+            Block heating = root.has(SelfHeatingReading.BLOCK) ? object(root, SelfHeatingReading.BLOCK) : null;
+            List<Sample> samples;
+            if (root.has("samples")) {
+                samples = samples(root, temperature, temperaturePath, catalog, lines, origins, heating);
+            } else {
+                List<SelfHeating.LibraryBinding> bindings = new ArrayList<>();
+                Stack stack = stack(object(root, "stack"), temperature, temperaturePath, catalog, lines, origins,
+                        bindings);
+                if (heating != null) {
+                    stack = stack.withHeating(SelfHeatingReading.read(heating, bindings));
+                }
+                samples = List.of(new Sample("", stack, null, "stack"));
             }
-            Block geometry = block(root, "geometry");
+            boolean allOwn = samples.stream().allMatch(x -> x.geometry() != null);
+            Block geometry = allOwn && !root.has("geometry") ? new Block("geometry", Map.of())
+                    : block(root, "geometry");
+            if (samples.size() == 1 && samples.get(0).geometry() != null) {
+                // one sample's own geometry is the case's: one block, addressed as geometry.KEY
+                Sample only = samples.get(0);
+                geometry = only.geometry();
+                samples = List.of(new Sample(only.name(), only.stack(), null, only.path()));
+            }
             Block measurement = block(root, "measurement");
-            return new ExplainedCase(new CaseDocument(file, stack, geometry, measurement, root, lines, origins),
-                    origins);
+            return new ExplainedCase(new CaseDocument(file, samples.get(0).stack(), geometry, measurement, root,
+                    lines, origins, samples), origins);
         } catch (InputException e) {
             throw new CaseDocument(file, null, null, null, root, lines).locate(e);
         }
+    }
+
+    /**
+     * {@code samples}: a non-empty list of objects, each with a unique {@code name}, its own {@code stack} and
+     * optionally its own {@code geometry} and {@code temperature_k}. A case holds either {@code stack} or
+     * {@code samples}; a {@code self_heating} block heats each sample's stack.
+     */
+    private static List<Sample> samples(Block root, double temperature, String temperaturePath,
+                                        Supplier<MaterialCatalog> catalog, Map<String, Integer> lines,
+                                        List<ValueOrigin> origins, Block heating) throws InputException {
+        if (root.has("stack")) {
+            throw InputException.at("stack", "a case holds either one stack or a list of samples, each with its own"
+                    + " stack; move this stack into an entry of samples, or leave samples out");
+        }
+        if (!(root.get("samples") instanceof List<?> list) || list.isEmpty()) {
+            throw InputException.at("samples", "expected a non-empty list of samples, each {\"name\": …,"
+                    + " \"stack\": {…}}, got " + Block.describe(root.get("samples")));
+        }
+        List<Sample> out = new ArrayList<>();
+        Map<String, String> seen = new HashMap<>();
+        for (int i = 0; i < list.size(); i++) {
+            String at = "samples[" + i + "]";
+            if (!(list.get(i) instanceof Block b)) {
+                throw InputException.at(at, "expected a sample object {\"name\": …, \"stack\": {…}}, got "
+                        + Block.describe(list.get(i)));
+            }
+            onlyKnownKeys(b, SAMPLE_KEYS, "a sample");
+            String name = b.requireString("name");
+            if (name.isBlank() || name.chars().anyMatch(c -> c == '[' || c == ']' || Character.isISOControl(c))) {
+                throw InputException.at(b.pathOf("name"), "expected a sample name that is not blank and holds no"
+                        + " '[', ']' or control character (outputs name a sample's inputs as samples[NAME].…),"
+                        + " got \"" + name + "\"");
+            }
+            String before = seen.put(name, b.pathOf("name"));
+            if (before != null) {
+                throw InputException.at(b.pathOf("name"), "the sample name '" + name + "' is already used by "
+                        + before + "; every sample needs its own name");
+            }
+            if (b.has("description")) {
+                b.requireString("description");
+            }
+            boolean own = b.has(LayerReading.TEMPERATURE);
+            double t = own ? positive(b, LayerReading.TEMPERATURE, "the sample's temperature in K") : temperature;
+            List<SelfHeating.LibraryBinding> bindings = new ArrayList<>();
+            Stack stack = stack(object(b, "stack"), t, own ? b.pathOf(LayerReading.TEMPERATURE) : temperaturePath,
+                    catalog, lines, origins, bindings);
+            if (heating != null) {
+                // the case's absorbed power heats every sample, each through its own stack
+                stack = stack.withHeating(SelfHeatingReading.read(heating, bindings));
+            }
+            Block geometry = b.has("geometry") ? object(b, "geometry") : null;
+            out.add(new Sample(name, stack, geometry, at));
+        }
+        return out;
     }
 
     static Stack stack(Block s, double temperature, String temperaturePath, Supplier<MaterialCatalog> catalog,
@@ -258,7 +331,7 @@ public final class CaseFileReader implements ExplainingCaseFormat {
         }
         if (root.get(key) == null) {
             throw InputException.at(key, "missing; expected an object naming its type (or one in every dataset of"
-                    + " the fit block)");
+                    + " the fit block" + (key.equals("geometry") ? ", or in every sample" : "") + ")");
         }
         return object(root, key);
     }

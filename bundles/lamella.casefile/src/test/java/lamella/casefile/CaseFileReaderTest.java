@@ -453,7 +453,7 @@ class CaseFileReaderTest {
             String json = withLayers(SUBSTRATE).replace("\"geometry\"", "\"geometri\"");
             InputException e = fail(json);
             assertAt(e, "geometri", lineOf(json, "\"geometri\""), "did you mean 'geometry'",
-                    "description, fit, geometry, map, measurement, plan, self_heating, stack, temperature_k, workbench");
+                    "description, fit, geometry, map, measurement, plan, samples, self_heating, stack, temperature_k, workbench");
         }
 
         @Test

@@ -9,6 +9,7 @@ import lamella.api.InputException;
 import lamella.api.Layer;
 import lamella.api.Names;
 import lamella.api.ParameterRef;
+import lamella.api.Sample;
 import lamella.api.ValueOrigin;
 import lamella.api.PhysicalRange;
 
@@ -28,6 +29,9 @@ final class CaseOverrides {
         if (overrides.isEmpty()) {
             return doc;
         }
+        if (doc.samples().get(0).named()) {
+            return applyToSamples(doc, overrides);
+        }
         CaseModel model = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
         List<ValueOrigin> origins = new ArrayList<>(doc.origins());
         for (Map.Entry<String, Double> e : overrides.entrySet()) {
@@ -45,6 +49,79 @@ final class CaseOverrides {
         }
         return new CaseDocument(doc.file(), model.stack(), model.geometry(), model.measurement(), doc.root(),
                 doc.lines(), origins);
+    }
+
+    /**
+     * Overrides of a case of samples: {@code LAYER.PROPERTY} replaces the value in every sample that has the layer,
+     * {@code samples[NAME].LAYER.PROPERTY} (or {@code samples[NAME].geometry.KEY}, of a sample with its own geometry)
+     * in that sample only; {@code geometry.KEY} and {@code measurement.KEY} the case's blocks.
+     */
+    private static CaseDocument applyToSamples(CaseDocument doc, Map<String, Double> overrides)
+            throws InputException {
+        List<Sample> samples = new ArrayList<>(doc.samples());
+        CaseModel shared = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
+        List<ValueOrigin> origins = new ArrayList<>(doc.origins());
+        for (Map.Entry<String, Double> e : overrides.entrySet()) {
+            String at = "set." + e.getKey();
+            String path = e.getKey();
+            String only = null;
+            if (path.startsWith("samples[")) {
+                int close = path.indexOf("].");
+                if (close < 0) {
+                    throw InputException.at(at, "expected samples[NAME].LAYER.PROPERTY or samples[NAME].geometry.KEY");
+                }
+                only = path.substring("samples[".length(), close);
+                if (doc.sample(only).isEmpty()) {
+                    throw InputException.at(at, "there is no sample '" + only + "'; samples: "
+                            + String.join(", ", doc.sampleNames()));
+                }
+                path = path.substring(close + 2);
+            }
+            ParameterRef ref = parse(path, at);
+            PhysicalRange.checkKey(ref.key(), e.getValue(), at);
+            if (ref.scope() != ParameterRef.Scope.LAYER && only == null) {
+                try {
+                    shared.value(ref, at);
+                    shared = shared.with(ref, e.getValue());
+                } catch (InputException problem) {
+                    throw InputException.at(at, problem.problem());
+                }
+                continue;
+            }
+            if (ref.scope() == ParameterRef.Scope.MEASUREMENT) {
+                throw InputException.at(at, "a sample has no measurement block; override measurement.KEY");
+            }
+            int changed = 0;
+            for (int i = 0; i < samples.size(); i++) {
+                Sample s = samples.get(i);
+                boolean layer = ref.scope() == ParameterRef.Scope.LAYER;
+                if ((only != null && !only.equals(s.name())) || (layer && s.stack().layer(ref.layer()).isEmpty())) {
+                    continue;
+                }
+                if (!layer && s.geometry() == null) {
+                    throw InputException.at(at, "sample '" + s.name() + "' has no geometry block of its own;"
+                            + " override geometry.KEY");
+                }
+                CaseModel m = new CaseModel(s.stack(), s.geometryOr(doc.geometry()), doc.measurement());
+                try {
+                    m.value(ref, at);
+                    m = m.with(ref, e.getValue());
+                } catch (InputException problem) {
+                    throw InputException.at(at, problem.problem());
+                }
+                String within = s.path() + ".";
+                Layer.Tie tie = s.stack().layer(layer ? ref.layer() : "").map(Layer::tie)
+                        .orElse(Layer.Tie.of(false, false));
+                origins.removeIf(o -> o.path().startsWith(within) && sets(ref, tie, o));
+                samples.set(i, new Sample(s.name(), m.stack(), layer ? s.geometry() : m.geometry(), s.path()));
+                changed++;
+            }
+            if (changed == 0) {
+                throw InputException.at(at, "no sample has a layer '" + ref.layer() + "'");
+            }
+        }
+        return new CaseDocument(doc.file(), samples.get(0).stack(), shared.geometry(), shared.measurement(),
+                doc.root(), doc.lines(), origins, samples);
     }
 
     /**

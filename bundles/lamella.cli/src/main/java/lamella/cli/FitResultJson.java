@@ -133,8 +133,12 @@ final class FitResultJson {
             case LAYER -> n.put("layer", r.layer());
             case GEOMETRY -> n.put("geometry", r.key());
             case MEASUREMENT -> n.put("measurement", r.key());
+            case GAIN -> n.put("gain", r.key());
         }
         n.put("property", r.key());
+        if (r.sample() != null) {
+            n.put("sample", r.sample());
+        }
         if (!quantity.isEmpty()) {
             n.put("quantity", quantity);
         }

@@ -44,7 +44,7 @@ public final class SensitivityCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella sensitivity CASE.json [--dataset N] [--signal NAME] [--out FILE.csv]
+                usage: lamella sensitivity CASE.json [--dataset N | --sample NAME] [--signal NAME] [--out FILE.csv]
 
                 For every numeric input p of the case (layer thicknesses, conductivities, heat capacities, boundary
                 conductances, beam radii) computes S = d ln(signal) / d ln(p) over x — for a phase, d(phase) / d ln(p)
@@ -57,6 +57,8 @@ public final class SensitivityCommand implements Command {
                 to --out or standard output, and to standard error a ranking by the largest |S| with where each
                 value came from (a library value with its library, tier, entry version and source). A conductivity
                 stated once (one value, or one isotropic library value) is one input, perturbed in every direction.
+                A case of several samples needs --dataset (whose sample it is; its inputs are then named
+                samples[NAME].…) or --sample NAME (that sample under the case's measurement).
                 """;
     }
 
@@ -64,7 +66,7 @@ public final class SensitivityCommand implements Command {
     public int run(List<String> args, CommandIO io) {
         Options o;
         try {
-            o = Options.parse(args, "sensitivity", List.of("--dataset", "--signal", "--out"));
+            o = Options.parse(args, "sensitivity", List.of("--dataset", "--sample", "--signal", "--out"));
         } catch (IllegalArgumentException e) {
             io.err().println(e.getMessage() + "\n" + usage());
             return BAD_INPUT;
@@ -79,6 +81,13 @@ public final class SensitivityCommand implements Command {
         try {
             int dataset = o.has("--dataset") ? o.count("--dataset", 0) : -1;
             CaseDocument doc = caseFormat.read(casePath);
+            if (o.has("--sample")) {
+                if (dataset >= 0) {
+                    throw new IllegalArgumentException("lamella sensitivity: --dataset already names its sample;"
+                            + " give --dataset or --sample, not both");
+                }
+                doc = doc.only(o.value("--sample"), "--sample");
+            }
             SensitivityTable t = fitter.sensitivity(doc, dataset, o.value("--signal"));
             String csv = csv(t);
             io.err().print(ranking(t, doc));

@@ -71,7 +71,7 @@ public final class SimulateCommand implements Command {
     @Override
     public String usage() {
         return """
-                usage: lamella simulate CASE.json [--out FILE.csv] [--explain]
+                usage: lamella simulate CASE.json [--sample NAME] [--out FILE.csv] [--explain]
 
                 Reads the case (stack, geometry, measurement), evaluates the model at the measurement's x values
                 and writes one CSV row per x value: the x column (frequency_hz, delay_s; none for sstr) and the
@@ -85,6 +85,8 @@ public final class SimulateCommand implements Command {
                 self_heating block, also the steady rise and the temperature every library value was taken at.
                 A library value whose temperature under self-heating leaves its entry's range is warned about on
                 standard error, with or without --explain.
+                A case of several samples simulates the one --sample names (with its own geometry, if it has
+                one); --explain lists the values of every sample.
                 """;
     }
 
@@ -93,6 +95,7 @@ public final class SimulateCommand implements Command {
         String caseArg = null;
         String outArg = null;
         boolean explain = false;
+        String sampleArg = null;
         for (int i = 0; i < args.size(); i++) {
             String a = args.get(i);
             if (a.equals("--out")) {
@@ -101,6 +104,12 @@ public final class SimulateCommand implements Command {
                     return BAD_INPUT;
                 }
                 outArg = args.get(++i);
+            } else if (a.equals("--sample")) {
+                if (i + 1 >= args.size()) {
+                    io.err().println("lamella simulate: --sample needs a sample's name");
+                    return BAD_INPUT;
+                }
+                sampleArg = args.get(++i);
             } else if (a.equals("--explain")) {
                 explain = true;
             } else if (a.startsWith("-")) {
@@ -129,6 +138,9 @@ public final class SimulateCommand implements Command {
         try {
             CaseDocument doc = explain ? ValueOrigins.readExplaining(caseFormat, casePath, io.err())
                     : caseFormat.read(casePath);
+            if (sampleArg != null) {
+                doc = doc.only(sampleArg, "--sample");
+            }
             Simulation simulation = models.catalog(kernels).simulation(doc);
             if (simulation.heating().isPresent()) {
                 SelfHeating.Outcome h = simulation.heating().get();

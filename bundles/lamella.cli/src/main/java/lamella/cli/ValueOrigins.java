@@ -1,9 +1,9 @@
 package lamella.cli;
 
 import java.io.PrintStream;
-import java.nio.file.Path;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import lamella.api.Block;
@@ -12,6 +12,7 @@ import lamella.api.CaseFormat;
 import lamella.api.ExplainedCase;
 import lamella.api.ExplainingCaseFormat;
 import lamella.api.InputException;
+import lamella.api.Sample;
 import lamella.api.Units;
 import lamella.api.ValueOrigin;
 
@@ -38,23 +39,53 @@ final class ValueOrigins {
     }
 
     static String render(ExplainedCase c) {
-        TextTable table = new TextTable("layer", "key", "value", "unit", "from");
-        for (ValueOrigin o : c.origins()) {
-            table.add(o.layer(), o.key(), value(o.value()), Units.ofKey(o.key()), o.describe());
-        }
         CaseDocument doc = c.document();
+        boolean named = doc.samples().get(0).named();
+        TextTable table = named ? new TextTable("sample", "layer", "key", "value", "unit", "from")
+                : new TextTable("layer", "key", "value", "unit", "from");
+        for (ValueOrigin o : c.origins()) {
+            if (named) {
+                table.add(sampleOf(doc, o), o.layer(), o.key(), value(o.value()), Units.ofKey(o.key()),
+                        o.describe());
+            } else {
+                table.add(o.layer(), o.key(), value(o.value()), Units.ofKey(o.key()), o.describe());
+            }
+        }
         for (Block b : List.of(doc.geometry(), doc.measurement())) {
             for (Map.Entry<String, Object> e : b.values().entrySet()) {
                 String shown = shown(e.getValue());
                 if (shown != null) {
                     int line = doc.locate(InputException.at(b.pathOf(e.getKey()), "")).line();
-                    table.add(b.path(), e.getKey(), shown, Units.ofKey(e.getKey()),
-                            "explicit in case file" + (line > 0 ? " (line " + line + ")" : ""));
+                    String from = "explicit in case file" + (line > 0 ? " (line " + line + ")" : "");
+                    if (named) {
+                        table.add("", b.path(), e.getKey(), shown, Units.ofKey(e.getKey()), from);
+                    } else {
+                        table.add(b.path(), e.getKey(), shown, Units.ofKey(e.getKey()), from);
+                    }
                 }
             }
         }
-        return "values used by " + c.document().file() + ":\n" + table.render("  ") + "model: "
-                + c.document().stack().heatFlowInWords() + "\n";
+        StringBuilder models = new StringBuilder();
+        if (!named) {
+            models.append("model: ").append(doc.stack().heatFlowInWords()).append('\n');
+        } else {
+            for (Sample s : doc.samples()) {
+                models.append("sample ").append(s.name()).append(": ").append(s.stack().heatFlowInWords())
+                        .append(s.geometry() != null ? " Its own geometry: " + s.geometry().get("type") + "." : "")
+                        .append('\n');
+            }
+        }
+        return "values used by " + doc.file() + ":\n" + table.render("  ") + models;
+    }
+
+    /** The sample whose stack a value belongs to, from its JSON path ({@code samples[2].stack…}). */
+    private static String sampleOf(CaseDocument doc, ValueOrigin o) {
+        for (Sample s : doc.samples()) {
+            if (o.path().startsWith(s.path() + ".")) {
+                return s.name();
+            }
+        }
+        return "";
     }
 
     /** A number as it is, a list of numbers by count and ends; null for what is not a number (a type name). */

@@ -11,6 +11,7 @@ import lamella.api.InputException;
 import lamella.api.ModelCatalog;
 import lamella.api.ModelEvaluationException;
 import lamella.api.ParameterRef;
+import lamella.api.Sample;
 import lamella.api.SelfHeating;
 import lamella.api.Simulation;
 import lamella.api.Technique;
@@ -47,7 +48,7 @@ final class FitProblem {
         spec.uncertain().forEach(u -> named.add(u.ref()));
         List<PreparedDataset> prepared = new ArrayList<>();
         for (DatasetSpec d : spec.datasets()) {
-            prepared.add(prepare(doc, d, catalog, spec.weighting(), named));
+            prepared.add(prepare(doc, d, catalog, spec, named));
         }
         FitProblem p = new FitProblem(prepared, spec, catalog);
         for (FreeInput f : spec.free()) {
@@ -63,15 +64,25 @@ final class FitProblem {
         return p;
     }
 
-    private static PreparedDataset prepare(CaseDocument doc, DatasetSpec d, ModelCatalog catalog,
-                                           FitSpec.Weighting weighting, List<ParameterRef> named)
+    private static PreparedDataset prepare(CaseDocument doc, DatasetSpec d, ModelCatalog catalog, FitSpec spec,
+                                           List<ParameterRef> named)
             throws InputException {
-        Block geometry = d.geometry() != null ? d.geometry() : doc.geometry();
+        FitSpec.Weighting weighting = spec.weighting();
+        Sample sample = d.sampleIn(doc);
+        Block geometry = d.geometry() != null ? d.geometry() : sample.geometryOr(doc.geometry());
         Block measurement = d.measurement() != null ? d.measurement() : doc.measurement();
-        CaseModel model = new CaseModel(doc.stack(), geometry, measurement).apartFor(named);
+        List<ParameterRef> own = named.stream().filter(r -> r.scope() == ParameterRef.Scope.LAYER
+                && (r.sample() == null || r.sample().equals(sample.name()))).map(ParameterRef::local).toList();
+        CaseModel model = new CaseModel(sample.stack(), geometry, measurement).apartFor(own);
         Simulation sim = model.simulation(catalog);
         Technique t = sim.technique();
         String signal = signalOf(d, t);
+        if (d.gain() != null && FitBlockReader.GAINLESS_SIGNALS.contains(signal)) {
+            throw InputException.at(d.path() + ".gain", "a gain multiplies a signal, and " + signal + " carries"
+                    + " none (a phase or ratio does not scale with the detector); leave \"gain\" out or fit an"
+                    + " amplitude-like signal (" + String.join(", ", t.signalColumns().stream()
+                    .filter(c -> !FitBlockReader.GAINLESS_SIGNALS.contains(c)).toList()) + ")");
+        }
         DataTable table = DataTable.read(d.file());
         String xColumn = t.xColumn().orElseThrow(() -> InputException.at(d.path(), "technique '" + t.type()
                 + "' has no x axis; its data cannot be fitted as a curve"));
@@ -107,7 +118,8 @@ final class FitProblem {
                     + " no column '" + sigmaColumn + "'");
         }
         return new PreparedDataset(d, model, t.type(), xColumn, signal, x,
-                RowSelection.select(table.column(signal), keep), sigma);
+                RowSelection.select(table.column(signal), keep), sigma,
+                d.gain() != null ? spec.gains().get(d.gain()) : 1.0);
     }
 
     /** The dataset's signal column, or the technique's usual one, checked against what the technique gives. */
@@ -140,9 +152,10 @@ final class FitProblem {
         }
     }
 
-    /** What a path of this fit moves, in words for its labels (the stack is shared by every dataset). */
+    /** What a path of this fit moves, in words for its labels, in the first dataset whose sample it reaches. */
     String quantity(ParameterRef ref) {
-        return datasets.get(0).model.quantity(ref);
+        return datasets.stream().filter(d -> d.uses(ref)).findFirst().orElse(datasets.get(0)).model
+                .quantity(ref.local());
     }
 
     int points() {

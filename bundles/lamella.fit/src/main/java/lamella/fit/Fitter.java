@@ -10,6 +10,7 @@ import lamella.api.InputException;
 import lamella.api.ModelCatalog;
 import lamella.api.Names;
 import lamella.api.ParameterRef;
+import lamella.api.Sample;
 import lamella.api.Simulation;
 import lamella.api.StackKernels;
 import lamella.api.Technique;
@@ -154,6 +155,7 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
         try {
             ModelCatalog catalog = catalog();
             if (dataset < 0) {
+                doc.requireOneSample("sensitivity without --dataset");
                 CaseModel model = new CaseModel(doc.stack(), doc.geometry(), doc.measurement());
                 Simulation sim = model.simulation(catalog);
                 double[] x = sim.measurement().xValues();
@@ -174,17 +176,23 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
             String s = signal != null ? chosen(d.model.simulation(catalog).technique(), signal) : d.signal;
             SensitivityTable t = Sensitivities.of(d.model, catalog, d.xColumn, d.x, s);
             return new SensitivityTable(t.xColumn(), t.x(), t.signal(), t.phaseLike(),
-                    t.parameters().stream().map(r -> named(r, d.spec)).toList(), t.quantities(), t.values());
+                    t.parameters().stream().map(r -> named(r, d.spec, doc)).toList(), t.quantities(), t.values());
         } catch (InputException e) {
             throw doc.locate(e);
         }
     }
 
     /** A dataset's own geometry or measurement block is addressed through the dataset, as the fit block does. */
-    private static ParameterRef named(ParameterRef r, DatasetSpec d) {
+    private static ParameterRef named(ParameterRef r, DatasetSpec d, CaseDocument doc) {
         boolean own = (r.scope() == ParameterRef.Scope.GEOMETRY && d.geometry() != null)
                 || (r.scope() == ParameterRef.Scope.MEASUREMENT && d.measurement() != null);
-        return own ? r.inDataset(d.index()) : r;
+        if (own) {
+            return r.inDataset(d.index());
+        }
+        Sample s = d.sampleIn(doc);
+        boolean ofSample = r.scope() == ParameterRef.Scope.LAYER
+                || (r.scope() == ParameterRef.Scope.GEOMETRY && s.geometry() != null);
+        return doc.severalSamples() && ofSample ? r.inSample(s.name()) : r;
     }
 
     private static String chosen(Technique t, String signal) throws InputException {

@@ -22,9 +22,17 @@ final class PreparedDataset {
     final double[] x;
     final double[] y;
     final double[] dataSigma;
+    /** The value of its gain where the fit holds it fixed (1 without a gain). */
+    final double gain;
 
     PreparedDataset(DatasetSpec spec, CaseModel model, String technique, String xColumn, String signal, double[] x,
                     double[] y, double[] dataSigma) {
+        this(spec, model, technique, xColumn, signal, x, y, dataSigma, 1.0);
+    }
+
+    PreparedDataset(DatasetSpec spec, CaseModel model, String technique, String xColumn, String signal, double[] x,
+                    double[] y, double[] dataSigma, double gain) {
+        this.gain = gain;
         this.spec = spec;
         this.model = model;
         this.technique = technique;
@@ -39,22 +47,42 @@ final class PreparedDataset {
         return x.length;
     }
 
-    /** Whether a parameter of the fit reaches this dataset's inputs. */
+    /**
+     * Whether a parameter of the fit reaches this dataset's inputs: a layer path without a sample reaches every
+     * dataset whose sample has the layer, one with a sample only that sample's; a geometry path reaches the
+     * datasets that use the block it names (the dataset's own, its sample's own, or the case's); a gain the
+     * datasets that name it.
+     */
     boolean uses(ParameterRef ref) {
-        if (ref.scope() == ParameterRef.Scope.LAYER) {
-            return true;
+        String sample = spec.sample() != null ? spec.sample().name() : "";
+        switch (ref.scope()) {
+            case LAYER:
+                return (ref.sample() == null || ref.sample().equals(sample))
+                        && model.stack().layer(ref.layer()).isPresent();
+            case GAIN:
+                return ref.key().equals(spec.gain());
+            default:
+                break;
         }
-        boolean own = (ref.scope() == ParameterRef.Scope.GEOMETRY ? spec.geometry() : spec.measurement()) != null;
-        return ref.dataset() < 0 ? !own : ref.dataset() == spec.index();
+        boolean geometry = ref.scope() == ParameterRef.Scope.GEOMETRY;
+        boolean own = (geometry ? spec.geometry() : spec.measurement()) != null;
+        if (ref.dataset() >= 0) {
+            return ref.dataset() == spec.index();
+        }
+        boolean sampleOwn = geometry && spec.sample() != null && spec.sample().geometry() != null;
+        if (ref.sample() != null) {
+            return !own && sampleOwn && ref.sample().equals(sample);
+        }
+        return !own && !sampleOwn;
     }
 
-    /** The model inputs with the given parameters set. */
+    /** The model inputs with the given parameters set (a gain is no input of the model: see {@link #evaluate}). */
     CaseModel with(List<ParameterRef> refs, double[] values) throws InputException {
         CaseModel m = model;
         for (int i = 0; i < refs.size(); i++) {
             ParameterRef r = refs.get(i);
-            if (uses(r)) {
-                m = m.with(r.dataset() < 0 ? r : new ParameterRef(r.scope(), null, r.key(), -1), values[i]);
+            if (r.scope() != ParameterRef.Scope.GAIN && uses(r)) {
+                m = m.with(r.local(), values[i]);
             }
         }
         return m;
@@ -65,10 +93,24 @@ final class PreparedDataset {
         return with(refs, values).simulation(catalog).cautions(x);
     }
 
-    /** The modelled signal at this dataset's x values. */
+    /** The modelled signal at this dataset's x values, times its gain. */
     double[] evaluate(ModelCatalog catalog, List<ParameterRef> refs, double[] values) throws InputException {
         Simulation s = with(refs, values).simulation(catalog);
         SignalTable t = s.run(x);
-        return t.column(signal);
+        double[] column = t.column(signal);
+        double g = gain;
+        for (int i = 0; i < refs.size(); i++) {
+            if (refs.get(i).scope() == ParameterRef.Scope.GAIN && uses(refs.get(i))) {
+                g = values[i];
+            }
+        }
+        if (g == 1.0) {
+            return column;
+        }
+        double[] out = new double[column.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = g * column[i];
+        }
+        return out;
     }
 }

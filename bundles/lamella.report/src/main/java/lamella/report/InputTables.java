@@ -9,7 +9,9 @@ import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.Layer;
 import lamella.api.ParameterRef;
+import lamella.api.Sample;
 import lamella.api.SelfHeating;
+import lamella.api.Stack;
 import lamella.api.Units;
 import lamella.api.ValueOrigin;
 import lamella.api.material.Material;
@@ -28,22 +30,25 @@ final class InputTables {
     }
 
     static void write(Html h, CaseDocument doc, FitOutcome o) {
-        Set<String> free = o.parameters().stream().map(FittedParameter::ref).filter(r -> r.scope() == ParameterRef.Scope.LAYER)
-                .map(ParameterRef::toString).collect(Collectors.toSet());
-        h.element("p", doc.stack().heatFlowInWords());
-        h.element("h3", doc.stack().heatsBothWays() ? "Layers, from the heated plane down"
-                : "Layers, from the heated surface down");
-        layerTable(h, free, doc.stack().layers(), "G to the layer below (W/(m² K))", true);
-        if (doc.stack().heatsBothWays()) {
-            h.element("h3", "Layers above the heated plane, from it up");
-            layerTable(h, free, doc.stack().above(), "G toward the heated plane (W/(m² K))", false);
+        if (doc.samples().get(0).named()) {
+            h.element("p", "The case holds " + doc.samples().size() + " sample" + (doc.samples().size() == 1 ? ""
+                    : "s") + ", each with its own stack; every dataset names the sample it was measured on. A layer"
+                    + " input named without a sample is one value shared by every sample that has that layer;"
+                    + " samples[NAME].… names one sample's own.");
         }
-        h.raw("<p class=\"note\">").text("Below the last layer: " + doc.stack().bottom().caseName() + ". "
-                        + (doc.stack().heatsBothWays() ? "Above the outermost layer above: "
-                        + doc.stack().top().caseName() + ". " : ""))
-                .raw("<span class=\"free-key\">Shaded</span>")
-                .text(" values are fitted; the case file's starting value is shown here, the result above.")
-                .raw("</p>\n");
+        for (Sample s : doc.samples()) {
+            Set<String> free = o.parameters().stream().map(FittedParameter::ref)
+                    .filter(r -> r.scope() == ParameterRef.Scope.LAYER
+                            && (r.sample() == null || r.sample().equals(s.name())))
+                    .map(r -> r.local().toString()).collect(Collectors.toSet());
+            if (s.named()) {
+                h.element("h3", "Sample " + s.name());
+            }
+            stack(h, free, s.stack());
+            if (s.geometry() != null && doc.severalSamples()) {
+                block(h, "Geometry of sample " + s.name(), s.geometry());
+            }
+        }
         libraryValues(h, doc);
         selfHeating(h, o);
         if (doc.states("geometry")) {
@@ -57,6 +62,23 @@ final class InputTables {
         if (doc.root().get("fit") instanceof Block fit) {
             block(h, "Fit settings", fit);
         }
+    }
+
+    private static void stack(Html h, Set<String> free, Stack stack) {
+        h.element("p", stack.heatFlowInWords());
+        h.element("h3", stack.heatsBothWays() ? "Layers, from the heated plane down"
+                : "Layers, from the heated surface down");
+        layerTable(h, free, stack.layers(), "G to the layer below (W/(m² K))", true);
+        if (stack.heatsBothWays()) {
+            h.element("h3", "Layers above the heated plane, from it up");
+            layerTable(h, free, stack.above(), "G toward the heated plane (W/(m² K))", false);
+        }
+        h.raw("<p class=\"note\">").text("Below the last layer: " + stack.bottom().caseName() + ". "
+                        + (stack.heatsBothWays() ? "Above the outermost layer above: "
+                        + stack.top().caseName() + ". " : ""))
+                .raw("<span class=\"free-key\">Shaded</span>")
+                .text(" values are fitted; the case file's starting value is shown here, the result above.")
+                .raw("</p>\n");
     }
 
     private static void layerTable(Html h, Set<String> free, List<Layer> layers, String conductanceHeading,

@@ -11,6 +11,8 @@ import java.util.Map;
 import lamella.api.Block;
 import lamella.api.CaseDocument;
 import lamella.api.Layer;
+import lamella.api.Sample;
+import lamella.api.Stack;
 import lamella.api.ValueOrigin;
 import lamella.api.fit.BudgetLine;
 import lamella.api.fit.DatasetFit;
@@ -65,23 +67,38 @@ final class ResultJson {
         }
     }
 
+    private static void stack(ObjectNode n, Stack s) {
+        layers(n.putArray("layers"), s.layers());
+        n.put("bottom", s.bottom().caseName());
+        if (s.heatsBothWays()) {
+            layers(n.putArray("above"), s.above());
+            n.put("top", s.top().caseName());
+        }
+        if (s.optics().inDepth()) {
+            number(n, "absorption_depth_m", s.optics().absorption());
+            number(n, "sensing_depth_m", s.optics().sensing());
+            n.put("sensing_follows_absorption", s.optics().sensingFollows());
+        }
+        n.put("model", s.heatFlowInWords());
+    }
+
     private static ObjectNode caseNode(CaseDocument doc) {
         ObjectNode c = MAPPER.createObjectNode();
         c.put("file", doc.file() == null ? null : doc.file().toString());
         c.put("description", CaseText.description(doc));
-        ObjectNode stack = c.putObject("stack");
-        layers(stack.putArray("layers"), doc.stack().layers());
-        stack.put("bottom", doc.stack().bottom().caseName());
-        if (doc.stack().heatsBothWays()) {
-            layers(stack.putArray("above"), doc.stack().above());
-            stack.put("top", doc.stack().top().caseName());
+        if (doc.samples().get(0).named()) {
+            ArrayNode samples = c.putArray("samples");
+            for (Sample s : doc.samples()) {
+                ObjectNode n = samples.addObject();
+                n.put("name", s.name());
+                stack(n.putObject("stack"), s.stack());
+                if (s.geometry() != null) {
+                    n.set("geometry", block(s.geometry()));
+                }
+            }
+        } else {
+            stack(c.putObject("stack"), doc.stack());
         }
-        if (doc.stack().optics().inDepth()) {
-            number(stack, "absorption_depth_m", doc.stack().optics().absorption());
-            number(stack, "sensing_depth_m", doc.stack().optics().sensing());
-            stack.put("sensing_follows_absorption", doc.stack().optics().sensingFollows());
-        }
-        stack.put("model", doc.stack().heatFlowInWords());
         ArrayNode library = c.putArray("library_values");
         for (ValueOrigin v : doc.libraryValues()) {
             library.add(MAPPER.valueToTree(v.provenance()));

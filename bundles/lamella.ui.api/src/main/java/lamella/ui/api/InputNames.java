@@ -26,9 +26,11 @@ public final class InputNames {
     /** "film · Λ through", "geometry · pump radius", "dataset 2 · geometry · pump radius" (datasets numbered as the case file
      * numbers them, from 0). */
     public static String of(ParameterRef ref) {
-        String prefix = ref.dataset() >= 0 ? "dataset " + ref.dataset() + " · " : "";
+        String prefix = ref.dataset() >= 0 ? "dataset " + ref.dataset() + " · "
+                : ref.sample() != null ? "sample " + ref.sample() + " · " : "";
         return switch (ref.scope()) {
-            case LAYER -> ref.layer() + " · " + LAYER_KEYS.getOrDefault(ref.key(), key(ref.key()));
+            case GAIN -> "gain · " + ref.key();
+            case LAYER -> prefix + ref.layer() + " · " + LAYER_KEYS.getOrDefault(ref.key(), key(ref.key()));
             case GEOMETRY -> prefix + "geometry · " + key(ref.key());
             case MEASUREMENT -> prefix + "measurement · " + key(ref.key());
         };

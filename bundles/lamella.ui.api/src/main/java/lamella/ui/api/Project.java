@@ -26,6 +26,7 @@ import lamella.api.CaseModel;
 import lamella.api.FileProblems;
 import lamella.api.InputException;
 import lamella.api.ParameterRef;
+import lamella.api.Sample;
 import lamella.api.fit.FitOutcome;
 import lamella.api.fit.FittedParameter;
 
@@ -68,6 +69,7 @@ public final class Project {
 
     private final CaseReader reader;
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
+    private int shownSample;
     private final EditHistory history = new EditHistory();
     private final Map<String, String> relocated = new HashMap<>();
     private final DataDigests dataDigests = new DataDigests();
@@ -175,9 +177,42 @@ public final class Project {
         return Optional.ofNullable(problem);
     }
 
-    /** The model inputs of the last accepted version. */
+    /** The model inputs of the last accepted version: of the sample shown, in a case of several. */
     public Optional<CaseModel> model() {
-        return current().map(d -> new CaseModel(d.stack(), d.geometry(), d.measurement()));
+        return current().map(d -> {
+            Sample s = d.samples().get(Math.min(shownSample, d.samples().size() - 1));
+            return new CaseModel(s.stack(), s.geometryOr(d.geometry()), d.measurement());
+        });
+    }
+
+    /** The names of the case's samples, in file order; empty for a case of one stack. */
+    public List<String> sampleNames() {
+        List<String> out = new ArrayList<>();
+        if (document.get("samples") instanceof ArrayNode a) {
+            a.forEach(s -> out.add(s.path("name").asText()));
+        }
+        return out;
+    }
+
+    /** Which sample the stack edits and the model show (its index in {@code samples}; 0 for a case of one stack). */
+    public int shownSample() {
+        return shownSample;
+    }
+
+    /** Shows another sample: the Stack panel then edits its layers, and the model curves are its own. */
+    public void showSample(int index) {
+        if (index < 0 || index >= Math.max(1, sampleNames().size())) {
+            throw new IllegalArgumentException("there is no sample " + index);
+        }
+        if (index != shownSample) {
+            shownSample = index;
+            fire(Change.INPUTS);
+        }
+    }
+
+    /** A copy of the stack object the Stack panel edits: the case's, or the shown sample's. */
+    public ObjectNode stackTree() {
+        return stackNode(document.deepCopy()).deepCopy();
     }
 
     /** The document as case-file text. */
@@ -331,7 +366,7 @@ public final class Project {
     }
 
     public void setBottom(String bottom) {
-        edit("set the stack's bottom to " + bottom, d -> objectAt(d, "stack").put("bottom", bottom));
+        edit("set the stack's bottom to " + bottom, d -> stackNode(d).put("bottom", bottom));
     }
 
     /** Replaces the case's geometry or measurement block. */
@@ -644,7 +679,9 @@ public final class Project {
         }
         edit("use fitted values", d -> {
             for (FittedParameter p : r.outcome().parameters()) {
-                holder(d, p.ref()).put(p.ref().key(), p.value());
+                for (ObjectNode holder : fittedHolders(d, p.ref())) {
+                    holder.put(p.ref().key(), p.value());
+                }
                 if (d.path("fit").get("free") instanceof ArrayNode free) {
                     int i = find(free, p.ref());
                     if (i >= 0 && free.get(i) instanceof ObjectNode e && e.has("initial")) {
@@ -746,7 +783,7 @@ public final class Project {
             CaseDocument d = reader.read(tmp);
             Path asFile = file != null ? file : folder.resolve("untitled.json");
             current = new CaseDocument(asFile, d.stack(), d.geometry(), d.measurement(), d.root(), d.lines(),
-                    d.origins());
+                    d.origins(), d.samples());
             problem = null;
         } catch (InputException e) {
             problem = new InputException(file, e.path(), e.line(), e.problem());
@@ -819,32 +856,80 @@ public final class Project {
         return c;
     }
 
-    private static ObjectNode holder(ObjectNode d, ParameterRef ref) {
+    /**
+     * The object that holds an input the panels edit: a layer of the shown sample (or of the one the path names), a
+     * geometry block (a sample's own where the path names one), a measurement block, or the fit's gains.
+     */
+    private ObjectNode holder(ObjectNode d, ParameterRef ref) {
+        if (ref.scope() == ParameterRef.Scope.GAIN) {
+            return objectAt(objectAt(d, "fit"), "gains");
+        }
+        int sample = ref.sample() == null ? shownSample : sampleNames().indexOf(ref.sample());
         if (ref.scope() == ParameterRef.Scope.LAYER) {
-            return layerNode(d, ref.layer());
+            return layerNode(d, ref.layer(), sample);
         }
         String block = ref.scope() == ParameterRef.Scope.GEOMETRY ? "geometry" : "measurement";
+        if (ref.sample() != null && d.get("samples") instanceof ArrayNode a && sample >= 0) {
+            return objectAt((ObjectNode) a.get(sample), block);
+        }
         if (ref.dataset() < 0) {
             return objectAt(d, block);
         }
         return objectAt((ObjectNode) fitArray(d, "datasets").get(ref.dataset()), block);
     }
 
-    private static ArrayNode layers(ObjectNode d) {
-        ObjectNode s = objectAt(d, "stack");
-        if (!(s.get("layers") instanceof ArrayNode a)) {
-            return s.putArray("layers");
+    /** Where a fitted value goes: a layer path without a sample into every sample that has the layer. */
+    private List<ObjectNode> fittedHolders(ObjectNode d, ParameterRef ref) {
+        if (ref.scope() != ParameterRef.Scope.LAYER || ref.sample() != null
+                || !(d.get("samples") instanceof ArrayNode a)) {
+            return List.of(holder(d, ref));
         }
-        return a;
+        List<ObjectNode> out = new ArrayList<>();
+        for (int i = 0; i < a.size(); i++) {
+            for (JsonNode l : layersOf(stackNode(d, i))) {
+                if (l.path("name").asText().equals(ref.layer()) && l instanceof ObjectNode o) {
+                    out.add(o);
+                }
+            }
+        }
+        return out;
     }
 
-    private static ObjectNode layerNode(ObjectNode d, String name) {
-        for (JsonNode l : layers(d)) {
+    private ObjectNode stackNode(ObjectNode d) {
+        return stackNode(d, shownSample);
+    }
+
+    /** The stack object of sample {@code index} of a {@code samples} case, else the case's {@code stack}. */
+    private static ObjectNode stackNode(ObjectNode d, int index) {
+        if (d.get("samples") instanceof ArrayNode a && !a.isEmpty()
+                && a.get(index >= 0 && index < a.size() ? index : 0) instanceof ObjectNode s) {
+            return objectAt(s, "stack");
+        }
+        return objectAt(d, "stack");
+    }
+
+    private ArrayNode layers(ObjectNode d) {
+        return layersOf(stackNode(d));
+    }
+
+    private ObjectNode layerNode(ObjectNode d, String name) {
+        return layerNode(d, name, shownSample);
+    }
+
+    private static ObjectNode layerNode(ObjectNode d, String name, int sample) {
+        for (JsonNode l : layersOf(stackNode(d, sample))) {
             if (l.path("name").asText().equals(name) && l instanceof ObjectNode o) {
                 return o;
             }
         }
         throw new IllegalArgumentException("no layer '" + name + "'");
+    }
+
+    private static ArrayNode layersOf(ObjectNode s) {
+        if (!(s.get("layers") instanceof ArrayNode a)) {
+            return s.putArray("layers");
+        }
+        return a;
     }
 
     private static ArrayNode fitArray(ObjectNode d, String key) {
@@ -873,9 +958,13 @@ public final class Project {
             case LAYER -> e.put("layer", ref.layer()).put("property", ref.key());
             case GEOMETRY -> e.put("geometry", ref.key());
             case MEASUREMENT -> e.put("measurement", ref.key());
+            case GAIN -> e.put("gain", ref.key());
         }
         if (ref.dataset() >= 0) {
             e.put("dataset", ref.dataset());
+        }
+        if (ref.sample() != null) {
+            e.put("sample", ref.sample());
         }
         return e;
     }
@@ -891,12 +980,17 @@ public final class Project {
 
     private static Optional<ParameterRef> refOf(JsonNode e) {
         int dataset = e.path("dataset").asInt(-1);
+        String sample = e.has("sample") ? e.path("sample").asText() : null;
+        if (e.has("gain")) {
+            return Optional.of(ParameterRef.gain(e.path("gain").asText()));
+        }
         if (e.has("layer")) {
-            return Optional.of(ParameterRef.layer(e.path("layer").asText(), e.path("property").asText()));
+            ParameterRef r = ParameterRef.layer(e.path("layer").asText(), e.path("property").asText());
+            return Optional.of(sample != null ? r.inSample(sample) : r);
         }
         if (e.has("geometry")) {
             ParameterRef r = ParameterRef.geometry(e.path("geometry").asText());
-            return Optional.of(dataset >= 0 ? r.inDataset(dataset) : r);
+            return Optional.of(dataset >= 0 ? r.inDataset(dataset) : sample != null ? r.inSample(sample) : r);
         }
         if (e.has("measurement")) {
             ParameterRef r = ParameterRef.measurement(e.path("measurement").asText());

@@ -5,5 +5,5 @@
  * {@link lamella.ui.api.Workbench#background}.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.3.0")
+@org.osgi.annotation.versioning.Version("0.4.0")
 package lamella.ui.api;

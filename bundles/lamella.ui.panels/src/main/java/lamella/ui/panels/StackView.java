@@ -53,6 +53,9 @@ final class StackView implements PanelView {
     private final StatusLine status;
     private final Label selectedLabel;
     private final Combo roleCombo;
+    /** The sample whose stack is shown, in a case of several samples; hidden otherwise. */
+    private final Composite sampleRow;
+    private final Combo sampleCombo;
     private final Text sigmaText;
     private final CrossSection drawing;
     private final Project.Listener listener = c -> refresh();
@@ -68,6 +71,21 @@ final class StackView implements PanelView {
         this.project = workbench.project();
         root = new Composite(parent, SWT.NONE);
         root.setLayout(new GridLayout(1, false));
+        sampleRow = new Composite(root, SWT.NONE);
+        GridLayout srl = new GridLayout(2, false);
+        srl.marginWidth = 0;
+        srl.marginHeight = 0;
+        sampleRow.setLayout(srl);
+        sampleRow.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        new Label(sampleRow, SWT.NONE).setText("Sample:");
+        sampleCombo = new Combo(sampleRow, SWT.READ_ONLY);
+        sampleCombo.setToolTipText("the sample whose stack this panel shows and edits; a role set here names the"
+                + " layer in every sample that has it");
+        sampleCombo.addListener(SWT.Selection, e -> {
+            if (sampleCombo.getSelectionIndex() >= 0) {
+                project.showSample(sampleCombo.getSelectionIndex());
+            }
+        });
         // The table on top across the whole width, so that every column stays in view; the drawing below it.
         SashForm sash = new SashForm(root, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
@@ -199,6 +217,25 @@ final class StackView implements PanelView {
         }
     }
 
+    /** The sample chooser: shown with the case's sample names when it has a samples list. */
+    private void showSamples() {
+        List<String> samples = project.sampleNames();
+        boolean show = !samples.isEmpty();
+        GridData gd = (GridData) sampleRow.getLayoutData();
+        if (gd.exclude == show || sampleRow.getVisible() != show) {
+            gd.exclude = !show;
+            sampleRow.setVisible(show);
+            root.layout(true, true);
+        }
+        if (show && !List.of(sampleCombo.getItems()).equals(samples)) {
+            sampleCombo.setItems(samples.toArray(String[]::new));
+            sampleRow.layout(true);
+        }
+        if (show && sampleCombo.getSelectionIndex() != project.shownSample()) {
+            sampleCombo.select(Math.min(project.shownSample(), samples.size() - 1));
+        }
+    }
+
     private static Button button(Composite parent, String text, Runnable action) {
         Button b = new Button(parent, SWT.PUSH);
         b.setText(text);
@@ -211,7 +248,8 @@ final class StackView implements PanelView {
         if (root.isDisposed()) {
             return;
         }
-        JsonNode layers = project.tree().path("stack").path("layers");
+        showSamples();
+        JsonNode layers = project.stackTree().path("layers");
         List<String> now = new ArrayList<>();
         layers.forEach(l -> now.add(l.path("name").asText()));
         names = now;
