@@ -43,7 +43,7 @@ final class ParquetMaps {
         try {
             table = spark.read().parquet(file.toString());
         } catch (RuntimeException e) {
-            throw new InputException(file, null, -1, "not a readable Parquet file: " + firstLine(e));
+            throw new InputException(file, null, -1, "not a readable Parquet file: " + SparkMain.firstLine(e));
         }
         List<String> header = Arrays.asList(table.columns());
         int[] at = MapData.columns(file, 0, header, xColumn, signal);
@@ -69,7 +69,8 @@ final class ParquetMaps {
                 rows.add(xm, ym, xv, yv, text(r, at[3]), sv, at[4] < 0 ? "" : text(r, at[4]), n);
             }
         } catch (RuntimeException e) {
-            throw new InputException(file, null, -1, "row " + (n + 1) + ": cannot be read: " + firstLine(e));
+            throw new InputException(file, null, -1, "row " + (n + 1) + ": cannot be read: "
+                    + SparkMain.firstLine(e));
         }
         return rows.finish();
     }
@@ -145,11 +146,5 @@ final class ParquetMaps {
                     + "' is not a finite number");
         }
         return v;
-    }
-
-    private static String firstLine(Throwable e) {
-        String m = String.valueOf(e.getMessage());
-        int nl = m.indexOf('\n');
-        return nl < 0 ? m : m.substring(0, nl);
     }
 }

@@ -36,9 +36,6 @@ class BatchJobTest {
     @TempDir
     Path dir;
 
-    record Run(int status, String out, String err) {
-    }
-
     @AfterEach
     void clearFault() {
         System.clearProperty(JobSettings.FAIL_TASK);
@@ -90,17 +87,8 @@ class BatchJobTest {
         return in;
     }
 
-    Run spark(String... args) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        System.setProperty(JobSettings.CWD, dir.toString());
-        try {
-            int status = SparkMain.run(List.of(args), new PrintStream(out, true, StandardCharsets.UTF_8),
-                    new PrintStream(err, true, StandardCharsets.UTF_8));
-            return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.clearProperty(JobSettings.CWD);
-        }
+    SparkRun spark(String... args) {
+        return SparkRun.in(dir, args);
     }
 
     /** The runtime's own batch loop into {@code out}. */
@@ -143,7 +131,7 @@ class BatchJobTest {
     void everyCaseAsTheLocalBatchDoesItWithTheBrokenOneIsolated() throws Exception {
         Path in = cases();
         local(in, dir.resolve("local"));
-        Run r = spark("batch", "cases", "--out", "spark", "--threads", "2");
+        SparkRun r = spark("batch", "cases", "--out", "spark", "--threads", "2");
         assertEquals(1, r.status(), r.err());
         assertTrue(r.out().contains("4 cases: 3 fitted, 0 already done, 1 failed"), r.out());
         assertTrue(r.err().contains("film-z-broken: FAILED") && r.err().contains("missing.csv"), r.err());
@@ -151,7 +139,7 @@ class BatchJobTest {
         assertEquals(3, results(dir.resolve("spark")));
         assertEquals(Files.readString(dir.resolve("local/results/film-b.json")).length(),
                 Files.readString(dir.resolve("spark/results/film-b.json")).length());
-        Run again = spark("batch", "cases", "--out", "spark", "--threads", "2");
+        SparkRun again = spark("batch", "cases", "--out", "spark", "--threads", "2");
         assertTrue(again.out().contains("4 cases: 0 fitted, 3 already done, 1 failed"), again.out());
     }
 
@@ -160,18 +148,18 @@ class BatchJobTest {
         Path in = cases();
         local(in, dir.resolve("local"));
         System.setProperty(JobSettings.FAIL_TASK, "1");
-        Run retried = spark("batch", "cases", "--out", "retried", "--master", "local[2,3]");
+        SparkRun retried = spark("batch", "cases", "--out", "retried", "--master", "local[2,3]");
         assertEquals(1, retried.status(), retried.err());
         assertSameTables(dir.resolve("local/results.csv"), dir.resolve("retried/results.csv"));
         // No retries: case 3 fails, the job fails after the cases before it are written.
         System.setProperty(JobSettings.FAIL_TASK, "3");
-        Run failed = spark("batch", "cases", "--out", "resumed", "--master", "local[1]", "--partitions", "4");
+        SparkRun failed = spark("batch", "cases", "--out", "resumed", "--master", "local[1]", "--partitions", "4");
         assertEquals(1, failed.status(), failed.err());
         assertTrue(failed.err().contains("the same command again fits only the rest"), failed.err());
         assertFalse(Files.exists(dir.resolve("resumed/results.csv")), "no table before every case is done");
         assertEquals(3, results(dir.resolve("resumed")));
         System.clearProperty(JobSettings.FAIL_TASK);
-        Run resumed = spark("batch", "cases", "--out", "resumed", "--master", "local[2]");
+        SparkRun resumed = spark("batch", "cases", "--out", "resumed", "--master", "local[2]");
         assertTrue(resumed.out().contains("0 fitted, 3 already done, 1 failed"), resumed.out());
         assertSameTables(dir.resolve("local/results.csv"), dir.resolve("resumed/results.csv"));
     }
@@ -179,10 +167,10 @@ class BatchJobTest {
     @Test
     void anOutputThatIsAnInputIsRefusedBeforeAnythingRuns() throws Exception {
         Path in = cases();
-        Run r = spark("batch", "cases", "--out", "cases");
+        SparkRun r = spark("batch", "cases", "--out", "cases");
         assertEquals(2, r.status(), r.err());
         assertTrue(r.err().contains("nothing was written"), r.err());
-        Run missing = spark("batch", "no-such-folder", "--out", "x");
+        SparkRun missing = spark("batch", "no-such-folder", "--out", "x");
         assertEquals(2, missing.status(), missing.err());
         assertTrue(missing.err().contains("no-such-folder"), missing.err());
         assertTrue(Files.isDirectory(in));

@@ -4,10 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,9 +38,6 @@ class MapJobTest {
     @TempDir
     Path dir;
 
-    record Run(int status, String out, String err) {
-    }
-
     @AfterEach
     void clearFault() {
         System.clearProperty(JobSettings.FAIL_TASK);
@@ -72,17 +66,8 @@ class MapJobTest {
         return dir.resolve("case.json");
     }
 
-    Run spark(String... args) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        System.setProperty(JobSettings.CWD, dir.toString());
-        try {
-            int status = SparkMain.run(List.of(args), new PrintStream(out, true, StandardCharsets.UTF_8),
-                    new PrintStream(err, true, StandardCharsets.UTF_8));
-            return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.clearProperty(JobSettings.CWD);
-        }
+    SparkRun spark(String... args) {
+        return SparkRun.in(dir, args);
     }
 
     /** The same map with the local engine (2 threads), written by the same writer into {@code local}. */
@@ -131,7 +116,7 @@ class MapJobTest {
     void equalsTheLocalEngineToTheLastBitAndWritesParquetToo() throws Exception {
         Path caseFile = demoCase();
         local(caseFile, dir.resolve("local"));
-        Run r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+        SparkRun r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
         assertEquals(0, r.status(), r.err());
         assertSameMaps(dir.resolve("local/map.csv"), dir.resolve("spark/map.csv"));
         assertEquals(Files.readString(dir.resolve("local/map.csv")), Files.readString(dir.resolve("spark/map.csv")));
@@ -164,7 +149,7 @@ class MapJobTest {
         local(caseFile, dir.resolve("local"));
         System.setProperty(JobSettings.FAIL_TASK, "1");
         // local[2,3]: two threads, a task may fail three times before the job does.
-        Run r = spark("map", "case.json", "--out", "spark", "--master", "local[2,3]");
+        SparkRun r = spark("map", "case.json", "--out", "spark", "--master", "local[2,3]");
         assertEquals(0, r.status(), r.err());
         assertSameMaps(dir.resolve("local/map.csv"), dir.resolve("spark/map.csv"));
         Set<String> seen = new HashSet<>();
@@ -188,7 +173,7 @@ class MapJobTest {
         assertTrue(tiles.size() >= 3, "the test map needs several tiles, has " + tiles.size());
         // No retries (local[1]): the last tile fails, the job fails after the tiles before it are journaled.
         System.setProperty(JobSettings.FAIL_TASK, Integer.toString(tiles.size() - 1));
-        Run failed = spark("map", "case.json", "--out", "spark", "--master", "local[1]", "--partitions",
+        SparkRun failed = spark("map", "case.json", "--out", "spark", "--master", "local[1]", "--partitions",
                 Integer.toString(tiles.size()));
         assertEquals(1, failed.status(), failed.err());
         assertTrue(failed.err().contains("the same command again fits only the rest"), failed.err());
@@ -199,7 +184,7 @@ class MapJobTest {
         }
         assertEquals(tiles.size() - 1, journaled);
         System.clearProperty(JobSettings.FAIL_TASK);
-        Run resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+        SparkRun resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
         assertEquals(0, resumed.status(), resumed.err());
         assertTrue(resumed.out().contains("read back"), resumed.out());
         assertEquals(Files.readString(dir.resolve("local/map.csv")), Files.readString(dir.resolve("spark/map.csv")));
@@ -230,7 +215,7 @@ class MapJobTest {
         long kept = tiles(journal);
         assertTrue(kept >= 1, "a tile journaled before the kill");
         assertFalse(Files.exists(dir.resolve("spark/map.csv")), "no map from a killed run");
-        Run resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+        SparkRun resumed = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
         assertEquals(0, resumed.status(), resumed.err());
         assertTrue(resumed.out().contains("read back"), resumed.out());
         assertEquals(Files.readString(dir.resolve("local/map.csv")), Files.readString(dir.resolve("spark/map.csv")));
@@ -259,7 +244,7 @@ class MapJobTest {
         }
         Files.writeString(caseFile, Files.readString(caseFile).replace("\"data\": \"map.csv\"",
                 "\"data\": \"map.parquet\""));
-        Run r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+        SparkRun r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
         assertEquals(0, r.status(), r.err());
         assertEquals(Files.readString(dir.resolve("local/map.csv")), Files.readString(dir.resolve("spark/map.csv")));
     }
@@ -277,7 +262,7 @@ class MapJobTest {
         }
         Files.writeString(caseFile, Files.readString(caseFile).replace("\"data\": \"map.csv\"",
                 "\"data\": \"map.parquet\""));
-        Run r = spark("map", "case.json", "--out", "spark", "--master", "local[1]");
+        SparkRun r = spark("map", "case.json", "--out", "spark", "--master", "local[1]");
         assertEquals(2, r.status(), r.err());
         assertTrue(r.err().contains("map.parquet") && r.err().contains("phase_deg"), r.err());
         assertFalse(Files.exists(dir.resolve("spark/map.csv")));
@@ -291,14 +276,14 @@ class MapJobTest {
         assertTrue(json.contains(film), "the demo case's film layer changed");
         Files.writeString(caseFile, json.replace(film,
                 "{\"name\": \"film\", \"thickness_m\": 4.0e-7, \"material\": \"fh-pecvd-oxide\"}"));
-        Run missing = spark("map", "case.json", "--out", "spark", "--master", "local[1]");
+        SparkRun missing = spark("map", "case.json", "--out", "spark", "--master", "local[1]");
         assertEquals(2, missing.status(), missing.err());
         assertTrue(missing.err().contains("fh-pecvd-oxide"), missing.err());
         // The invented demo facility library, configured as the runtime's setting would configure it.
         System.setProperty("lamella.materials.facility",
                 Path.of("../../demo-data/materials/fenwick-hall").toAbsolutePath().toString());
         try {
-            Run r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
+            SparkRun r = spark("map", "case.json", "--out", "spark", "--master", "local[2]");
             assertEquals(0, r.status(), r.err());
             assertTrue(Files.readAllLines(dir.resolve("spark/map.csv")).size() == POSITIONS + 1);
         } finally {
@@ -308,13 +293,13 @@ class MapJobTest {
 
     @Test
     void badUsageIsRefusedBeforeSparkStarts() {
-        Run none = spark("map", "case.json");
+        SparkRun none = spark("map", "case.json");
         assertEquals(2, none.status());
         assertTrue(none.err().contains("--out DIR is needed"), none.err());
-        Run parts = spark("map", "case.json", "--out", "o", "--partitions", "0");
+        SparkRun parts = spark("map", "case.json", "--out", "o", "--partitions", "0");
         assertEquals(2, parts.status());
         assertTrue(parts.err().contains("--partitions expects a whole number"), parts.err());
-        Run job = spark("unmix", "x");
+        SparkRun job = spark("unmix", "x");
         assertEquals(2, job.status());
         assertTrue(job.err().contains("which job?"), job.err());
     }
