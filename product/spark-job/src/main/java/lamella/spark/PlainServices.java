@@ -61,7 +61,7 @@ final class PlainServices {
             try {
                 o = loader.loadClass(d.implementation).getConstructor().newInstance();
             } catch (ReflectiveOperationException | LinkageError e) {
-                found.skipped.add(d.implementation + " (" + e + ")");
+                found.skipped.add(d.implementation + " (cannot be created here: " + e.getMessage() + ")");
                 continue;
             }
             if (geometry) {

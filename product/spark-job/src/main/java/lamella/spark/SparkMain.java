@@ -123,6 +123,9 @@ public final class SparkMain {
         try {
             err.printf(java.util.Locale.ROOT, "lamella %s: Spark %s on %s, started in %.1f s%n", job,
                     spark.version(), spark.sparkContext().master(), startup);
+            for (String left : JobModels.of(settings).services.skipped) {
+                err.println("lamella " + job + ": a plug-in component the Spark job cannot wire is left out: " + left);
+            }
             return job.equals("map") ? MapJob.run(spark, in, out, partitions, settings, stdout, err)
                     : BatchJob.run(spark, in, out, partitions, settings, stdout, err);
         } finally {
