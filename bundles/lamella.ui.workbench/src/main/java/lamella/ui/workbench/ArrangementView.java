@@ -336,6 +336,20 @@ final class ArrangementView {
         return (String) folder.getSelection().getData(PANEL);
     }
 
+    /** Stands in for the panels while the window opens, until the first {@link #rebuild()}. */
+    void showOpening() {
+        if (top != null && !top.isDisposed()) {
+            top.dispose();
+        }
+        Composite box = new Composite(host, SWT.NONE);
+        box.setLayout(new GridLayout());
+        Label l = new Label(box, SWT.CENTER);
+        l.setText("Opening the panels…");
+        l.setLayoutData(new GridData(SWT.CENTER, SWT.CENTER, true, true));
+        top = box;
+        host.layout(true, true);
+    }
+
     private static Control emptyNotice(Composite parent) {
         Composite box = new Composite(parent, SWT.NONE);
         box.setLayout(new GridLayout());

@@ -98,19 +98,30 @@ final class WorkbenchWindow implements Workbench {
         });
     }
 
-    /** Opens the window with the panels live now; panels that come later are added as they arrive. */
+    /**
+     * Opens the window at once with a placeholder where the panels go, then builds the panels live now on the next
+     * turn of the event loop (building their views is most of the workbench's first seconds); panels that come later
+     * are added as they arrive. Anything queued on the display after this, such as the window control's requests,
+     * runs after the panels are in.
+     */
     void open() {
         session.openInitial();
-        for (WorkbenchPanel p : services.panels()) {
-            addPanel(p);
-        }
         menus.install();
         drop.acceptOn(shell);
         status.showWork("");
         shell.addListener(SWT.Close, e -> e.doit = closing());
         placeWindow();
-        layout.rebuild();
+        layout.showOpening();
         shell.open();
+        display.asyncExec(() -> {
+            if (shell.isDisposed()) {
+                return;
+            }
+            for (WorkbenchPanel p : services.panels()) {
+                addPanel(p);
+            }
+            layout.rebuild();
+        });
         display.asyncExec(session::offerRecovery);
         display.timerExec(ProjectSession.RECOVERY_EVERY_MS, new Runnable() {
             @Override
