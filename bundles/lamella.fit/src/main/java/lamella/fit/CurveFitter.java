@@ -100,7 +100,7 @@ final class CurveFitter implements CurveFit {
         if (weights == null && spec.weighting() == FitSpec.Weighting.DATA) {
             throw new IllegalArgumentException("the fit asks for weights from the data, and this curve has no σ");
         }
-        return new FitRunner(problem(x, y, weights, start), InlineExecutor.INSTANCE, Progress.NONE).run(0,
+        return new FitRunner(problem(x, y, weights, start), InlineExecutor.INSTANCE, 1, Progress.NONE).run(0,
                 spec.seed());
     }
 

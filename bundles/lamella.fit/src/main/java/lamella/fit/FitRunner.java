@@ -33,14 +33,17 @@ final class FitRunner {
 
     private final FitProblem problem;
     private final ExecutorService pool;
+    private final int threads;
     private final Progress progress;
     private final Solver solver;
 
-    FitRunner(FitProblem problem, ExecutorService pool, Progress progress) {
+    /** @param threads how many threads the fit may occupy at once, the calling thread included */
+    FitRunner(FitProblem problem, ExecutorService pool, int threads, Progress progress) {
         this.problem = problem;
         this.pool = pool;
+        this.threads = threads;
         this.progress = progress;
-        this.solver = new Solver(problem, pool, progress);
+        this.solver = new Solver(problem, pool, threads, progress);
     }
 
     FitOutcome run(int monteCarloSamples, long seed) {
@@ -129,7 +132,7 @@ final class FitRunner {
             for (int a = 0; a < p; a++) {
                 linear[a] = fitted.get(a).sigma() / problem.free.get(a).dPdU(u[a]);
             }
-            mc = Optional.of(new MonteCarlo(problem, solver, pool, progress).run(monteCarloSamples, seed, u, unc,
+            mc = Optional.of(new MonteCarlo(problem, solver, pool, threads, progress).run(monteCarloSamples, seed, u, unc,
                     model, sigma, linear));
         }
         return new FitOutcome(fitted, correlation, datasets, budget, mc, warnings, solver.evaluations(), reduced,

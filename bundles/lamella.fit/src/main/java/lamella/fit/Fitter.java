@@ -1,8 +1,6 @@
 package lamella.fit;
 
 import java.util.List;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import lamella.api.CaseDocument;
 import lamella.api.CaseModel;
 import lamella.api.HeatingGeometry;
@@ -100,16 +98,7 @@ public final class Fitter implements FitService, PlanService, CurveFitService {
         }
         int samples = settings.monteCarloSamples() > 0 ? settings.monteCarloSamples() : spec.monteCarlo();
         long seed = settings.seed() != 0 ? settings.seed() : spec.seed();
-        ExecutorService pool = Executors.newFixedThreadPool(settings.threads(), r -> {
-            Thread t = new Thread(r, "lamella-fit");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            return new FitRunner(problem, pool, progress).run(samples, seed);
-        } finally {
-            pool.shutdownNow();
-        }
+        return new FitRunner(problem, FitThreads.POOL, settings.threads(), progress).run(samples, seed);
     }
 
     @Override

@@ -22,21 +22,22 @@ import lamella.api.fit.Progress;
  */
 final class MonteCarlo {
 
-    /**
-     * Worker tasks that share the samples: each takes the next sample until none is left, so the pool holds a few
-     * tasks however many samples are asked for, and an interrupt stops them between refits.
-     */
-    private static final int WORKERS = 64;
-
     private final FitProblem problem;
     private final Solver solver;
     private final ExecutorService pool;
+    /**
+     * Worker tasks that share the samples, one per thread the fit may occupy: each takes the next sample until none
+     * is left, so the pool holds a few tasks however many samples are asked for, and an interrupt stops them between
+     * refits.
+     */
+    private final int workers;
     private final Progress progress;
 
-    MonteCarlo(FitProblem problem, Solver solver, ExecutorService pool, Progress progress) {
+    MonteCarlo(FitProblem problem, Solver solver, ExecutorService pool, int threads, Progress progress) {
         this.problem = problem;
         this.solver = solver;
         this.pool = pool;
+        this.workers = Math.max(1, threads);
         this.progress = progress;
     }
 
@@ -50,7 +51,7 @@ final class MonteCarlo {
         AtomicInteger done = new AtomicInteger();
         double[][] results = new double[samples][];
         List<Future<?>> workers = new ArrayList<>();
-        for (int w = 0; w < Math.min(samples, WORKERS); w++) {
+        for (int w = 0; w < Math.min(samples, this.workers); w++) {
             workers.add(pool.submit(() -> {
                 for (int s = next.getAndIncrement(); s < samples; s = next.getAndIncrement()) {
                     EvaluationCancelledException.checkpoint();

@@ -50,16 +50,25 @@ final class Solver {
 
     private final FitProblem problem;
     private final ExecutorService pool;
+    /** How many threads a Jacobian's columns may occupy at once, the calling thread included. */
+    private final int threads;
     private final Progress progress;
     private final AtomicInteger evaluations = new AtomicInteger();
     private final ModelMemo memo = new ModelMemo();
-    /** The point and the weighted Jacobian the search last asked for (the search runs on one thread). */
-    private double[] jacobianPoint;
-    private double[][] jacobian;
+    /**
+     * The point and the weighted Jacobian one search last asked for. Each call of {@link #solve} has its own: Monte
+     * Carlo refits run several searches on one solver at once, and a shared one let a search stop on another's
+     * Jacobian (which made the Monte Carlo σ depend on the thread count in the sixth digit).
+     */
+    private static final class LastJacobian {
+        double[] point;
+        double[][] matrix;
+    }
 
-    Solver(FitProblem problem, ExecutorService pool, Progress progress) {
+    Solver(FitProblem problem, ExecutorService pool, int threads, Progress progress) {
         this.problem = problem;
         this.pool = pool;
+        this.threads = threads;
         this.progress = progress;
     }
 
@@ -81,6 +90,7 @@ final class Solver {
         for (int i = 0; i < n; i++) {
             target[i] = y[i] / sigma[i];
         }
+        LastJacobian last = new LastJacobian();
         ValueAndJacobianFunction f = new ValueAndJacobianFunction() {
             @Override
             public RealVector computeValue(double[] u) {
@@ -90,8 +100,8 @@ final class Solver {
             @Override
             public RealMatrix computeJacobian(double[] u) {
                 double[][] j = jacobian(u, uncertainValues, sigma, weighted(u, uncertainValues, sigma), parallel);
-                jacobianPoint = u.clone();
-                jacobian = j;
+                last.point = u.clone();
+                last.matrix = j;
                 return new Array2DRowRealMatrix(j, false);
             }
 
@@ -107,7 +117,7 @@ final class Solver {
                 .lazyEvaluation(true)
                 .target(target)
                 .parameterValidator(v -> new ArrayRealVector(clamp(v.toArray()), false))
-                .checker((iteration, previous, current) -> stepWithinNoise(previous, current, n))
+                .checker((iteration, previous, current) -> stepWithinNoise(previous, current, n, last))
                 .maxEvaluations(Integer.MAX_VALUE)
                 .maxIterations(MAX_ITERATIONS);
         // a relative 1e-8 in the cost and the parameters is far inside any measurement's uncertainty
@@ -129,16 +139,16 @@ final class Solver {
      * test holds whatever the weights), the linearised σ of the fit (common practice, no source). Never when the
      * residuals vanish or JᵀJ is singular: the optimizer's own tolerances decide then.
      */
-    private boolean stepWithinNoise(LeastSquaresProblem.Evaluation previous, LeastSquaresProblem.Evaluation current,
-                                    int n) {
+    private static boolean stepWithinNoise(LeastSquaresProblem.Evaluation previous,
+                                           LeastSquaresProblem.Evaluation current, int n, LastJacobian last) {
         double[] from = previous.getPoint().toArray();
         double[] to = current.getPoint().toArray();
         int p = from.length;
-        if (n <= p || jacobian == null || !Arrays.equals(from, jacobianPoint)) {
+        if (n <= p || last.matrix == null || !Arrays.equals(from, last.point)) {
             return false;
         }
         double[][] normal = new double[p][p];
-        for (double[] row : jacobian) {
+        for (double[] row : last.matrix) {
             for (int a = 0; a < p; a++) {
                 for (int b = 0; b < p; b++) {
                     normal[a][b] += row[a] * row[b];
@@ -234,33 +244,44 @@ final class Solver {
         double[] compute(int j);
     }
 
+    /**
+     * The columns spread over at most {@link #threads} lanes, each taking every lanes-th column; the calling thread
+     * runs the first lane itself instead of waiting idle, so two columns on two threads cost one hand-off.
+     */
     private double[][] columns(int count, boolean parallel, Column c) {
         double[][] out = new double[count][];
-        if (!parallel || count < 2) {
-            for (int j = 0; j < count; j++) {
-                out[j] = c.compute(j);
-            }
-            return out;
+        int lanes = parallel ? Math.min(count, threads) : 1;
+        List<Future<?>> futures = new ArrayList<>();
+        for (int lane = 1; lane < lanes; lane++) {
+            final int first = lane;
+            futures.add(pool.submit(() -> lane(out, first, lanes, c)));
         }
-        List<Future<double[]>> futures = new ArrayList<>();
-        for (int j = 0; j < count; j++) {
-            final int col = j;
-            futures.add(pool.submit(() -> c.compute(col)));
-        }
-        for (int j = 0; j < count; j++) {
-            try {
-                out[j] = futures.get(j).get();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new CancellationException("interrupted");
-            } catch (ExecutionException e) {
-                if (e.getCause() instanceof RuntimeException r) {
-                    throw r;
-                }
-                throw new ModelEvaluationException("a model evaluation failed: " + e.getCause(), e.getCause());
+        try {
+            lane(out, 0, lanes, c);
+            for (Future<?> f : futures) {
+                f.get();
             }
+        } catch (InterruptedException e) {
+            futures.forEach(f -> f.cancel(true));
+            Thread.currentThread().interrupt();
+            throw new CancellationException("interrupted");
+        } catch (ExecutionException e) {
+            futures.forEach(f -> f.cancel(true));
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new ModelEvaluationException("a model evaluation failed: " + e.getCause(), e.getCause());
+        } catch (RuntimeException e) {
+            futures.forEach(f -> f.cancel(true));
+            throw e;
         }
         return out;
+    }
+
+    private static void lane(double[][] out, int first, int lanes, Column c) {
+        for (int j = first; j < out.length; j += lanes) {
+            out[j] = c.compute(j);
+        }
     }
 
     private static double[] difference(double[] a, double[] b, double h) {

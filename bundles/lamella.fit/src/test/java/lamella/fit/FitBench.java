@@ -27,7 +27,12 @@ public final class FitBench {
               {"name": "base", "k_through_w_mk": %s, "heat_capacity_j_m3k": 1.63e6}]},
             "geometry": {"type": "gaussian", "pump_radius_m": 6e-6, "probe_radius_m": 4e-6}""";
 
+    /**
+     * Warm-up before timing: at least this many runs and this long, so that the JIT has compiled the model's hot
+     * loops (with 5 runs only, the median of 15 still included partly compiled code and read 40 % slow).
+     */
     private static final int WARM_UP = 5;
+    private static final long WARM_UP_NANOS = 3_000_000_000L;
 
     private FitBench() {
     }
@@ -58,7 +63,8 @@ public final class FitBench {
                     + "{\"layer\": \"base\", \"property\": \"k_through_w_mk\"}]}}"));
             FitSettings settings = FitSettings.defaults().withThreads(threads);
             Fitter fitter = Synthetic.fitter();
-            System.out.println("fits outside OSGi, " + threads + " thread(s), " + runs + " runs after " + WARM_UP + " warm-up runs"
+            System.out.println("fits outside OSGi, " + threads + " thread(s), " + runs + " runs after at least " + WARM_UP
+                    + " warm-up runs and " + WARM_UP_NANOS / 1_000_000_000L + " s"
                     + "; load average " + load());
             time("FDTR fit, 2 free, 30 points", runs, () -> fitter.fit(fdtr, settings, Progress.NONE));
             time("joint TDTR fit, 2 frequencies, 3 free, 80 points", Math.max(3, runs / 3),
@@ -78,7 +84,8 @@ public final class FitBench {
 
     private static void time(String label, int runs, Fit fit) throws Exception {
         FitOutcome o = null;
-        for (int i = 0; i < WARM_UP; i++) {
+        long warmUpStart = System.nanoTime();
+        for (int i = 0; i < WARM_UP || System.nanoTime() - warmUpStart < WARM_UP_NANOS; i++) {
             o = fit.run();
         }
         double[] ms = new double[runs];

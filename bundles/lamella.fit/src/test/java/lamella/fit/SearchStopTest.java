@@ -39,7 +39,7 @@ class SearchStopTest {
             FitProblem problem = FitProblem.of(doc, FitBlockReader.read(doc), Synthetic.CATALOG);
             ExecutorService pool = Executors.newFixedThreadPool(1);
             try {
-                Solver solver = new Solver(problem, pool, Progress.NONE);
+                Solver solver = new Solver(problem, pool, 1, Progress.NONE);
                 double[] y = problem.data();
                 double[] sigma = new double[y.length];
                 Arrays.fill(sigma, 0.1);
