@@ -55,7 +55,7 @@ class SimulateCommandTest {
     static final Map<String, String> HEADERS = Map.of(
             "fdtr", "frequency_hz,re_k_per_w,im_k_per_w,amplitude_k_per_w,phase_deg",
             "tdtr", "delay_s,in_phase,out_of_phase,ratio,phase_deg",
-            "sstr", "k_per_w",
+            "sstr", "pump_power_w,k_per_w,temperature_rise_k",
             "3omega", "frequency_hz,re_k_m_per_w,im_k_m_per_w,amplitude_k_m_per_w,phase_deg",
             "3omega-voltage", "frequency_hz,v3_in_phase_v,v3_out_of_phase_v,v3_amplitude_v,phase_deg");
 
@@ -182,6 +182,7 @@ class SimulateCommandTest {
             case "fdtr" -> doc.measurement().get("frequencies_hz");
             case "tdtr" -> doc.measurement().get("delays_s");
             case "3omega", "3omega-voltage" -> doc.measurement().get("drive_frequencies_hz");
+            case "sstr" -> doc.measurement().has("pump_powers_w") ? doc.measurement().get("pump_powers_w") : List.of(1.0);
             default -> List.of();
         };
 
@@ -193,16 +194,14 @@ class SimulateCommandTest {
         assertEquals(header, lines[0]);
         int columns = header.split(",").length;
         List<?> x = (List<?>) xs;
-        int rows = type.equals("sstr") ? 1 : x.size();
+        int rows = x.size();
         assertEquals(rows + 2, lines.length, "one row per x value");
         for (int i = 0; i < rows; i++) {
             String[] cells = lines[i + 1].split(",");
             assertEquals(columns, cells.length, lines[i + 1]);
             double[] v = Arrays.stream(cells).mapToDouble(SimulateCommandTest::cell).toArray();
-            if (!type.equals("sstr")) {
-                assertEquals((Double) x.get(i), v[0], Math.abs((Double) x.get(i)) * 1e-12,
-                        "the x column repeats the case's x values");
-            }
+            double xi = ((Number) x.get(i)).doubleValue();
+            assertEquals(xi, v[0], Math.abs(xi) * 1e-12, "the x column repeats the case's x values");
         }
     }
 
@@ -386,9 +385,15 @@ class SimulateCommandTest {
         }
 
         @Test
-        void sstrTakesNoFurtherKeys() throws Exception {
+        void sstrTakesPowersNotFrequencies() throws Exception {
             String json = caseOf(GAUSSIAN, "{\"type\": \"sstr\",\n    \"frequencies_hz\": [1e3]}");
-            bad(json, "measurement.frequencies_hz", "\"frequencies_hz\"", "no further keys");
+            bad(json, "measurement.frequencies_hz", "\"frequencies_hz\"", "pump_powers_w");
+        }
+
+        @Test
+        void sstrRefusesANegativePower() throws Exception {
+            String json = caseOf(GAUSSIAN, "{\"type\": \"sstr\",\n    \"pump_powers_w\": [1e-3,\n      -2e-3]}");
+            bad(json, "measurement.pump_powers_w[1]", "      -2e-3", "positive");
         }
 
         @ParameterizedTest
@@ -540,9 +545,30 @@ class SimulateCommandTest {
             Run r = run("isothermal.json");
             assertEquals(Command.OK, r.status(), r.err());
             String[] lines = r.out().split("\n");
-            assertEquals("k_per_w", lines[0]);
-            assertEquals(2, lines.length);
-            cell(lines[1]);
+            assertEquals("pump_power_w,k_per_w,temperature_rise_k", lines[0]);
+            assertEquals(2, lines.length, "without powers, one row at 1 W");
+            String[] cells = lines[1].split(",");
+            assertEquals(1.0, cell(cells[0]));
+            assertEquals(cell(cells[1]), cell(cells[2]), "at 1 W the rise is the rise per watt");
+        }
+
+        /** SSTR over pump power: the steady rise grows in proportion to the absorbed power (linear heat conduction). */
+        @Test
+        void sstrRiseIsTheRisePerWattTimesThePower() throws Exception {
+            writeCase("powers.json", adiabaticSstr().replace("adiabatic", "isothermal")
+                    .replace("{\"type\": \"sstr\"}", "{\"type\": \"sstr\", \"pump_powers_w\": [2e-3, 5e-3, 1e-2]}"));
+            Run r = run("powers.json");
+            assertEquals(Command.OK, r.status(), r.err());
+            String[] lines = r.out().split("\n");
+            assertEquals(4, lines.length, r.out());
+            double perWatt = cell(lines[1].split(",")[1]);
+            double[] powers = {2e-3, 5e-3, 1e-2};
+            for (int i = 0; i < 3; i++) {
+                String[] cells = lines[i + 1].split(",");
+                assertEquals(powers[i], cell(cells[0]), 1e-15);
+                assertEquals(perWatt, cell(cells[1]), 0.0, "the rise per watt is the same at every power");
+                assertEquals(perWatt * powers[i], cell(cells[2]), 1e-12 * perWatt * powers[i]);
+            }
         }
 
         @Test

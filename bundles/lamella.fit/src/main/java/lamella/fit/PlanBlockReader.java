@@ -52,7 +52,8 @@ final class PlanBlockReader {
     static final Map<String, PlanSpec.Noise> DEFAULT_NOISE = Map.of(
             "ratio", new PlanSpec.Noise(0.01, true, "default, 1 % of the ratio"),
             "phase_deg", new PlanSpec.Noise(0.2, false, "default, 0.2°"),
-            "k_per_w", new PlanSpec.Noise(0.01, true, "default, 1 % of the signal"));
+            "k_per_w", new PlanSpec.Noise(0.01, true, "default, 1 % of the signal"),
+            "temperature_rise_k", new PlanSpec.Noise(0.01, true, "default, 1 % of the signal"));
 
     private PlanBlockReader() {
     }

@@ -9,14 +9,14 @@ final class Signals {
     /**
      * Common practice, no source: TDTR fits the ratio −V_in/V_out (it cancels unknown gains), FDTR the phase after
      * the reference phase is removed, 3ω the in-phase temperature (or the in-phase third-harmonic voltage that
-     * reads it), SSTR its steady rise.
+     * reads it), SSTR the probe's rise over pump power (its slope is what the reference sample calibrates).
      */
     private static final Map<String, String> USUAL = Map.of(
             "tdtr", "ratio",
             "fdtr", "phase_deg",
             "3omega", "re_k_m_per_w",
             "3omega-voltage", "v3_in_phase_v",
-            "sstr", "k_per_w");
+            "sstr", "temperature_rise_k");
 
     private Signals() {
     }

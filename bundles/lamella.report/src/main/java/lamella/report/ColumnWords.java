@@ -18,6 +18,7 @@ final class ColumnWords {
             "in_phase", "in-phase signal V_in (K/W)",
             "out_of_phase", "out-of-phase signal V_out (K/W)",
             "k_per_w", "steady temperature rise per absorbed power (K/W)",
+            "temperature_rise_k", "steady temperature rise (K)",
             "v3_in_phase_v", "in-phase third-harmonic voltage V3ω (V)",
             "v3_out_of_phase_v", "out-of-phase third-harmonic voltage V3ω (V)",
             "v3_amplitude_v", "third-harmonic voltage amplitude |V3ω| (V)");
@@ -39,6 +40,9 @@ final class ColumnWords {
         }
         if (column.equals("delay_s")) {
             return "pump–probe delay (s)";
+        }
+        if (column.equals("pump_power_w")) {
+            return "absorbed pump power (W)";
         }
         return asGiven(column);
     }

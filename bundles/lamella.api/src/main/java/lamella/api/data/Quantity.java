@@ -25,7 +25,10 @@ public enum Quantity {
     VOLTAGE("a lock-in signal", units("V", 1.0, "mV", 1e-3, "uV", 1e-6, "µV", 1e-6, "μV", 1e-6, "nV", 1e-9,
             "v", 1.0, "mv", 1e-3, "uv", 1e-6, "µv", 1e-6, "μv", 1e-6, "nv", 1e-9, "Vrms", 1.0, "mVrms", 1e-3,
             "uVrms", 1e-6, "µVrms", 1e-6, "μVrms", 1e-6)),
-    RATIO("a ratio", units("1", 1.0, "-", 1.0));
+    RATIO("a ratio", units("1", 1.0, "-", 1.0)),
+    POWER("a power", units("W", 1.0, "mW", 1e-3, "uW", 1e-6, "µW", 1e-6, "μW", 1e-6, "w", 1.0, "mw", 1e-3)),
+    TEMPERATURE("a temperature rise", units("K", 1.0, "mK", 1e-3)),
+    RISE_PER_POWER("a temperature rise per watt", units("K/W", 1.0, "K W-1", 1.0, "K/mW", 1e3, "mK/mW", 1.0));
 
     private final String wording;
     private final Map<String, Double> factors;

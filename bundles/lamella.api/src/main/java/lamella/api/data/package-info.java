@@ -4,5 +4,5 @@
  * importer refuse hostile input the same way. SI units inside, phase in degrees.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.3.0")
+@org.osgi.annotation.versioning.Version("0.4.0")
 package lamella.api.data;

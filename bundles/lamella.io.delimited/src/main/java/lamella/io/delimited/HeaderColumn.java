@@ -42,6 +42,13 @@ record HeaderColumn(String name, boolean sigma, double factor) {
         names(new Meaning(SignalNames.PHASE_DEG, Quantity.PHASE, null), "phase", "theta", "θ", "phi", "φ");
         names(new Meaning(SignalNames.PHASE_DEG, Quantity.PHASE, "deg"), "phase deg");
         names(new Meaning(SignalNames.RATIO, Quantity.RATIO, "1"), "ratio", "-x/y", "-vin/vout");
+        names(new Meaning(SignalNames.PUMP_POWER_W, Quantity.POWER, null), "pump power", "absorbed power",
+                "absorbed pump power", "power");
+        names(new Meaning(SignalNames.PUMP_POWER_W, Quantity.POWER, "W"), "pump power w");
+        names(new Meaning(SignalNames.TEMPERATURE_RISE_K, Quantity.TEMPERATURE, null), "temperature rise", "rise",
+                "delta t", "dt");
+        names(new Meaning(SignalNames.TEMPERATURE_RISE_K, Quantity.TEMPERATURE, "K"), "temperature rise k");
+        names(new Meaning(SignalNames.K_PER_W, Quantity.RISE_PER_POWER, "K/W"), "k per w");
     }
 
     private static void names(Meaning m, String... spellings) {
@@ -76,8 +83,9 @@ record HeaderColumn(String name, boolean sigma, double factor) {
         Meaning meaning = NAMES.get(folded);
         if (meaning == null) {
             throw new IllegalArgumentException("'" + cell.strip() + "' names no column Lamella knows; expected an x"
-                    + " column (f, frequency, delay, time), a lock-in channel (X, Y, R, phase, in-phase,"
-                    + " out-of-phase, ratio) or a standard deviation of one (sigma X, sd phase), each with its unit"
+                    + " column (f, frequency, delay, time, pump power), a lock-in channel (X, Y, R, phase, in-phase,"
+                    + " out-of-phase, ratio), an SSTR rise (temperature rise, k_per_w) or a standard deviation of"
+                    + " one (sigma X, sd phase), each with its unit"
                     + " in brackets where it has one, such as 'f (kHz)' or 'delay [ps]'; or say what it holds:"
                     + " lamella import FILE --column '" + cell.strip() + "=MEANING[:UNIT]'");
         }
@@ -112,6 +120,8 @@ record HeaderColumn(String name, boolean sigma, double factor) {
             case FREQUENCY -> "kHz";
             case TIME -> "ps";
             case PHASE -> "deg";
+            case POWER -> "mW";
+            case TEMPERATURE -> "K";
             default -> "V";
         };
     }

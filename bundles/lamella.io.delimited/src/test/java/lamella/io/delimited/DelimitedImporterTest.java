@@ -55,6 +55,20 @@ class DelimitedImporterTest {
         assertEquals(List.of("phase_deg", "amplitude"), d.signalColumns());
     }
 
+    /** An SSTR power sweep: the absorbed pump power is the x axis, the steady rise (or rise per watt) the signal. */
+    @Test
+    void anSstrPowerSweepIsReadInWattsAndKelvin() throws Exception {
+        Dataset d = read("pump power (mW),temperature rise (mK),sd temperature rise (mK)\n1,120,2\n5,600,6\n");
+        Scan s = d.scans().get(0);
+        assertEquals("pump_power_w", d.xColumn());
+        assertArrayEquals(new double[] {1e-3, 5e-3}, s.x(), 1e-15);
+        assertArrayEquals(new double[] {0.12, 0.6}, s.signals().get("temperature_rise_k"), 1e-12);
+        assertArrayEquals(new double[] {2e-3, 6e-3}, s.sigmas().get("temperature_rise_k"), 1e-15);
+        assertEquals(List.of("k_per_w"), read("pump_power_w,k_per_w\n0.001,120\n0.002,121\n").signalColumns());
+        String noUnit = error("power,rise (K)\n1,2\n2,4\n");
+        assertTrue(noUnit.contains("'power' is a power without a unit") && noUnit.contains("power (mW)"), noUnit);
+    }
+
     @Test
     void semicolonsWithDecimalCommas() throws Exception {
         Dataset d = read("delay [ps];X (µV);Y (µV)\n-10;1,5;-2,25\n100,5;3;-2\n");

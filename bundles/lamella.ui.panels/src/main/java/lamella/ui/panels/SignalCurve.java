@@ -69,6 +69,10 @@ record SignalCurve(String xColumn, String technique, String signal, List<String>
             }
             boolean log = logarithmic(xColumn.get());
             double[] x = dataX.length > 1 ? grid(dataX, log) : sim.measurement().xValues();
+            if (x.length == 1 && !log && x[0] > 0) {
+                // one power: the steady rise is drawn as the line from no power to it
+                x = grid(new double[] {0, x[0]}, false);
+            }
             if (x.length == 0) {
                 return Outcome.failed("the measurement block lists no x values (" + sim.technique().xParameter()
                         .orElse("x") + ") and there are no data to take them from; give them in the set-up panel");
@@ -88,9 +92,9 @@ record SignalCurve(String xColumn, String technique, String signal, List<String>
         return xColumn.endsWith("_hz") || xColumn.equals("delay_s");
     }
 
-    /** The signal a user most often looks at: the TDTR ratio, the FDTR and 3ω phase, or the first one. */
+    /** The signal a user most often looks at: the TDTR ratio, the FDTR and 3ω phase, the SSTR rise, or the first one. */
     private static String usual(List<String> signals) {
-        for (String s : List.of("ratio", "phase_deg")) {
+        for (String s : List.of("ratio", "phase_deg", "temperature_rise_k")) {
             if (signals.contains(s)) {
                 return s;
             }

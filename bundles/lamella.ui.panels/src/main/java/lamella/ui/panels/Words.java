@@ -13,6 +13,8 @@ final class Words {
             "phase_deg", "phase (°)",
             "in_phase", "in-phase signal V_in (K/W)",
             "out_of_phase", "out-of-phase signal V_out (K/W)",
+            "k_per_w", "steady temperature rise per absorbed power (K/W)",
+            "temperature_rise_k", "steady temperature rise (K)",
             "v3_in_phase_v", "in-phase third-harmonic voltage V3ω (V)",
             "v3_out_of_phase_v", "out-of-phase third-harmonic voltage V3ω (V)",
             "v3_amplitude_v", "third-harmonic voltage amplitude |V3ω| (V)");
@@ -27,6 +29,9 @@ final class Words {
         }
         if (column.equals("delay_s")) {
             return "pump–probe delay (s)";
+        }
+        if (column.equals("pump_power_w")) {
+            return "absorbed pump power (W)";
         }
         return withUnit(column);
     }

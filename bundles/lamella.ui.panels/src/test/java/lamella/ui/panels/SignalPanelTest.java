@@ -3,6 +3,7 @@ package lamella.ui.panels;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
 import java.util.Arrays;
 import lamella.api.ParameterRef;
 import org.junit.jupiter.api.Test;
@@ -22,6 +23,26 @@ class SignalPanelTest {
             assertTrue(h.pumpUntil(() -> !Arrays.equals(before, v.modelValues()), 20_000),
                     "the model follows the edit: " + v.statusText());
             assertEquals(before.length, v.modelValues().length);
+        }
+    }
+
+    /**
+     * SSTR data are a power sweep: the panel draws the steady rise over absorbed pump power with the sweep's points,
+     * a straight line through them (linear heat conduction: the rise is the rise per watt times the power).
+     */
+    @Test
+    void anSstrPowerSweepIsDrawnOverPumpPower() throws Exception {
+        Path demo = Path.of("../../demo-data/sstr-calibration/case.json");
+        try (PanelHarness h = new PanelHarness(1100, 720, demo)) {
+            SignalView v = (SignalView) h.open(new SignalPanel());
+            assertTrue(h.pumpUntil(() -> v.modelValues().length > 0, 20_000), "a model is drawn: " + v.statusText());
+            h.screenshot("signal-sstr");
+            double[] y = v.modelValues();
+            assertEquals(SignalCurve.MODEL_POINTS, y.length);
+            double slope = (y[y.length - 1] - y[0]) / (y.length - 1);
+            for (int i = 1; i < y.length; i++) {
+                assertEquals(slope, y[i] - y[i - 1], 1e-9 * Math.abs(y[y.length - 1]), "linear in power at " + i);
+            }
         }
     }
 }
