@@ -210,6 +210,123 @@ public final class Project {
         }
     }
 
+    /**
+     * Why a name cannot name a new or renamed sample, in the case reader's terms, or empty when it can; except is
+     * the index of the sample being renamed (-1 for a new one).
+     */
+    public Optional<String> sampleNameProblem(String name, int except) {
+        if (name.isBlank() || name.chars().anyMatch(c -> c == '[' || c == ']' || Character.isISOControl(c))) {
+            return Optional.of("a sample name is not blank and holds no '[', ']' or control character (outputs"
+                    + " name a sample's inputs as samples[NAME].…)");
+        }
+        List<String> names = sampleNames();
+        int at = names.indexOf(name);
+        if (at >= 0 && at != except || names.isEmpty() && name.equals(FIRST_SAMPLE)) {
+            return Optional.of("the name '" + name + "' is already used by a sample; every sample needs its own");
+        }
+        return Optional.empty();
+    }
+
+    /** The name the stack of a one-stack case takes when a second sample is added. */
+    public static final String FIRST_SAMPLE = "sample 1";
+
+    /**
+     * Adds a sample, a copy of the shown one (its stack, own geometry and temperature) under a new name, and shows
+     * it; a case of one stack becomes a case of samples first, its stack the sample {@value #FIRST_SAMPLE}. One step.
+     *
+     * @throws IllegalArgumentException when the name cannot be used ({@link #sampleNameProblem})
+     */
+    public void addSample(String name) {
+        sampleNameProblem(name, -1).ifPresent(p -> {
+            throw new IllegalArgumentException(p);
+        });
+        boolean convert = sampleNames().isEmpty();
+        int from = shownSample;
+        edit("add sample '" + name + "'" + (convert ? " (the stack becomes sample '" + FIRST_SAMPLE + "')" : ""),
+                d -> {
+                    ArrayNode samples;
+                    if (convert) {
+                        ObjectNode first = JSON.createObjectNode();
+                        first.put("name", FIRST_SAMPLE);
+                        first.set("stack", d.get("stack") instanceof ObjectNode s ? s : JSON.createObjectNode());
+                        d.remove("stack");
+                        samples = JSON.createArrayNode().add(first);
+                        d.set("samples", samples);
+                        // With several samples every dataset names its own; the data so far were of this stack.
+                        for (JsonNode ds : d.path("fit").path("datasets")) {
+                            if (ds instanceof ObjectNode o) {
+                                o.put("sample", FIRST_SAMPLE);
+                            }
+                        }
+                    } else {
+                        samples = (ArrayNode) d.get("samples");
+                    }
+                    ObjectNode copy = ((ObjectNode) samples.get(convert ? 0 : from)).deepCopy();
+                    copy.put("name", name);
+                    copy.remove("description");
+                    samples.add(copy);
+                });
+        shownSample = sampleNames().size() - 1;
+        fire(Change.INPUTS);
+    }
+
+    /** Renames a sample, and every dataset and fit entry that names it, as one step. */
+    public void renameSample(int index, String name) {
+        sampleNameProblem(name, index).ifPresent(p -> {
+            throw new IllegalArgumentException(p);
+        });
+        String old = sampleNames().get(index);
+        edit("rename sample '" + old + "' to '" + name + "'", d -> {
+            ((ObjectNode) d.get("samples").get(index)).put("name", name);
+            for (String list : List.of("datasets", "free", "uncertain")) {
+                for (JsonNode e : d.path("fit").path(list)) {
+                    if (e instanceof ObjectNode o && o.path("sample").asText().equals(old) && o.has("sample")) {
+                        o.put("sample", name);
+                    }
+                }
+            }
+        });
+    }
+
+    /** The datasets (their indices) that name a sample; a sample they name cannot be removed. */
+    public List<Integer> datasetsOf(String sample) {
+        List<Integer> out = new ArrayList<>();
+        JsonNode ds = document.path("fit").path("datasets");
+        for (int i = 0; i < ds.size(); i++) {
+            if (ds.get(i).path("sample").asText().equals(sample) && ds.get(i).has("sample")) {
+                out.add(i);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Removes a sample and the fit entries that name it, as one step; a layer path of no sample whose layer no
+     * sample has any more goes too. The last sample stays (a case needs one).
+     *
+     * @throws IllegalStateException when datasets still name the sample, or it is the only one
+     */
+    public void removeSample(int index) {
+        List<String> names = sampleNames();
+        String name = names.get(index);
+        if (names.size() < 2) {
+            throw new IllegalStateException("sample '" + name + "' is the case's only sample; a case needs one");
+        }
+        if (!datasetsOf(name).isEmpty()) {
+            throw new IllegalStateException("datasets " + datasetsOf(name) + " are measurements of sample '" + name
+                    + "'; remove them or let them name another sample first");
+        }
+        edit("remove sample '" + name + "'", d -> {
+            ((ArrayNode) d.get("samples")).remove(index);
+            dropRoles(d, r -> name.equals(r.sample()) || r.scope() == ParameterRef.Scope.LAYER && r.sample() == null
+                    && samplesWithLayer(d, r.layer()) == 0);
+        });
+        if (shownSample >= sampleNames().size() || shownSample > index) {
+            shownSample = Math.max(0, shownSample - 1);
+        }
+        fire(Change.INPUTS);
+    }
+
     /** A copy of the stack object the Stack panel edits: the case's, or the shown sample's. */
     public ObjectNode stackTree() {
         return stackNode(document.deepCopy()).deepCopy();
@@ -347,13 +464,36 @@ public final class Project {
         edit("add layer '" + layer.path("name").asText() + "'", d -> layers(d).insert(index, layer.deepCopy()));
     }
 
-    /** Removes a layer, and the fit's references to its values with it. */
+    /**
+     * Removes a layer of the stack shown, and the fit's references to its values with it: those naming this sample,
+     * and those naming no sample unless another sample still has a layer of that name (its input they remain).
+     */
     public void removeLayer(int index) {
         String name = layers(document).get(index).path("name").asText();
-        edit("remove layer '" + name + "'", d -> {
+        List<String> samples = sampleNames();
+        String sample = samples.isEmpty() ? null : samples.get(Math.min(shownSample, samples.size() - 1));
+        edit("remove layer '" + name + "'" + (sample == null ? "" : " from sample '" + sample + "'"), d -> {
             layers(d).remove(index);
-            dropRoles(d, r -> r.scope() == ParameterRef.Scope.LAYER && r.layer().equals(name));
+            boolean usedElsewhere = sample != null && samplesWithLayer(d, name) > 0;
+            dropRoles(d, r -> r.scope() == ParameterRef.Scope.LAYER && r.layer().equals(name)
+                    && (r.sample() == null ? !usedElsewhere : r.sample().equals(sample)));
         });
+    }
+
+    /** How many samples of a {@code samples} case have a layer of this name (0 for a case of one stack). */
+    private static int samplesWithLayer(ObjectNode d, String layer) {
+        int n = 0;
+        if (d.get("samples") instanceof ArrayNode a) {
+            for (int i = 0; i < a.size(); i++) {
+                for (JsonNode l : layersOf(stackNode(d, i))) {
+                    if (l.path("name").asText().equals(layer)) {
+                        n++;
+                        break;
+                    }
+                }
+            }
+        }
+        return n;
     }
 
     public void moveLayer(int from, int to) {
@@ -548,6 +688,77 @@ public final class Project {
         edit("fix " + InputNames.of(ref), d -> setFixedQuietly(d, ref));
     }
 
+    /** The fit's named gains and their values, in file order ({@code fit.gains}); empty when it has none. */
+    public Map<String, Double> gains() {
+        Map<String, Double> out = new java.util.LinkedHashMap<>();
+        document.path("fit").path("gains").fields()
+                .forEachRemaining(e -> out.put(e.getKey(), e.getValue().asDouble(Double.NaN)));
+        return out;
+    }
+
+    /** Why a name cannot name a new or renamed gain, or empty when it can; except: the gain being renamed. */
+    public Optional<String> gainNameProblem(String name, String except) {
+        if (name.isBlank() || name.chars().anyMatch(Character::isISOControl)) {
+            return Optional.of("a gain's name is not blank and holds no control character");
+        }
+        if (gains().containsKey(name) && !name.equals(except)) {
+            return Optional.of("the name '" + name + "' is already used by a gain; every gain needs its own");
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * Adds a named gain of the given value to {@code fit.gains}, as one step. The case reader wants a dataset to
+     * name it ({@code datasets[].gain}) before the case is valid again.
+     */
+    public void addGain(String name, double value) {
+        gainNameProblem(name, null).ifPresent(p -> {
+            throw new IllegalArgumentException(p);
+        });
+        edit("add gain '" + name + "'", d -> objectAt(objectAt(d, "fit"), "gains").put(name, value));
+    }
+
+    /** Renames a gain where it stands, and every dataset and fit entry that names it, as one step. */
+    public void renameGain(String old, String name) {
+        gainNameProblem(name, old).ifPresent(p -> {
+            throw new IllegalArgumentException(p);
+        });
+        edit("rename gain '" + old + "' to '" + name + "'", d -> {
+            ObjectNode gains = objectAt(objectAt(d, "fit"), "gains");
+            ObjectNode renamed = JSON.createObjectNode();
+            gains.fields().forEachRemaining(e -> renamed.set(e.getKey().equals(old) ? name : e.getKey(),
+                    e.getValue()));
+            ((ObjectNode) d.get("fit")).set("gains", renamed);
+            for (String list : List.of("datasets", "free", "uncertain")) {
+                for (JsonNode e : d.path("fit").path(list)) {
+                    if (e instanceof ObjectNode o && o.has("gain") && o.path("gain").asText().equals(old)) {
+                        o.put("gain", name);
+                    }
+                }
+            }
+        });
+    }
+
+    /**
+     * Removes a gain, the datasets' naming of it and its free or uncertain entry, as one step; {@code gains} goes
+     * when it is left empty (the reader refuses an empty one).
+     */
+    public void removeGain(String name) {
+        edit("remove gain '" + name + "'", d -> {
+            ObjectNode fit = objectAt(d, "fit");
+            objectAt(fit, "gains").remove(name);
+            if (fit.path("gains").isEmpty()) {
+                fit.remove("gains");
+            }
+            for (JsonNode e : fit.path("datasets")) {
+                if (e instanceof ObjectNode o && o.path("gain").asText().equals(name) && o.has("gain")) {
+                    o.remove("gain");
+                }
+            }
+            dropRoles(d, r -> r.scope() == ParameterRef.Scope.GAIN && r.key().equals(name));
+        });
+    }
+
     /** The fit block's datasets, as objects with data, signal, and optional measurement and geometry blocks. */
     public List<ObjectNode> datasets() {
         List<ObjectNode> out = new ArrayList<>();
@@ -735,6 +946,8 @@ public final class Project {
     // ------------------------------------------------------------------ internals
 
     private void changed(ObjectNode before, ObjectNode after) {
+        // Undoing an added sample leaves fewer samples than the one shown.
+        shownSample = Math.min(shownSample, Math.max(0, sampleNames().size() - 1));
         dirty = clean == null || !after.equals(clean);
         revalidate();
         if (!without(before, "fit").equals(without(after, "fit"))) {

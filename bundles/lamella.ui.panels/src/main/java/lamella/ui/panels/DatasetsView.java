@@ -58,6 +58,10 @@ final class DatasetsView implements PanelView {
     private final Text to;
     private final Text leftOut;
     private final Combo weights;
+    private static final String NO_GAIN = "(none)";
+    private final Label sampleLabel;
+    private final Combo sample;
+    private final Combo gain;
     private final StatusLine rangeProblem;
     private final BlockEditor technique;
     private final BlockEditor geometry;
@@ -121,6 +125,19 @@ final class DatasetsView implements PanelView {
         weights.setToolTipText("data: the file's σ columns; residuals: estimated from the fit's residuals; auto:"
                 + " the data's where present, else the residuals'");
         weights.addListener(SWT.Selection, e -> takeWeights());
+        sampleLabel = new Label(fitting, SWT.NONE);
+        sampleLabel.setText("measured on sample:");
+        sampleLabel.setLayoutData(new GridData(SWT.LEFT, SWT.CENTER, false, false));
+        sample = new Combo(fitting, SWT.READ_ONLY);
+        sample.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        sample.setToolTipText("the sample these data were measured on; its stack (and own geometry) model them");
+        sample.addListener(SWT.Selection, e -> takeSample());
+        Label gl = new Label(fitting, SWT.NONE);
+        gl.setText("gain:");
+        gain = new Combo(fitting, SWT.READ_ONLY);
+        gain.setToolTipText("a named gain of the fit (Set-up panel) that multiplies this dataset's modelled signal;"
+                + " (none): the signal as modelled");
+        gain.addListener(SWT.Selection, e -> takeGain());
         rangeProblem = new StatusLine(fitting, 2);
         technique = new BlockEditor(editors, project, "Technique", "measurement", 0,
                 workbench.catalog().techniques().stream().map(Technique::type).toList(), this::techniqueSpecs,
@@ -171,6 +188,14 @@ final class DatasetsView implements PanelView {
 
     Combo weights() {
         return weights;
+    }
+
+    Combo sample() {
+        return sample;
+    }
+
+    Combo gain() {
+        return gain;
     }
 
     BlockEditor technique() {
@@ -309,6 +334,20 @@ final class DatasetsView implements PanelView {
         show(leftOut, String.join("; ", out));
         String w = d.path("weights").asText("");
         weights.select(w.isEmpty() ? 0 : Math.max(0, List.of(WEIGHTS).indexOf(w)));
+        List<String> samples = project.sampleNames();
+        boolean several = !samples.isEmpty();
+        for (Control c : List.of(sampleLabel, sample)) {
+            ((GridData) c.getLayoutData()).exclude = !several;
+            c.setVisible(several);
+        }
+        sample.setItems(samples.toArray(String[]::new));
+        sample.select(samples.indexOf(d.path("sample").asText()));
+        List<String> gains = new ArrayList<>();
+        gains.add(NO_GAIN);
+        tree.path("fit").path("gains").fieldNames().forEachRemaining(gains::add);
+        gain.setItems(gains.toArray(String[]::new));
+        gain.select(Math.max(0, gains.indexOf(d.path("gain").asText(NO_GAIN))));
+        gain.setEnabled(gains.size() > 1);
         editors.layout(true, true);
         scroll.setMinSize(editors.computeSize(SWT.DEFAULT, SWT.DEFAULT));
     }
@@ -397,6 +436,22 @@ final class DatasetsView implements PanelView {
             r.add(hi);
         }
         return all;
+    }
+
+    private void takeSample() {
+        int i = sample.getSelectionIndex();
+        if (i >= 0) {
+            String name = sample.getItem(i);
+            project.setDatasetKey(selected, "sample", JsonNodeFactory.instance.textNode(name),
+                    "set the sample to '" + name + "'");
+        }
+    }
+
+    private void takeGain() {
+        int i = gain.getSelectionIndex();
+        String name = i <= 0 ? null : gain.getItem(i);
+        project.setDatasetKey(selected, "gain", name == null ? null : JsonNodeFactory.instance.textNode(name),
+                name == null ? "remove the gain" : "set the gain to '" + name + "'");
     }
 
     private void takeWeights() {

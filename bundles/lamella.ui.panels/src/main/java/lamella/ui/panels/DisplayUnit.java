@@ -28,6 +28,15 @@ record DisplayUnit(String unit, double factor) {
     private static final List<DisplayUnit> CAPACITIES = List.of(new DisplayUnit("J/(m³ K)", 1),
             new DisplayUnit("MJ/(m³ K)", 1e6));
 
+    /** A heater's boundary resistance is of order 1e-8 m² K/W: 10 m² K/GW. */
+    private static final List<DisplayUnit> RESISTANCES = List.of(new DisplayUnit("m² K/GW", 1e-9),
+            new DisplayUnit("m² K/W", 1));
+    private static final List<DisplayUnit> OHMS = List.of(new DisplayUnit("mΩ", 1e-3), new DisplayUnit("Ω", 1),
+            new DisplayUnit("kΩ", 1e3));
+    /** A metal heater's dR/dT is of order 0.1 Ω/K: 100 mΩ/K. */
+    private static final List<DisplayUnit> OHMS_PER_K = List.of(new DisplayUnit("mΩ/K", 1e-3),
+            new DisplayUnit("Ω/K", 1));
+
     static DisplayUnit of(ParameterRef ref) {
         return of(ref.key(), ref.scope() == ParameterRef.Scope.LAYER);
     }
@@ -36,13 +45,22 @@ record DisplayUnit(String unit, double factor) {
     static DisplayUnit of(String key, boolean layer) {
         String si = Units.ofKey(key);
         return switch (si) {
-            case "m" -> key.equals("thickness_m") && layer ? LENGTHS.get(0) : LENGTHS.get(1);
+            case "m" -> key.equals("thickness_m") && layer || key.equals("heater_thickness_m") || depth(key)
+                    ? LENGTHS.get(0) : LENGTHS.get(1);
             case "Hz" -> key.contains("frequencies") ? FREQUENCIES.get(1) : FREQUENCIES.get(2);
             case "s" -> TIMES.get(1);
             case "W/(m² K)" -> CONDUCTANCES.get(1);
             case "J/(m³ K)" -> CAPACITIES.get(1);
+            case "m² K/W" -> RESISTANCES.get(0);
+            case "Ω" -> OHMS.get(1);
+            case "Ω/K" -> OHMS_PER_K.get(0);
             default -> new DisplayUnit(si, 1);
         };
+    }
+
+    /** The depths over which the top layer absorbs or is read are tens of nanometres. */
+    private static boolean depth(String key) {
+        return key.equals("absorption_depth_m") || key.equals("sensing_depth_m");
     }
 
     /** Every unit the key's quantity may be shown in, smallest first; one entry for quantities with one unit. */
@@ -53,6 +71,9 @@ record DisplayUnit(String unit, double factor) {
             case "s" -> TIMES;
             case "W/(m² K)" -> CONDUCTANCES;
             case "J/(m³ K)" -> CAPACITIES;
+            case "m² K/W" -> RESISTANCES;
+            case "Ω" -> OHMS;
+            case "Ω/K" -> OHMS_PER_K;
             default -> List.of(of(key, false));
         };
     }
@@ -68,9 +89,12 @@ record DisplayUnit(String unit, double factor) {
         return Optional.empty();
     }
 
-    /** "µm" and "um", "MW/(m² K)" and "MW/m2K" are the same unit; letter case matters (mHz is not MHz). */
+    /**
+     * "µm" and "um", "MW/(m² K)" and "MW/m2K", "mΩ/K" and "mohm/K" are the same unit; letter case matters (mHz is not
+     * MHz).
+     */
     private static String normal(String unit) {
-        String u = unit.replace("μ", "µ").replace("²", "2").replace("³", "3").replace("^", "")
+        String u = unit.replace("μ", "µ").replace("ohm", "Ω").replace("Ohm", "Ω").replace("²", "2").replace("³", "3").replace("^", "")
                 .replaceAll("[\\s()·*]", "");
         if (u.startsWith("u") && u.length() > 1) {
             u = "µ" + u.substring(1);

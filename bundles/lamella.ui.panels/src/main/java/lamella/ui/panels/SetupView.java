@@ -37,6 +37,7 @@ final class SetupView implements PanelView {
     private final Composite root;
     private final BlockEditor technique;
     private final BlockEditor geometry;
+    private final GainsEditor gains;
     private final Text power;
     private final Button selfHeating;
     private final StatusLine rise;
@@ -57,6 +58,7 @@ final class SetupView implements PanelView {
                 workbench.catalog().geometries().stream().map(HeatingGeometry::type).toList(),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::parameters).orElse(List.of()),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::summary).orElse(""));
+        gains = new GainsEditor(root, workbench);
         Group heat = new Group(root, SWT.NONE);
         heat.setText("Steady heating");
         heat.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
@@ -119,6 +121,10 @@ final class SetupView implements PanelView {
         return (block.equals("geometry") ? geometry : technique).field(key);
     }
 
+    GainsEditor gains() {
+        return gains;
+    }
+
     String problemText(String block) {
         return (block.equals("geometry") ? geometry : technique).problemText();
     }
@@ -130,6 +136,7 @@ final class SetupView implements PanelView {
         ObjectNode tree = project.tree();
         technique.show(tree.path("measurement"));
         geometry.show(tree.path("geometry"));
+        gains.show();
         JsonNode heating = tree.path(SELF_HEATING);
         selfHeating.setSelection(heating.isObject());
         JsonNode watts = heating.path(POWER_KEY);

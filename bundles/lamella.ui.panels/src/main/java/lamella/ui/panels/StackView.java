@@ -53,10 +53,22 @@ final class StackView implements PanelView {
     private final StatusLine status;
     private final Label selectedLabel;
     private final Combo roleCombo;
-    /** The sample whose stack is shown, in a case of several samples; hidden otherwise. */
+    /** The sample whose stack is shown, and the means to add, rename and remove samples. */
     private final Composite sampleRow;
     private final Combo sampleCombo;
+    private final Text sampleName;
     private final Text sigmaText;
+    /** The top layer's depths of heating and of reading (layers[0] only); blank: at the surface. */
+    private static final List<LayerColumn> DEPTHS = List.of(
+            new LayerColumn("absorption_depth_m", "absorption depth", "the depth over which the top layer absorbs"
+                    + " the pump, heating as e^(−z/δ); blank: heated at its surface", DisplayUnit.of(
+                    "absorption_depth_m", true)),
+            new LayerColumn("sensing_depth_m", "sensing depth", "the depth over which the top layer's temperature"
+                    + " is read, weighted as e^(−z/δ); blank: read at its surface", DisplayUnit.of("sensing_depth_m",
+                    true)));
+    private final Label topLabel;
+    private final Text[] depthText = new Text[DEPTHS.size()];
+    private final Label[] depthRole = new Label[DEPTHS.size()];
     private final CrossSection drawing;
     private final Project.Listener listener = c -> refresh();
     /** The unit chosen for each value column, kept for the session. */
@@ -72,7 +84,7 @@ final class StackView implements PanelView {
         root = new Composite(parent, SWT.NONE);
         root.setLayout(new GridLayout(1, false));
         sampleRow = new Composite(root, SWT.NONE);
-        GridLayout srl = new GridLayout(2, false);
+        GridLayout srl = new GridLayout(6, false);
         srl.marginWidth = 0;
         srl.marginHeight = 0;
         sampleRow.setLayout(srl);
@@ -82,10 +94,20 @@ final class StackView implements PanelView {
         sampleCombo.setToolTipText("the sample whose stack this panel shows and edits; a role set here names the"
                 + " layer in every sample that has it");
         sampleCombo.addListener(SWT.Selection, e -> {
-            if (sampleCombo.getSelectionIndex() >= 0) {
+            if (sampleCombo.getSelectionIndex() >= 0 && !project.sampleNames().isEmpty()) {
                 project.showSample(sampleCombo.getSelectionIndex());
             }
         });
+        sampleName = new Text(sampleRow, SWT.BORDER);
+        GridData ngd = new GridData(SWT.FILL, SWT.CENTER, false, false);
+        ngd.widthHint = 110;
+        sampleName.setLayoutData(ngd);
+        sampleName.setMessage("name");
+        sampleName.setToolTipText("the name for Add sample or Rename: not blank, without '[', ']' or control"
+                + " characters, not used by another sample");
+        button(sampleRow, "Add sample", this::addSample);
+        button(sampleRow, "Rename", this::renameSample);
+        button(sampleRow, "Remove sample", this::removeSample);
         // The table on top across the whole width, so that every column stays in view; the drawing below it.
         SashForm sash = new SashForm(root, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
@@ -121,6 +143,18 @@ final class StackView implements PanelView {
         button(buttons, "Remove layer", this::removeLayer);
         button(buttons, "Move up", () -> move(-1));
         button(buttons, "Move down", () -> move(1));
+        Composite depths = new Composite(left, SWT.NONE);
+        depths.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridLayout dl = new GridLayout(7, false);
+        dl.marginWidth = 0;
+        dl.marginHeight = 0;
+        depths.setLayout(dl);
+        topLabel = new Label(depths, SWT.NONE);
+        for (int i = 0; i < DEPTHS.size(); i++) {
+            depthText[i] = depthField(depths, i);
+            depthRole[i] = new Label(depths, SWT.NONE);
+            depthRole[i].setLayoutData(new GridData(SWT.LEFT, SWT.CENTER, i == DEPTHS.size() - 1, false));
+        }
         Composite strip = new Composite(left, SWT.NONE);
         strip.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         GridLayout sl0 = new GridLayout(5, false);
@@ -217,23 +251,188 @@ final class StackView implements PanelView {
         }
     }
 
-    /** The sample chooser: shown with the case's sample names when it has a samples list. */
+    /** The sample chooser: the case's sample names when it has a samples list, else its one stack. */
     private void showSamples() {
         List<String> samples = project.sampleNames();
-        boolean show = !samples.isEmpty();
-        GridData gd = (GridData) sampleRow.getLayoutData();
-        if (gd.exclude == show || sampleRow.getVisible() != show) {
-            gd.exclude = !show;
-            sampleRow.setVisible(show);
-            root.layout(true, true);
-        }
-        if (show && !List.of(sampleCombo.getItems()).equals(samples)) {
-            sampleCombo.setItems(samples.toArray(String[]::new));
+        List<String> items = samples.isEmpty() ? List.of(ONE_STACK) : samples;
+        if (!List.of(sampleCombo.getItems()).equals(items)) {
+            sampleCombo.setItems(items.toArray(String[]::new));
             sampleRow.layout(true);
         }
-        if (show && sampleCombo.getSelectionIndex() != project.shownSample()) {
-            sampleCombo.select(Math.min(project.shownSample(), samples.size() - 1));
+        sampleCombo.setEnabled(!samples.isEmpty());
+        if (sampleCombo.getSelectionIndex() != Math.min(project.shownSample(), items.size() - 1)) {
+            sampleCombo.select(Math.min(project.shownSample(), items.size() - 1));
         }
+    }
+
+    private static final String ONE_STACK = "(the case's one stack)";
+
+    Text sampleName() {
+        return sampleName;
+    }
+
+    Combo sampleCombo() {
+        return sampleCombo;
+    }
+
+    /** A copy of the shown sample under the name typed; the first turns a one-stack case into samples. */
+    void addSample() {
+        String name = sampleName.getText().strip();
+        Optional<String> problem = project.sampleNameProblem(name, -1);
+        if (problem.isPresent()) {
+            status.show("Sample name \"" + name + "\": " + problem.get(), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        boolean convert = project.sampleNames().isEmpty();
+        project.addSample(name);
+        sampleName.setText("");
+        status.show("Added sample '" + name + "', a copy of " + (convert ? "the stack, which is now sample '"
+                + Project.FIRST_SAMPLE + "' (its datasets name it)" : "the sample shown") + "; a dataset measured"
+                + " on it names it in the Datasets panel.", StatusLine.Tone.CAUTION);
+    }
+
+    void renameSample() {
+        if (project.sampleNames().isEmpty()) {
+            status.show("The case has one stack and no samples to rename; Add sample makes it a case of samples.",
+                    StatusLine.Tone.CAUTION);
+            return;
+        }
+        String name = sampleName.getText().strip();
+        int i = project.shownSample();
+        if (name.equals(project.sampleNames().get(i))) {
+            return;
+        }
+        Optional<String> problem = project.sampleNameProblem(name, i);
+        if (problem.isPresent()) {
+            status.show("Sample name \"" + name + "\": " + problem.get(), StatusLine.Tone.PROBLEM);
+            return;
+        }
+        project.renameSample(i, name);
+        sampleName.setText("");
+        status.show("", StatusLine.Tone.PLAIN);
+    }
+
+    /** Asks first; refuses, saying why, the only sample and one that datasets still name. */
+    void removeSample() {
+        List<String> samples = project.sampleNames();
+        if (samples.size() < 2) {
+            status.show("A case needs a sample: the " + (samples.isEmpty() ? "one stack" : "only sample")
+                    + " cannot be removed.", StatusLine.Tone.PROBLEM);
+            return;
+        }
+        int i = project.shownSample();
+        String name = samples.get(i);
+        List<Integer> datasets = project.datasetsOf(name);
+        if (!datasets.isEmpty()) {
+            status.show("Sample '" + name + "' is not removed: dataset" + (datasets.size() == 1 ? " " : "s ")
+                    + datasets.stream().map(String::valueOf).collect(java.util.stream.Collectors.joining(", "))
+                    + " were measured on it; remove them or let them name another sample (Datasets panel) first.",
+                    StatusLine.Tone.PROBLEM);
+            return;
+        }
+        if (workbench.confirm("Remove sample", "Remove sample '" + name + "' and the fit inputs that name it?"
+                + "\n\nEdit ▸ Undo brings it back.", "Remove sample")) {
+            project.removeSample(i);
+            status.show("", StatusLine.Tone.PLAIN);
+        }
+    }
+
+    private Text depthField(Composite parent, int i) {
+        LayerColumn c = DEPTHS.get(i);
+        Label l = new Label(parent, SWT.NONE);
+        l.setText(c.words() + " (" + c.unit().unit() + "):");
+        l.setToolTipText(c.meaning());
+        Text t = new Text(parent, SWT.BORDER | SWT.RIGHT);
+        GridData gd = new GridData(SWT.LEFT, SWT.CENTER, false, false);
+        gd.widthHint = 60;
+        t.setLayoutData(gd);
+        t.setToolTipText(c.meaning() + "; click it to set its role in a fit below");
+        t.setMessage("not set");
+        Object[] visit = {new Object()};
+        t.addListener(SWT.FocusIn, e -> {
+            visit[0] = new Object();
+            if (!names.isEmpty()) {
+                select(ParameterRef.layer(names.get(0), c.key()));
+            }
+        });
+        t.addListener(SWT.Modify, e -> {
+            if (t.isFocusControl()) {
+                takeDepth(i, t.getText(), visit[0], false);
+            }
+        });
+        t.addListener(SWT.DefaultSelection, e -> takeDepth(i, t.getText(), visit[0], true));
+        t.addListener(SWT.FocusOut, e -> takeDepth(i, t.getText(), visit[0], true));
+        return t;
+    }
+
+    /** The depth field of the top layer, by key, for tests. */
+    Text depth(String key) {
+        return depthText[DEPTHS.stream().map(LayerColumn::key).toList().indexOf(key)];
+    }
+
+    /**
+     * A depth typed in its field (nm unless the text names a unit), or blank for none, which removes the key; a
+     * depth that is not positive is refused in words. True when taken.
+     */
+    boolean takeDepth(int i, String text, Object visit, boolean finishing) {
+        if (names.isEmpty()) {
+            return false;
+        }
+        LayerColumn c = DEPTHS.get(i);
+        String top = names.get(0);
+        ParameterRef ref = ParameterRef.layer(top, c.key());
+        String where = top + " · " + c.words() + " (" + c.unit().unit() + "): ";
+        if (text.isBlank()) {
+            if (project.stackTree().path("layers").path(0).has(c.key())) {
+                if (project.role(ref) != Project.Role.FIXED) {
+                    if (finishing) {
+                        status.show(where + "a free or uncertain depth needs a value; fix it first to leave it"
+                                + " unset", StatusLine.Tone.PROBLEM);
+                    }
+                    return false;
+                }
+                project.put(ref, null, visit);
+            }
+            status.show("", StatusLine.Tone.PLAIN);
+            return true;
+        }
+        double si;
+        try {
+            si = QuantityText.parse(text, c.key(), c.unit()).si();
+        } catch (QuantityText.Refusal e) {
+            if (finishing) {
+                status.show(where + e.getMessage(), StatusLine.Tone.PROBLEM);
+            }
+            return false;
+        }
+        if (!(si > 0)) {
+            if (finishing) {
+                status.show(where + NumberText.format(c.unit().shown(si)) + " is not allowed; a depth is positive"
+                        + " (blank: at the surface)", StatusLine.Tone.PROBLEM);
+            }
+            return false;
+        }
+        status.show("", StatusLine.Tone.PLAIN);
+        project.set(ref, si, visit);
+        return true;
+    }
+
+    private void showDepths(JsonNode layers) {
+        boolean any = !names.isEmpty();
+        topLabel.setText(any ? "Top layer '" + names.get(0) + "':" : "");
+        for (int i = 0; i < DEPTHS.size(); i++) {
+            LayerColumn c = DEPTHS.get(i);
+            JsonNode v = layers.path(0).path(c.key());
+            depthText[i].setEnabled(any);
+            if (!depthText[i].isFocusControl()) {
+                String shown = v.isNumber() ? NumberText.format(c.unit().shown(v.asDouble())) : "";
+                if (!depthText[i].getText().equals(shown)) {
+                    depthText[i].setText(shown);
+                }
+            }
+            depthRole[i].setText(any ? roleMark(ParameterRef.layer(names.get(0), c.key())).strip() : "");
+        }
+        topLabel.getParent().layout(true);
     }
 
     private static Button button(Composite parent, String text, Runnable action) {
@@ -274,6 +473,7 @@ final class StackView implements PanelView {
             }
         }
         fitColumns();
+        showDepths(layers);
         if (keep >= 0 && keep < names.size()) {
             table.setSelection(keep);
         }

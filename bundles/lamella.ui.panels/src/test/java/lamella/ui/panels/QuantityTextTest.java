@@ -87,4 +87,25 @@ class QuantityTextTest {
         assertEquals("1.23457", QuantityText.digits(1.234567, 6));
         assertEquals("1.5e-5", QuantityText.digits(1.5e-5, 6));
     }
+
+    @Test
+    void theThreeOmegaHeaterKeysAreShownInTheTradesUnits() throws Exception {
+        assertEquals("nm", DisplayUnit.of("heater_thickness_m", false).unit());
+        assertEquals("MJ/(m³ K)", DisplayUnit.of("heater_heat_capacity_j_m3k", false).unit());
+        DisplayUnit rb = DisplayUnit.of("heater_boundary_resistance_m2k_w", false);
+        assertEquals("m² K/GW", rb.unit());
+        assertEquals(10, rb.shown(1e-8), 1e-12, "1e-8 m² K/W is 10 m² K/GW");
+        assertEquals(1e-8, QuantityText.parse("1e-8 m2K/W", "heater_boundary_resistance_m2k_w", rb).si(), 1e-22);
+        assertEquals(2e-8, QuantityText.parse("20", "heater_boundary_resistance_m2k_w", rb).si(), 1e-22);
+        DisplayUnit drdt = DisplayUnit.of("dr_dt_ohm_per_k", false);
+        assertEquals("mΩ/K", drdt.unit());
+        assertEquals(0.12, QuantityText.parse("120", "dr_dt_ohm_per_k", drdt).si(), 1e-12);
+        assertEquals(0.12, QuantityText.parse("0.12 ohm/K", "dr_dt_ohm_per_k", drdt).si(), 1e-12);
+        DisplayUnit r = DisplayUnit.of("heater_resistance_ohm", false);
+        assertEquals("Ω", r.unit());
+        assertEquals(1500, QuantityText.parse("1.5 kΩ", "heater_resistance_ohm", r).si(), 1e-9);
+        assertEquals("nm", DisplayUnit.of("absorption_depth_m", true).unit());
+        assertTrue(assertThrows(QuantityText.Refusal.class, () -> QuantityText.parse("3 MHz",
+                "dr_dt_ohm_per_k", drdt)).getMessage().contains("mΩ/K or Ω/K"));
+    }
 }
