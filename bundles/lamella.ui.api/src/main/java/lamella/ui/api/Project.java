@@ -465,6 +465,61 @@ public final class Project {
     }
 
     /**
+     * Adds a layer above the heated plane at index of {@code stack.above} (0: next to the plane), making the list
+     * when the stack has none, as one step.
+     */
+    public void addLayerAbove(int index, ObjectNode layer) {
+        edit("add layer '" + layer.path("name").asText() + "' above the heated plane", d -> {
+            ObjectNode stack = stackNode(d);
+            ArrayNode above = stack.get(ABOVE) instanceof ArrayNode a ? a : stack.putArray(ABOVE);
+            above.insert(index, layer.deepCopy());
+        });
+    }
+
+    /**
+     * Removes a layer above the heated plane and the fit's references to it as {@link #removeLayer} does; the last
+     * one takes {@code above} and {@code top} with it (the reader refuses a top without layers above).
+     */
+    public void removeLayerAbove(int index) {
+        String name = stackNode(document).path(ABOVE).get(index).path("name").asText();
+        List<String> samples = sampleNames();
+        String sample = samples.isEmpty() ? null : samples.get(Math.min(shownSample, samples.size() - 1));
+        edit("remove layer '" + name + "' above the heated plane", d -> {
+            ObjectNode stack = stackNode(d);
+            ((ArrayNode) stack.get(ABOVE)).remove(index);
+            if (stack.get(ABOVE).isEmpty()) {
+                stack.remove(ABOVE);
+                stack.remove("top");
+            }
+            boolean usedElsewhere = sample != null && samplesWithLayer(d, name) > 0;
+            dropRoles(d, r -> r.scope() == ParameterRef.Scope.LAYER && r.layer().equals(name)
+                    && (r.sample() == null ? !usedElsewhere : r.sample().equals(sample)));
+        });
+    }
+
+    public void moveLayerAbove(int from, int to) {
+        ArrayNode above = (ArrayNode) stackNode(document).get(ABOVE);
+        String name = above.get(from).path("name").asText();
+        edit("move layer '" + name + "' " + (to > from ? "up, away from" : "down, toward") + " the heated plane",
+                d -> {
+                    ArrayNode l = (ArrayNode) stackNode(d).get(ABOVE);
+                    JsonNode n = l.remove(from);
+                    l.insert(to, n);
+                });
+    }
+
+    /** Sets the condition beyond the outermost layer above ({@code stack.top}), or with null removes it. */
+    public void setTop(String top) {
+        edit(top == null ? "let the top be semi-infinite" : "set the top to " + top, d -> {
+            if (top == null) {
+                stackNode(d).remove("top");
+            } else {
+                stackNode(d).put("top", top);
+            }
+        });
+    }
+
+    /**
      * Removes a layer of the stack shown, and the fit's references to its values with it: those naming this sample,
      * and those naming no sample unless another sample still has a layer of that name (its input they remain).
      */
@@ -485,12 +540,14 @@ public final class Project {
         int n = 0;
         if (d.get("samples") instanceof ArrayNode a) {
             for (int i = 0; i < a.size(); i++) {
-                for (JsonNode l : layersOf(stackNode(d, i))) {
-                    if (l.path("name").asText().equals(layer)) {
-                        n++;
-                        break;
+                ObjectNode stack = stackNode(d, i);
+                boolean has = false;
+                for (String side : SIDES) {
+                    for (JsonNode l : stack.path(side)) {
+                        has |= l.path("name").asText().equals(layer);
                     }
                 }
+                n += has ? 1 : 0;
             }
         }
         return n;
@@ -1099,9 +1156,11 @@ public final class Project {
         }
         List<ObjectNode> out = new ArrayList<>();
         for (int i = 0; i < a.size(); i++) {
-            for (JsonNode l : layersOf(stackNode(d, i))) {
-                if (l.path("name").asText().equals(ref.layer()) && l instanceof ObjectNode o) {
-                    out.add(o);
+            for (String side : SIDES) {
+                for (JsonNode l : stackNode(d, i).path(side)) {
+                    if (l.path("name").asText().equals(ref.layer()) && l instanceof ObjectNode o) {
+                        out.add(o);
+                    }
                 }
             }
         }
@@ -1129,14 +1188,23 @@ public final class Project {
         return layerNode(d, name, shownSample);
     }
 
+    /** A layer of the sample's stack by name, in {@code layers} or in {@code above} (names are unique over both). */
     private static ObjectNode layerNode(ObjectNode d, String name, int sample) {
-        for (JsonNode l : layersOf(stackNode(d, sample))) {
-            if (l.path("name").asText().equals(name) && l instanceof ObjectNode o) {
-                return o;
+        ObjectNode stack = stackNode(d, sample);
+        for (String side : SIDES) {
+            for (JsonNode l : stack.path(side)) {
+                if (l.path("name").asText().equals(name) && l instanceof ObjectNode o) {
+                    return o;
+                }
             }
         }
         throw new IllegalArgumentException("no layer '" + name + "'");
     }
+
+    /** The stack's two lists of layers: below the heated plane, and above it from the plane upward. */
+    public static final String LAYERS = "layers";
+    public static final String ABOVE = "above";
+    private static final List<String> SIDES = List.of(LAYERS, ABOVE);
 
     private static ArrayNode layersOf(ObjectNode s) {
         if (!(s.get("layers") instanceof ArrayNode a)) {

@@ -1,5 +1,7 @@
 package lamella.ui.panels;
 
+import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import lamella.api.Layer;
 import lamella.api.Stack;
@@ -59,20 +61,31 @@ final class CrossSection {
         gc.setTextAntialias(SWT.ON);
         gc.setForeground(canvas.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
         int lineHeight = gc.getFontMetrics().getHeight();
-        String top = "heating and probing from above ↓";
+        boolean inside = stack != null && stack.heatsBothWays();
+        String top = inside ? "heated and read at the marked plane inside the stack; top: " + stack.top().caseName()
+                : "heating and probing from above ↓";
         gc.drawText(top, MARGIN, MARGIN, true);
         if (stack == null) {
             return;
         }
-        List<Layer> layers = stack.layers();
+        // From the top of the drawing down: the layers above the plane outermost first, then those below it. Each
+        // layer's conductance is at its lower edge, which for a layer above is its interface toward the plane.
+        List<Layer> layers = new ArrayList<>(stack.above());
+        Collections.reverse(layers);
+        int plane = layers.size();
+        layers.addAll(stack.layers());
         double total = layers.stream().mapToDouble(CrossSection::weight).sum();
         int y = MARGIN + lineHeight + 6;
         int available = r.height - y - lineHeight - 2 * MARGIN;
         int x = MARGIN;
         int width = Math.max(r.width - 2 * MARGIN, 40);
         int[] interfaces = new int[layers.size()];
+        int planeY = y;
         for (int i = 0; i < layers.size(); i++) {
             Layer l = layers.get(i);
+            if (i == plane) {
+                planeY = y;
+            }
             int h = (int) Math.max(lineHeight + 4, Math.round(available * weight(l) / total));
             Color fill = new Color(canvas.getDisplay(), FILLS[i % FILLS.length]);
             gc.setBackground(fill);
@@ -86,6 +99,21 @@ final class CrossSection {
             gc.drawText(text, x + Math.max(6, (width - ext.x) / 2), y + (h - ext.y) / 2, true);
             y += h;
             interfaces[i] = y;
+        }
+        // The plane first, so that the conductance of the interface there keeps its label on top.
+        if (inside) {
+            gc.setForeground(canvas.getDisplay().getSystemColor(SWT.COLOR_DARK_YELLOW));
+            gc.setLineWidth(3);
+            gc.setLineStyle(SWT.LINE_DASH);
+            gc.drawLine(x, planeY, x + width, planeY);
+            gc.setLineStyle(SWT.LINE_SOLID);
+            gc.setLineWidth(1);
+            String mark = "heated and read plane";
+            Point me = gc.textExtent(mark);
+            gc.setBackground(canvas.getDisplay().getSystemColor(SWT.COLOR_WHITE));
+            gc.fillRectangle(x + 4, planeY - me.y / 2 - 1, me.x + 8, me.y + 2);
+            gc.drawRectangle(x + 4, planeY - me.y / 2 - 1, me.x + 8, me.y + 2);
+            gc.drawText(mark, x + 8, planeY - me.y / 2, true);
         }
         // Conductance marks go on last, so that no layer below paints over its interface's label.
         for (int i = 0; i < layers.size(); i++) {

@@ -13,7 +13,8 @@ record LayerColumn(String key, String words, String meaning, DisplayUnit unit) {
             of("k_through_w_mk", "Λz", "through-plane thermal conductivity Λz"),
             of("k_in_plane_w_mk", "Λr", "in-plane thermal conductivity Λr (both in-plane directions)"),
             of("heat_capacity_j_m3k", "C", "volumetric heat capacity C (density × specific heat)"),
-            of("conductance_below_w_m2k", "G below", "thermal boundary conductance G to the layer below"));
+            of("conductance_below_w_m2k", "G below", "thermal boundary conductance G to the layer below (for a"
+                    + " layer above the heated plane: of its interface toward the plane)"));
 
     private static LayerColumn of(String key, String words, String meaning) {
         return new LayerColumn(key, words, meaning, DisplayUnit.of(key, true));

@@ -74,7 +74,11 @@ final class StackView implements PanelView {
     /** The unit chosen for each value column, kept for the session. */
     private static final Map<Integer, DisplayUnit> CHOSEN_UNITS = new ConcurrentHashMap<>();
     private final DisplayUnit[] units = new DisplayUnit[LayerColumn.VALUES.size()];
+    /** Layer names by table row: those above the heated plane (outermost first), then those of layers. */
     private List<String> names = List.of();
+    private int aboveCount;
+    private final Combo topCombo;
+    private static final String[] TOPS = {"semi-infinite", "adiabatic", "isothermal"};
     private ParameterRef selected;
     private boolean projectProblemShown;
 
@@ -135,7 +139,7 @@ final class StackView implements PanelView {
         editor.grabHorizontal = true;
         table.addListener(SWT.MouseDown, e -> clicked(new Point(e.x, e.y)));
         Composite buttons = new Composite(left, SWT.NONE);
-        GridLayout bl = new GridLayout(4, false);
+        GridLayout bl = new GridLayout(7, false);
         bl.marginWidth = 0;
         buttons.setLayout(bl);
         buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
@@ -143,6 +147,16 @@ final class StackView implements PanelView {
         button(buttons, "Remove layer", this::removeLayer);
         button(buttons, "Move up", () -> move(-1));
         button(buttons, "Move down", () -> move(1));
+        button(buttons, "Add layer above", this::addLayerAbove).setToolTipText("a layer above the heated plane"
+                + " (stack.above: a window, a liquid, a second solid), next to the plane; heat then flows both ways");
+        Label tl = new Label(buttons, SWT.NONE);
+        tl.setText("top:");
+        tl.setToolTipText("beyond the outermost layer above (stack.top): semi-infinite (that layer has no"
+                + " thickness), adiabatic or isothermal (it needs one); only with layers above");
+        topCombo = new Combo(buttons, SWT.READ_ONLY);
+        topCombo.setItems(TOPS);
+        topCombo.setToolTipText(tl.getToolTipText());
+        topCombo.addListener(SWT.Selection, e -> takeTop());
         Composite depths = new Composite(left, SWT.NONE);
         depths.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         GridLayout dl = new GridLayout(7, false);
@@ -351,8 +365,8 @@ final class StackView implements PanelView {
         Object[] visit = {new Object()};
         t.addListener(SWT.FocusIn, e -> {
             visit[0] = new Object();
-            if (!names.isEmpty()) {
-                select(ParameterRef.layer(names.get(0), c.key()));
+            if (names.size() > aboveCount) {
+                select(ParameterRef.layer(names.get(aboveCount), c.key()));
             }
         });
         t.addListener(SWT.Modify, e -> {
@@ -375,11 +389,11 @@ final class StackView implements PanelView {
      * depth that is not positive is refused in words. True when taken.
      */
     boolean takeDepth(int i, String text, Object visit, boolean finishing) {
-        if (names.isEmpty()) {
+        if (names.size() <= aboveCount) {
             return false;
         }
         LayerColumn c = DEPTHS.get(i);
-        String top = names.get(0);
+        String top = names.get(aboveCount);
         ParameterRef ref = ParameterRef.layer(top, c.key());
         String where = top + " · " + c.words() + " (" + c.unit().unit() + "): ";
         if (text.isBlank()) {
@@ -418,8 +432,9 @@ final class StackView implements PanelView {
     }
 
     private void showDepths(JsonNode layers) {
-        boolean any = !names.isEmpty();
-        topLabel.setText(any ? "Top layer '" + names.get(0) + "':" : "");
+        boolean any = names.size() > aboveCount;
+        String first = any ? names.get(aboveCount) : "";
+        topLabel.setText(any ? "Heated layer '" + first + "':" : "");
         for (int i = 0; i < DEPTHS.size(); i++) {
             LayerColumn c = DEPTHS.get(i);
             JsonNode v = layers.path(0).path(c.key());
@@ -430,7 +445,7 @@ final class StackView implements PanelView {
                     depthText[i].setText(shown);
                 }
             }
-            depthRole[i].setText(any ? roleMark(ParameterRef.layer(names.get(0), c.key())).strip() : "");
+            depthRole[i].setText(any ? roleMark(ParameterRef.layer(first, c.key())).strip() : "");
         }
         topLabel.getParent().layout(true);
     }
@@ -448,9 +463,18 @@ final class StackView implements PanelView {
             return;
         }
         showSamples();
-        JsonNode layers = project.stackTree().path("layers");
+        ObjectNode tree = project.stackTree();
+        JsonNode layers = tree.path(Project.LAYERS);
+        // Rows from the top of the drawing down: the layers above the heated plane outermost first, then layers.
+        List<JsonNode> rows = new ArrayList<>();
+        JsonNode above = tree.path(Project.ABOVE);
+        for (int i = above.size() - 1; i >= 0; i--) {
+            rows.add(above.get(i));
+        }
+        layers.forEach(rows::add);
+        aboveCount = above.size();
         List<String> now = new ArrayList<>();
-        layers.forEach(l -> now.add(l.path("name").asText()));
+        rows.forEach(l -> now.add(l.path("name").asText()));
         names = now;
         Optional<CaseModel> model = project.model();
         int keep = table.getSelectionIndex();
@@ -462,9 +486,10 @@ final class StackView implements PanelView {
             new TableItem(table, SWT.NONE);
         }
         for (int i = 0; i < names.size(); i++) {
-            JsonNode node = layers.get(i);
+            JsonNode node = rows.get(i);
             TableItem item = table.getItem(i);
-            item.setText(NAME, names.get(i));
+            item.setText(NAME, (i < aboveCount ? "↑ " : "") + names.get(i)
+                    + (i == aboveCount && aboveCount > 0 ? " ◂ heated" : ""));
             item.setText(MATERIAL, node.path("material").asText(EXPLICIT));
             String name = names.get(i);
             Optional<Layer> resolved = model.flatMap(m -> m.stack().layer(name));
@@ -474,6 +499,7 @@ final class StackView implements PanelView {
         }
         fitColumns();
         showDepths(layers);
+        showTop(tree);
         if (keep >= 0 && keep < names.size()) {
             table.setSelection(keep);
         }
@@ -706,9 +732,9 @@ final class StackView implements PanelView {
         l.put("thickness_m", 1e-7);
         l.put("k_through_w_mk", 1.0);
         l.put("heat_capacity_j_m3k", 2e6);
-        int at = Math.max(0, names.size() - 1);
+        int at = Math.max(0, names.size() - aboveCount - 1);
         project.addLayer(at, l);
-        table.setSelection(at);
+        table.setSelection(aboveCount + at);
         status.show("Added '" + name + "' with placeholder values (100 nm, 1 W/(m K), 2 MJ/(m³ K)); replace them"
                 + " with the sample's.", StatusLine.Tone.CAUTION);
     }
@@ -719,8 +745,8 @@ final class StackView implements PanelView {
             status.show("Select the layer to remove first.", StatusLine.Tone.CAUTION);
             return;
         }
-        if (names.size() == 1) {
-            status.show("A stack needs at least one layer.", StatusLine.Tone.PROBLEM);
+        if (i >= aboveCount && names.size() - aboveCount == 1) {
+            status.show("A stack needs at least one layer below the heated plane.", StatusLine.Tone.PROBLEM);
             return;
         }
         String name = names.get(i);
@@ -730,17 +756,75 @@ final class StackView implements PanelView {
                 + " uncertain input" + (roles == 1 ? "" : "s") + " leave the fit with it." : "")
                 + "\n\nEdit ▸ Undo brings it back.";
         if (workbench.confirm("Remove layer", question, "Remove layer")) {
-            project.removeLayer(i);
+            if (i < aboveCount) {
+                project.removeLayerAbove(aboveCount - 1 - i);
+            } else {
+                project.removeLayer(i - aboveCount);
+            }
+        }
+    }
+
+    /**
+     * A new layer above the heated plane, next to it; the first is a semi-infinite window (no thickness) for the
+     * default top, later ones 100 nm films between it and the plane.
+     */
+    void addLayerAbove() {
+        int n = 1;
+        String name = "above " + n;
+        while (names.contains(name)) {
+            name = "above " + (++n);
+        }
+        ObjectNode l = JsonNodeFactory.instance.objectNode();
+        l.put("name", name);
+        boolean first = aboveCount == 0;
+        if (!first) {
+            l.put("thickness_m", 1e-7);
+        }
+        l.put("k_through_w_mk", 1.0);
+        l.put("heat_capacity_j_m3k", 2e6);
+        project.addLayerAbove(0, l);
+        table.setSelection(aboveCount - 1);
+        status.show("Added '" + name + "' above the heated plane with placeholder values (" + (first
+                ? "semi-infinite, " : "100 nm, ") + "1 W/(m K), 2 MJ/(m³ K)); replace them with the sample's.",
+                StatusLine.Tone.CAUTION);
+    }
+
+    private void showTop(ObjectNode tree) {
+        boolean any = aboveCount > 0;
+        topCombo.setEnabled(any);
+        int at = any ? Math.max(0, List.of(TOPS).indexOf(tree.path("top").asText(TOPS[0]))) : -1;
+        if (topCombo.getSelectionIndex() != at) {
+            if (at < 0) {
+                topCombo.deselectAll();
+            } else {
+                topCombo.select(at);
+            }
+        }
+    }
+
+    Combo topCombo() {
+        return topCombo;
+    }
+
+    private void takeTop() {
+        int i = topCombo.getSelectionIndex();
+        if (i >= 0 && aboveCount > 0) {
+            project.setTop(i == 0 ? null : TOPS[i]);
         }
     }
 
     private void move(int by) {
         int i = table.getSelectionIndex();
         int to = i + by;
-        if (i < 0 || to < 0 || to >= names.size()) {
+        // A layer moves within its side of the heated plane.
+        if (i < 0 || to < 0 || to >= names.size() || (i < aboveCount) != (to < aboveCount)) {
             return;
         }
-        project.moveLayer(i, to);
+        if (i < aboveCount) {
+            project.moveLayerAbove(aboveCount - 1 - i, aboveCount - 1 - to);
+        } else {
+            project.moveLayer(i - aboveCount, to - aboveCount);
+        }
         table.setSelection(to);
     }
 }

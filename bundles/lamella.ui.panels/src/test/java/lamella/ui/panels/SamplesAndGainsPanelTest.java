@@ -228,4 +228,82 @@ class SamplesAndGainsPanelTest {
             other.dispose();
         }
     }
+
+    @Test
+    void layersAboveTheHeatedPlaneAreAddedEditedMovedAndRemovedWithTheirTop() throws Exception {
+        try (PanelHarness h = new PanelHarness(806, 513)) {
+            StackView stack = (StackView) h.open(new StackPanel());
+            Project p = h.workbench.project();
+            assertFalse(stack.topCombo().isEnabled(), "no layers above: no top to choose");
+            stack.addLayerAbove();
+            assertFalse(p.problem().isPresent(), () -> p.problem().orElseThrow().getMessage());
+            assertTrue(p.model().orElseThrow().stack().heatsBothWays());
+            assertEquals(4, stack.table().getItemCount());
+            assertEquals("↑ above 1", stack.table().getItem(0).getText(0));
+            assertEquals("transducer ◂ heated", stack.table().getItem(1).getText(0));
+            assertTrue(stack.table().getItem(0).getText(2).startsWith("semi-infinite"),
+                    "the first layer above is a half-space for the default top");
+            assertTrue(stack.topCombo().isEnabled());
+            assertEquals("semi-infinite", stack.topCombo().getText());
+
+            assertTrue(stack.commit(0, 3, "0.2"), stack.statusText());
+            assertEquals(0.2, p.tree().path("stack").path("above").get(0).path("k_through_w_mk").asDouble(), 0,
+                    "a value typed in an above row goes to stack.above");
+            stack.addLayerAbove();
+            assertEquals("above 2", p.tree().path("stack").path("above").get(0).path("name").asText(),
+                    "a new layer above goes next to the plane");
+            assertEquals("↑ above 2", stack.table().getItem(1).getText(0), "drawn just above the plane");
+            assertTrue(stack.commit(1, 6, "80"), stack.statusText());
+            assertEquals(8e7, p.tree().path("stack").path("above").get(0).path("conductance_below_w_m2k")
+                    .asDouble(), 0, "G of the interface toward the heated plane, in MW/(m² K)");
+            p.setFree(ParameterRef.layer("above 1", "k_through_w_mk"), Double.NaN, Double.NaN);
+            h.pump(50);
+            assertTrue(stack.table().getItem(0).getText(3).endsWith("free"), stack.table().getItem(0).getText(3));
+            assertFalse(p.problem().isPresent(), () -> p.problem().orElseThrow().getMessage());
+            h.screenshot("stack-above-806x513");
+
+            choose(stack.topCombo(), "isothermal");
+            assertEquals("isothermal", p.tree().path("stack").path("top").asText());
+            assertTrue(p.problem().isPresent(), "an isothermal top needs the outermost layer's thickness");
+            assertTrue(stack.commit(0, 2, "2000"), stack.statusText());
+            assertFalse(p.problem().isPresent(), () -> p.problem().orElseThrow().getMessage());
+
+            stack.table().setSelection(1);
+            button(h, "Move up").notifyListeners(SWT.Selection, new Event());
+            assertEquals("above 2", p.tree().path("stack").path("above").get(1).path("name").asText(),
+                    "up in the drawing is away from the plane");
+            button(h, "Move up").notifyListeners(SWT.Selection, new Event());
+            assertEquals(2, p.tree().path("stack").path("above").size(), "a layer stays on its side of the plane");
+            stack.table().setSelection(1);
+            button(h, "Move down").notifyListeners(SWT.Selection, new Event());
+            assertEquals("above 1", p.tree().path("stack").path("above").get(0).path("name").asText(),
+                    "the layer next to the plane does not cross it");
+            assertEquals(3, p.tree().path("stack").path("layers").size());
+
+            h.workbench.confirmAnswer = true;
+            for (int k = 0; k < 2; k++) {
+                stack.table().setSelection(0);
+                button(h, "Remove layer").notifyListeners(SWT.Selection, new Event());
+            }
+            assertFalse(p.tree().path("stack").has("above"));
+            assertFalse(p.tree().path("stack").has("top"), "the top goes with the last layer above");
+            assertEquals(Project.Role.FIXED, p.role(ParameterRef.layer("above 1", "k_through_w_mk")));
+            assertFalse(p.problem().isPresent(), () -> p.problem().orElseThrow().getMessage());
+            assertEquals(3, stack.table().getItemCount());
+        }
+    }
+
+    private static org.eclipse.swt.widgets.Button button(PanelHarness h, String label) {
+        java.util.ArrayDeque<Control> todo = new java.util.ArrayDeque<>(List.of(h.shell.getChildren()));
+        while (!todo.isEmpty()) {
+            Control c = todo.pop();
+            if (c instanceof org.eclipse.swt.widgets.Button b && b.getText().equals(label)) {
+                return b;
+            }
+            if (c instanceof org.eclipse.swt.widgets.Composite k) {
+                todo.addAll(List.of(k.getChildren()));
+            }
+        }
+        throw new AssertionError("no button " + label);
+    }
 }
