@@ -59,6 +59,9 @@ final class DatasetsView implements PanelView {
     private final Text leftOut;
     private final Combo weights;
     private static final String NO_GAIN = "(none)";
+    private static final List<String> NO_GAIN_SIGNALS = List.of("phase_deg", "ratio");
+    private static final String GAIN_TIP = "a named gain of the fit (Set-up panel) that multiplies this dataset's"
+            + " modelled signal; (none): the signal as modelled";
     private final Label sampleLabel;
     private final Combo sample;
     private final Combo gain;
@@ -135,8 +138,7 @@ final class DatasetsView implements PanelView {
         Label gl = new Label(fitting, SWT.NONE);
         gl.setText("gain:");
         gain = new Combo(fitting, SWT.READ_ONLY);
-        gain.setToolTipText("a named gain of the fit (Set-up panel) that multiplies this dataset's modelled signal;"
-                + " (none): the signal as modelled");
+
         gain.addListener(SWT.Selection, e -> takeGain());
         rangeProblem = new StatusLine(fitting, 2);
         technique = new BlockEditor(editors, project, "Technique", "measurement", 0,
@@ -347,7 +349,12 @@ final class DatasetsView implements PanelView {
         tree.path("fit").path("gains").fieldNames().forEachRemaining(gains::add);
         gain.setItems(gains.toArray(String[]::new));
         gain.select(Math.max(0, gains.indexOf(d.path("gain").asText(NO_GAIN))));
-        gain.setEnabled(gains.size() > 1);
+        // A phase or the TDTR ratio carries no detector gain: the fit refuses one there, so it is not offered.
+        String signal = DatasetPoints.request(tree, selected, workbench.catalog()).signal();
+        boolean scales = !NO_GAIN_SIGNALS.contains(signal);
+        gain.setEnabled(gains.size() > 1 && (scales || d.has("gain")));
+        gain.setToolTipText(scales ? GAIN_TIP : "the " + signal + " signal carries no detector gain; a gain is for"
+                + " an amplitude or a voltage");
         editors.layout(true, true);
         scroll.setMinSize(editors.computeSize(SWT.DEFAULT, SWT.DEFAULT));
     }

@@ -46,11 +46,11 @@ final class GainsEditor {
         this.workbench = workbench;
         this.project = workbench.project();
         group = new Group(parent, SWT.NONE);
-        group.setText("Gains of the fit (a factor on the signal of each dataset that names it)");
+        group.setText("Gains of the fit (× the signal of each dataset naming it)");
         group.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        group.setLayout(new GridLayout(6, false));
+        group.setLayout(new GridLayout(4, false));
         table = Tables.create(group);
-        GridData tgd = new GridData(SWT.FILL, SWT.TOP, true, false, 6, 1);
+        GridData tgd = new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1);
         tgd.heightHint = 60;
         table.setLayoutData(tgd);
         table.addListener(SWT.Selection, e -> selected());
@@ -59,17 +59,22 @@ final class GainsEditor {
         label("value (×):");
         value = text(80, "a positive factor on the modelled signal, " + NumberText.format(LEAST) + " to "
                 + NumberText.format(MOST));
-        button("Add gain", this::add);
-        button("Rename", this::rename);
         label("role in a fit:");
         role = new Combo(group, SWT.READ_ONLY);
         role.setItems(ROLES);
         role.select(0);
-        label("σ (% of value):");
+        label("σ (%):");
         sigma = text(60, "the σ of an uncertain gain in % of its value, such as 2");
-        button("Set value and role", this::apply);
-        button("Remove", this::remove);
-        status = new StatusLine(group, 6);
+        Composite buttons = new Composite(group, SWT.NONE);
+        GridLayout bl = new GridLayout(4, false);
+        bl.marginWidth = 0;
+        buttons.setLayout(bl);
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 4, 1));
+        button(buttons, "Add gain", this::add);
+        button(buttons, "Rename", this::rename);
+        button(buttons, "Set value and role", this::apply);
+        button(buttons, "Remove", this::remove);
+        status = new StatusLine(group, 4);
     }
 
     Table table() {
@@ -273,8 +278,8 @@ final class GainsEditor {
         return t;
     }
 
-    private void button(String text, Runnable action) {
-        Button b = new Button(group, SWT.PUSH);
+    private static void button(Composite parent, String text, Runnable action) {
+        Button b = new Button(parent, SWT.PUSH);
         b.setText(text);
         b.addListener(SWT.Selection, e -> action.run());
     }

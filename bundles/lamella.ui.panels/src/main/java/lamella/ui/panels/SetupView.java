@@ -49,17 +49,21 @@ final class SetupView implements PanelView {
         this.project = workbench.project();
         this.work = new LatestOnly<>(workbench, "Steady temperature rise");
         root = new Composite(parent, SWT.NONE);
-        root.setLayout(new GridLayout(1, false));
-        technique = new BlockEditor(root, project, "Technique", "measurement", -1,
+        // Two columns, the model's blocks beside the fit's gains and the heating estimate, so that everything is in
+        // view at 1280×800 without scrolling.
+        root.setLayout(new GridLayout(2, true));
+        Composite left = column(root);
+        Composite right = column(root);
+        technique = new BlockEditor(left, project, "Technique", "measurement", -1,
                 workbench.catalog().techniques().stream().map(Technique::type).toList(),
                 type -> workbench.catalog().technique(type).map(Technique::parameters).orElse(List.of()),
                 type -> workbench.catalog().technique(type).map(Technique::summary).orElse(""));
-        geometry = new BlockEditor(root, project, "Heating geometry", "geometry", -1,
+        geometry = new BlockEditor(left, project, "Heating geometry", "geometry", -1,
                 workbench.catalog().geometries().stream().map(HeatingGeometry::type).toList(),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::parameters).orElse(List.of()),
                 type -> workbench.catalog().geometry(type).map(HeatingGeometry::summary).orElse(""));
-        gains = new GainsEditor(root, workbench);
-        Group heat = new Group(root, SWT.NONE);
+        gains = new GainsEditor(right, workbench);
+        Group heat = new Group(right, SWT.NONE);
         heat.setText("Steady heating");
         heat.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         heat.setLayout(new GridLayout(2, false));
@@ -95,6 +99,16 @@ final class SetupView implements PanelView {
     public void close() {
         project.removeListener(listener);
         work.cancel();
+    }
+
+    private static Composite column(Composite parent) {
+        Composite c = new Composite(parent, SWT.NONE);
+        GridLayout l = new GridLayout(1, false);
+        l.marginWidth = 0;
+        l.marginHeight = 0;
+        c.setLayout(l);
+        c.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        return c;
     }
 
     void setPower(String milliwatts) {

@@ -187,7 +187,8 @@ final class StackView implements PanelView {
         button(strip, "Set role", this::applyRole);
         status = new StatusLine(left, 1);
         drawing = new CrossSection(sash);
-        sash.setWeights(new int[] {62, 38});
+        // The table and its controls take most of the height, so that five or six layers stay in view at 1280×800.
+        sash.setWeights(new int[] {70, 30});
         select(null);
         project.addListener(listener);
         refresh();
@@ -300,9 +301,9 @@ final class StackView implements PanelView {
         boolean convert = project.sampleNames().isEmpty();
         project.addSample(name);
         sampleName.setText("");
-        status.show("Added sample '" + name + "', a copy of " + (convert ? "the stack, which is now sample '"
-                + Project.FIRST_SAMPLE + "' (its datasets name it)" : "the sample shown") + "; a dataset measured"
-                + " on it names it in the Datasets panel.", StatusLine.Tone.CAUTION);
+        status.show("Added sample '" + name + "', a copy of " + (convert ? "the stack, now sample '"
+                + Project.FIRST_SAMPLE + "'" : "the one shown") + "; its data name it in Datasets ▸ sample.",
+                StatusLine.Tone.CAUTION);
     }
 
     void renameSample() {

@@ -195,6 +195,12 @@ class SamplesAndGainsPanelTest {
             assertEquals(steps + 1, p.undoSteps());
             assertEquals("detector", p.datasets().get(0).path("gain").asText());
             assertFalse(p.problem().isPresent(), () -> p.problem().orElseThrow().getMessage());
+            datasets.select(1);
+            h.pump(50);
+            assertFalse(datasets.gain().isEnabled(), "a phase carries no gain: none is offered");
+            assertEquals("SN-75", datasets.sample().getText());
+            datasets.select(0);
+            h.pump(50);
 
             gains.select(0);
             gains.name().setText("lock-in");
