@@ -55,9 +55,9 @@ final class GainsEditor {
         table.setLayoutData(tgd);
         table.addListener(SWT.Selection, e -> selected());
         label("name:");
-        name = text(120, "a gain's name, such as detector; datasets name it in the Datasets panel");
+        name = text(90, "a gain's name, such as detector; datasets name it in the Datasets panel");
         label("value (×):");
-        value = text(80, "a positive factor on the modelled signal, " + NumberText.format(LEAST) + " to "
+        value = text(60, "a positive factor on the modelled signal, " + NumberText.format(LEAST) + " to "
                 + NumberText.format(MOST));
         label("role in a fit:");
         role = new Combo(group, SWT.READ_ONLY);

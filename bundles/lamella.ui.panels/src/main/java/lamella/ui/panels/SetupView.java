@@ -77,7 +77,8 @@ final class SetupView implements PanelView {
         power.addListener(SWT.DefaultSelection, e -> powerEntered());
         power.addListener(SWT.FocusOut, e -> powerEntered());
         selfHeating = new Button(heat, SWT.CHECK);
-        selfHeating.setText("self-heating: library values at the heated temperature (case key self_heating)");
+        selfHeating.setText("self-heating: library values at the heated temperature");
+        selfHeating.setToolTipText("writes the absorbed power into the case as self_heating.absorbed_power_w");
         selfHeating.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
         selfHeating.addListener(SWT.Selection, e -> selfHeatingToggled());
         rise = new StatusLine(heat, 2);
