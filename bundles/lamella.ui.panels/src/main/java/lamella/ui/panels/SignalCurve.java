@@ -78,8 +78,15 @@ record SignalCurve(String xColumn, String technique, String signal, List<String>
                         .orElse("x") + ") and there are no data to take them from; give them in the set-up panel");
             }
             SignalTable t = sim.run(x);
+            double[] modelY = t.column(signal).clone();
+            // the fit multiplies the signal of a dataset that names a gain by it; the curve is drawn the same way (a
+            // phase or a ratio carries no gain)
+            double gain = signal.endsWith("_deg") || signal.equals("ratio") ? 1.0 : CaseBlocks.gain(doc, dataset);
+            for (int i = 0; i < modelY.length; i++) {
+                modelY[i] *= gain;
+            }
             return Outcome.of(new SignalCurve(xColumn.get(), sim.technique().type(), signal, signals, dataX, dataY,
-                    x, t.column(signal), name));
+                    x, modelY, name));
         } catch (InputException e) {
             return Outcome.failed(e.getMessage());
         } catch (ModelEvaluationException e) {

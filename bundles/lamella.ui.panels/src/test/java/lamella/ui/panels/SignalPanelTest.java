@@ -45,4 +45,29 @@ class SignalPanelTest {
             }
         }
     }
+
+    /**
+     * A dataset measured on another sample is drawn with that sample's stack and times the gain it names: in the SSTR
+     * demo the unknown's ceramic (Λ 5 W/(m K) as written) under the same transducer rises less than the glass
+     * reference (Λ 1.38), and a gain of 0.5 halves the curve.
+     */
+    @Test
+    void eachDatasetIsDrawnWithItsSampleAndItsGain() throws Exception {
+        Path demo = Path.of("../../demo-data/sstr-calibration/case.json");
+        try (PanelHarness h = new PanelHarness(1100, 720, demo)) {
+            SignalView v = (SignalView) h.open(new SignalPanel());
+            assertTrue(h.pumpUntil(() -> v.modelValues().length > 0, 20_000), "a model is drawn: " + v.statusText());
+            double[] reference = v.modelValues();
+            v.picker().select(1);
+            assertTrue(h.pumpUntil(() -> !Arrays.equals(reference, v.modelValues()), 20_000),
+                    "the unknown sample's curve: " + v.statusText());
+            double[] unknown = v.modelValues();
+            double ratio = unknown[unknown.length - 1] / reference[reference.length - 1];
+            assertTrue(ratio > 0.2 && ratio < 0.6, "the better conductor rises less: " + ratio);
+            h.workbench.project().set(lamella.api.ParameterRef.gain("probe"), 0.5);
+            assertTrue(h.pumpUntil(() -> !Arrays.equals(unknown, v.modelValues()), 20_000), v.statusText());
+            assertEquals(0.5 * unknown[unknown.length - 1], v.modelValues()[unknown.length - 1],
+                    1e-9 * unknown[unknown.length - 1], "the gain multiplies the curve");
+        }
+    }
 }
