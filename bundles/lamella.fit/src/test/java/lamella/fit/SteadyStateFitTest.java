@@ -23,21 +23,18 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class SteadyStateFitTest {
 
-    static final double GAIN = 0.37;
-    static final double K_REFERENCE = 1.38;
-    static final double K_UNKNOWN = 8.0;
+    static final double GAIN = SharedGainTest.GAIN;
+    static final double K_REFERENCE = SharedGainTest.K_REFERENCE;
+    static final double K_UNKNOWN = SharedGainTest.K_UNKNOWN;
     static final String BEAMS = "\"geometry\": {\"type\": \"gaussian\", \"pump_radius_m\": 1e-5, \"probe_radius_m\": 5e-6}";
     static final double[] POWERS = {1e-3, 2.5e-3, 5e-3, 7.5e-3, 1e-2};
 
     @TempDir
     Path dir;
 
+    /** The same cap on a substrate of conductivity k as the FDTR calibration of {@link SharedGainTest}. */
     static String stack(double k) {
-        return """
-                {"layers": [
-                  {"name": "cap", "thickness_m": 8e-8, "k_through_w_mk": 200, "heat_capacity_j_m3k": 2.45e6,
-                   "conductance_below_w_m2k": 1.5e8},
-                  {"name": "substrate", "k_through_w_mk": %s, "heat_capacity_j_m3k": 1.7e6}]}""".formatted(k);
+        return SharedGainTest.stack(k);
     }
 
     /**
