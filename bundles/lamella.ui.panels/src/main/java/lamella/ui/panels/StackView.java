@@ -411,20 +411,9 @@ final class StackView implements PanelView {
             status.show("", StatusLine.Tone.PLAIN);
             return true;
         }
-        double si;
-        try {
-            si = QuantityText.parse(text, c.key(), c.unit()).si();
-        } catch (QuantityText.Refusal e) {
-            if (finishing) {
-                status.show(where + e.getMessage(), StatusLine.Tone.PROBLEM);
-            }
-            return false;
-        }
-        if (!(si > 0)) {
-            if (finishing) {
-                status.show(where + NumberText.format(c.unit().shown(si)) + " is not allowed; a depth is positive"
-                        + " (blank: at the surface)", StatusLine.Tone.PROBLEM);
-            }
+        double si = positive(text, c.key(), c.unit(), where, finishing,
+                "a depth is positive (blank: at the surface)");
+        if (Double.isNaN(si)) {
             return false;
         }
         status.show("", StatusLine.Tone.PLAIN);
@@ -610,26 +599,39 @@ final class StackView implements PanelView {
         return take(row, column, text, new Object(), true);
     }
 
+    /**
+     * The positive SI value a text gives in the unit shown, or NaN when it gives none; finishing, the status line says
+     * why (the text's own problem, or the rule a value breaks), after {@code where}.
+     */
+    private double positive(String text, String key, DisplayUnit unit, String where, boolean finishing,
+                            String rule) {
+        double si;
+        try {
+            si = QuantityText.parse(text, key, unit).si();
+        } catch (QuantityText.Refusal e) {
+            if (finishing) {
+                status.show(where + e.getMessage(), StatusLine.Tone.PROBLEM);
+            }
+            return Double.NaN;
+        }
+        if (!(si > 0)) {
+            if (finishing) {
+                status.show(where + NumberText.format(unit.shown(si)) + " is not allowed; " + rule,
+                        StatusLine.Tone.PROBLEM);
+            }
+            return Double.NaN;
+        }
+        return si;
+    }
+
     /** While typing (not finishing) a text that is not yet a value is left alone without a word. */
     private boolean take(int row, int column, String text, Object visit, boolean finishing) {
         int valueColumn = column - FIRST_VALUE;
         LayerColumn c = LayerColumn.VALUES.get(valueColumn);
         String layer = names.get(row);
         String where = layer + " · " + heading(valueColumn) + ": ";
-        double si;
-        try {
-            si = QuantityText.parse(text, c.key(), units[valueColumn]).si();
-        } catch (QuantityText.Refusal e) {
-            if (finishing) {
-                status.show(where + e.getMessage(), StatusLine.Tone.PROBLEM);
-            }
-            return false;
-        }
-        if (!(si > 0)) {
-            if (finishing) {
-                status.show(where + NumberText.format(units[valueColumn].shown(si)) + " is not allowed; a layer's"
-                        + " values are positive", StatusLine.Tone.PROBLEM);
-            }
+        double si = positive(text, c.key(), units[valueColumn], where, finishing, "a layer's values are positive");
+        if (Double.isNaN(si)) {
             return false;
         }
         status.show("", StatusLine.Tone.PLAIN);
