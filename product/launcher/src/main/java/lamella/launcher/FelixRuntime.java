@@ -5,11 +5,17 @@ import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
+import java.util.Hashtable;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.function.BooleanSupplier;
+import java.util.function.Consumer;
 
 import org.apache.felix.framework.Felix;
 import org.apache.felix.framework.util.FelixConstants;
+import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleException;
 import org.osgi.framework.launch.Framework;
 
@@ -21,23 +27,32 @@ import org.osgi.framework.launch.Framework;
 public final class FelixRuntime implements AutoCloseable {
 
     private static final long STOP_TIMEOUT_MS = 10_000;
+    private static final String FILEINSTALL = "org.apache.felix.fileinstall";
+    /** The role of the service the runtime registers once every shipped bundle has started. */
+    public static final String STARTED_ROLE = "runtime.started";
+    /** The filter that finds that service. */
+    public static final String STARTED_FILTER = "(lamella.role=runtime.started)";
 
     private final Felix framework;
     private final StorageArea storage;
     private final Path pluginsDir;
     private final List<Path> pluginsAtLaunch;
-    private final List<String> startProblems;
+    private final List<Bundle> toStart;
+    private final Set<String> early;
+    private volatile List<String> startProblems;
     private final StandardErrorLog log;
     private boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
-            List<String> startProblems, StandardErrorLog log) {
+            List<Bundle> toStart, Set<String> early, List<String> startProblems, StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
         this.storage = storage;
         this.pluginsDir = pluginsDir;
         this.pluginsAtLaunch = pluginsAtLaunch;
-        this.startProblems = startProblems;
+        this.toStart = toStart;
+        this.early = early;
+        this.startProblems = List.copyOf(startProblems);
     }
 
     /**
@@ -50,11 +65,45 @@ public final class FelixRuntime implements AutoCloseable {
     }
 
     /**
-     * Starts the runtime in {@code home} with the shipped bundles the scope needs.
+     * Starts the runtime in {@code home} with the shipped bundles the scope needs, and returns once they are started
+     * and the runtime's {@value #STARTED_FILTER} service is registered.
      *
      * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
      */
     public static FelixRuntime start(Path home, Map<String, String> overrides, RuntimeScope scope)
+            throws IOException, BundleException {
+        FelixRuntime runtime = prepare(home, overrides, scope);
+        runtime.startBundles();
+        runtime.announceStarted();
+        return runtime;
+    }
+
+    /**
+     * Starts the runtime in {@code home} and returns once its bundles are installed and resolved; they start on a
+     * thread of their own, the workbench's first (so that its window opens while the rest start), then {@code
+     * whenStarted} runs on that thread and the runtime's {@value #STARTED_FILTER} service is registered: the sign that
+     * every shipped bundle, and whatever {@code whenStarted} waited for, is live.
+     *
+     * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
+     */
+    public static FelixRuntime startInBackground(Path home, Map<String, String> overrides, RuntimeScope scope,
+            Consumer<FelixRuntime> whenStarted) throws IOException, BundleException {
+        FelixRuntime runtime = prepare(home, overrides, scope);
+        Thread starter = new Thread(() -> {
+            try {
+                runtime.startBundles();
+                whenStarted.accept(runtime);
+                runtime.announceStarted();
+            } catch (IllegalStateException closedMeanwhile) {
+                // The window was closed while the bundles started: the framework is stopping.
+            }
+        }, "lamella-bundle-start");
+        starter.setDaemon(true);
+        starter.start();
+        return runtime;
+    }
+
+    private static FelixRuntime prepare(Path home, Map<String, String> overrides, RuntimeScope scope)
             throws IOException, BundleException {
         StorageArea storage = StorageArea.create();
         Felix framework = null;
@@ -65,23 +114,37 @@ public final class FelixRuntime implements AutoCloseable {
             List<Path> pluginsAtLaunch = ShippedBundles.jarsIn(pluginsDir);
             List<Path> shipped = new ArrayList<>(ShippedBundles.jarsIn(home.resolve("bundle")));
             List<Path> desktop = ShippedBundles.jarsIn(home.resolve("bundle/" + ShippedBundles.DESKTOP_FOLDER));
+            // A headless command installs what only a plug-in could need — the desktop feature, whose packages a
+            // plug-in may import, and Configuration Admin, which no shipped bundle uses — only when there are
+            // plug-ins, and never starts the desktop's.
+            boolean plugins = !pluginsAtLaunch.isEmpty();
             List<Path> installedOnly = List.of();
+            Set<String> heldBack = Set.of();
+            Set<String> early = new HashSet<>();
             if (scope == RuntimeScope.WORKBENCH) {
                 shipped.addAll(desktop);
-            } else {
+                desktop.forEach(jar -> early.add(ShippedBundles.location(jar)));
+            } else if (plugins) {
                 installedOnly = desktop;
+            } else {
+                heldBack = ShippedBundles.FOR_PLUGINS;
             }
 
             Map<String, Object> config = new HashMap<>(properties);
             StandardErrorLog log = new StandardErrorLog();
             config.put(FelixConstants.LOG_LOGGER_PROP, log);
             PluginFolderLog.install();
+            StartupTrace.step("launcher: settings read, bundles listed");
             framework = new Felix(config);
+            StartupTrace.step("framework constructed");
             framework.start();
-            // Started once the framework runs, so that a bundle that cannot start says why here.
-            List<String> problems = ShippedBundles.installAndStart(framework.getBundleContext(), shipped,
-                    installedOnly);
-            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, List.copyOf(problems), log);
+            StartupTrace.step("framework started (system bundle resolved)");
+            // Installed once the framework runs, so that a bundle that cannot be installed says why here.
+            List<String> problems = new ArrayList<>();
+            List<Bundle> toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped,
+                    installedOnly, heldBack, problems);
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, toStart, Set.copyOf(early),
+                    problems, log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -89,6 +152,20 @@ public final class FelixRuntime implements AutoCloseable {
             storage.delete();
             throw e;
         }
+    }
+
+    private void startBundles() {
+        List<String> problems = new ArrayList<>(startProblems);
+        ShippedBundles.start(toStart, early, problems);
+        startProblems = List.copyOf(problems);
+    }
+
+    /** Registers the sign that every shipped bundle has started (a JDK type: it answers true). */
+    private void announceStarted() {
+        Hashtable<String, Object> properties = new Hashtable<>();
+        properties.put("lamella.role", STARTED_ROLE);
+        framework.getBundleContext().registerService(BooleanSupplier.class, () -> true, properties);
+        StartupTrace.step("runtime started");
     }
 
     public Framework framework() {
@@ -104,7 +181,10 @@ public final class FelixRuntime implements AutoCloseable {
         return pluginsAtLaunch;
     }
 
-    /** One line per shipped bundle that could not be installed or started; empty for a sound runtime. */
+    /**
+     * One line per shipped bundle that could not be installed or started; empty for a sound runtime. Complete once the
+     * bundles have started (for {@link #startInBackground}, when its {@code whenStarted} runs).
+     */
     public List<String> startProblems() {
         return startProblems;
     }
@@ -144,6 +224,31 @@ public final class FelixRuntime implements AutoCloseable {
         } catch (UncheckedIOException stillInUse) {
             // The cache is a temporary folder; a file the running framework still writes is left to the system.
         }
+    }
+
+    /**
+     * Ends the runtime of a process whose command has finished and which exits next: FileInstall stops, the storage
+     * goes, the rest of the framework is left running. Stopping it all would deactivate every component and stop
+     * every bundle in turn, some 40 ms of a short command, for nothing the user could see: the command's outputs are
+     * complete and closed when it returns its status, and the process's end stops every thread. FileInstall is
+     * stopped because its folder watch waits in native code, and the JVM gives such a thread 300 ms before it exits.
+     */
+    public synchronized void abandon() {
+        if (closed) {
+            return;
+        }
+        log.silence();
+        PluginFolderLog.silence();
+        for (Bundle bundle : framework.getBundleContext().getBundles()) {
+            if (FILEINSTALL.equals(bundle.getSymbolicName())) {
+                try {
+                    bundle.stop();
+                } catch (BundleException | IllegalStateException e) {
+                    // Already stopping or gone: the process ends either way.
+                }
+            }
+        }
+        discard();
     }
 
     private static void stop(Felix framework) {

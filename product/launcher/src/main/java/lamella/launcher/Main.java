@@ -30,7 +30,10 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        StartupTrace.step("main entered");
         int status = run(args);
+        StartupTrace.step("runtime closed");
+        StartupTrace.print();
         System.out.flush();
         System.err.flush();
         System.exit(status);
@@ -41,29 +44,46 @@ public final class Main {
         String[] commandLine = args.length == 0 ? new String[] {"help"} : args;
         FelixRuntime runtime;
         try {
-            RuntimeScope scope = workbench ? RuntimeScope.WORKBENCH : RuntimeScope.COMMANDS;
-            runtime = FelixRuntime.start(home(), Map.of(), scope);
+            // The workbench's window opens while the other bundles start; a command waits for them all.
+            runtime = workbench
+                    ? FelixRuntime.startInBackground(home(), Map.of(), RuntimeScope.WORKBENCH, Main::settle)
+                    : FelixRuntime.start(home(), Map.of(), RuntimeScope.COMMANDS);
         } catch (Exception e) {
             System.err.println("lamella: could not start the runtime: " + e.getMessage());
             return FAILED;
         }
         Runtime.getRuntime().addShutdownHook(new Thread(() -> ending(runtime), "lamella-shutdown"));
         try {
-            runtime.startProblems().forEach(p -> System.err.println("lamella: " + p));
             BundleContext context = runtime.framework().getBundleContext();
-            PluginSettler.settle(context, runtime.pluginsAtLaunch(), PLUGIN_PATIENCE)
-                    .forEach(p -> System.err.println("lamella: " + p));
             if (workbench) {
                 return WorkbenchStart.run(context, WORKBENCH_PATIENCE_MS) ? 0 : FAILED;
             }
+            settle(runtime);
             return dispatch(context, commandLine);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             return FAILED;
         } finally {
             finished = true;
-            runtime.close();
+            StartupTrace.step("command returned");
+            if (workbench) {
+                runtime.close();
+            } else {
+                runtime.abandon();
+            }
         }
+    }
+
+    /** Says which shipped bundles could not start, then waits for the plugins present at launch to be live. */
+    private static void settle(FelixRuntime runtime) {
+        runtime.startProblems().forEach(p -> System.err.println("lamella: " + p));
+        try {
+            PluginSettler.settle(runtime.framework().getBundleContext(), runtime.pluginsAtLaunch(), PLUGIN_PATIENCE)
+                    .forEach(p -> System.err.println("lamella: " + p));
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        StartupTrace.step("plugins settled");
     }
 
     /**
@@ -95,8 +115,10 @@ public final class Main {
         properties.put(LaunchHandle.CWD, workingDirectory().toString());
         ServiceRegistration<IntConsumer> registration =
                 context.registerService(IntConsumer.class, handle, properties);
+        StartupTrace.step("command line handed to the dispatcher");
 
         long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(DISPATCHER_PATIENCE_MS);
+        boolean seen = false;
         while (!handle.await(POLL_MS, TimeUnit.MILLISECONDS)) {
             boolean taken = registration.getReference().getUsingBundles() != null;
             if (!taken && System.nanoTime() > deadline) {
@@ -105,6 +127,7 @@ public final class Main {
                 return FAILED;
             }
         }
+        StartupTrace.step("command finished");
         return handle.status();
     }
 

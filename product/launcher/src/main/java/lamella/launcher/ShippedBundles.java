@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Set;
 import java.util.stream.Stream;
 
 import org.osgi.framework.Bundle;
@@ -37,37 +39,80 @@ final class ShippedBundles {
     }
 
     /**
-     * Installs every jar before starting any, so that start order never decides what resolves. A jar installed by
-     * reference is read where it lies rather than copied into the cache.
-     *
-     * @param started       jars to install, resolve and start
-     * @param installedOnly jars to install only: they resolve when something needs them, and never start
-     * @return one line per jar that could not be installed or started
+     * Shipped bundles that a headless command without plug-ins installs but neither resolves nor starts: nothing
+     * shipped uses them, and starting Configuration Admin has Declarative Services look up a configuration for every
+     * component (some 25 ms). A plug-in that needs them finds them started.
      */
-    static List<String> installAndStart(BundleContext context, List<Path> started, List<Path> installedOnly) {
-        List<String> problems = new ArrayList<>();
+    static final Set<String> FOR_PLUGINS = Set.of("org.apache.felix.configadmin");
+
+    /**
+     * Installs every jar before starting any, so that start order never decides what resolves, and resolves them in
+     * one pass. A jar installed by reference is read where it lies rather than copied into the cache.
+     *
+     * @param started       jars to install, resolve and (by {@link #start}) start
+     * @param installedOnly jars to install only: they resolve when something needs them, and never start
+     * @param heldBack      symbolic names of bundles among {@code started} to install only
+     * @param problems      where a jar that cannot be installed is named
+     * @return the bundles to start, in the order {@link #start} wants them
+     */
+    static List<Bundle> installAndResolve(BundleContext context, List<Path> started, List<Path> installedOnly,
+            Set<String> heldBack, List<String> problems) {
         List<Bundle> installed = install(context, started, problems);
         install(context, installedOnly, problems);
+        installed.removeIf(b -> heldBack.contains(b.getSymbolicName()));
+        StartupTrace.step("bundles installed");
         // One resolver pass for all of them is cheaper than one per start.
         context.getBundle(0).adapt(FrameworkWiring.class).resolveBundles(installed);
-        for (Bundle bundle : installed) {
+        StartupTrace.step("bundles resolved");
+        return installed;
+    }
+
+    /**
+     * Starts the bundles that are not fragments. Declarative Services and the OSGi libraries it needs start first,
+     * so that each bundle's components are set up as the bundle starts; then the bundles of {@code early} (the
+     * workbench's, so that its window can open while the rest start); FileInstall starts last, once the shipped
+     * bundles that plug-ins build on are live.
+     *
+     * @param early    locations of bundles to start right after Declarative Services
+     * @param problems where a bundle that cannot start is named
+     */
+    static void start(List<Bundle> bundles, Set<String> early, List<String> problems) {
+        List<Bundle> order = new ArrayList<>(bundles);
+        order.sort(Comparator.comparingInt(b -> startRank(b, early)));
+        for (Bundle bundle : order) {
             if (isFragment(bundle)) {
                 continue;
             }
             try {
                 bundle.start();
-            } catch (BundleException e) {
+                StartupTrace.step("started " + bundle.getSymbolicName());
+            } catch (BundleException | IllegalStateException e) {
                 problems.add("bundle " + bundle.getSymbolicName() + " could not start: " + e.getMessage());
             }
         }
-        return problems;
+    }
+
+    /** Declarative Services and its libraries, then the early bundles, then the rest, then FileInstall. */
+    static int startRank(Bundle bundle, Set<String> early) {
+        String name = bundle.getSymbolicName();
+        if (name != null && (name.startsWith("org.osgi.") || name.equals("org.apache.felix.scr"))) {
+            return 0;
+        }
+        if (early.contains(bundle.getLocation())) {
+            return 1;
+        }
+        return "org.apache.felix.fileinstall".equals(name) ? 3 : 2;
+    }
+
+    static String location(Path jar) {
+        return "reference:" + jar.toUri();
     }
 
     private static List<Bundle> install(BundleContext context, List<Path> jars, List<String> problems) {
         List<Bundle> installed = new ArrayList<>();
         for (Path jar : jars) {
             try {
-                installed.add(context.installBundle("reference:" + jar.toUri()));
+                installed.add(context.installBundle(location(jar)));
             } catch (BundleException e) {
                 problems.add("bundle " + jar.getFileName() + " could not be installed: " + e.getMessage());
             }

@@ -5,6 +5,7 @@ import java.util.concurrent.TimeUnit;
 
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.InvalidSyntaxException;
+import org.osgi.framework.ServiceEvent;
 import org.osgi.framework.ServiceReference;
 
 /**
@@ -15,9 +16,24 @@ import org.osgi.framework.ServiceReference;
 final class WorkbenchStart {
 
     static final String FILTER = "(lamella.role=workbench)";
+    private static final String CONTROL_FILTER = "(lamella.role=workbench.control)";
     private static final long POLL_MS = 20;
 
     private WorkbenchStart() {
+    }
+
+    /** The workbench offers its window control once the window is open: the end of its start-up. */
+    private static void traceWindowOpen(BundleContext context) {
+        try {
+            context.addServiceListener(event -> {
+                if (event.getType() == ServiceEvent.REGISTERED) {
+                    StartupTrace.step("workbench window open");
+                    StartupTrace.print();
+                }
+            }, CONTROL_FILTER);
+        } catch (InvalidSyntaxException e) {
+            throw new IllegalStateException("the control filter is constant and valid", e);
+        }
     }
 
     /** @return false, having said why, when no workbench came up within the patience */
@@ -25,6 +41,9 @@ final class WorkbenchStart {
         // Charts are drawn into images off-screen; SWT, not AWT, owns the display.
         System.setProperty("java.awt.headless", "true");
         long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(patienceMs);
+        if (StartupTrace.on()) {
+            traceWindowOpen(context);
+        }
         while (true) {
             try {
                 Collection<ServiceReference<Runnable>> refs = context.getServiceReferences(Runnable.class, FILTER);
@@ -32,6 +51,7 @@ final class WorkbenchStart {
                     ServiceReference<Runnable> ref = refs.iterator().next();
                     Runnable workbench = context.getService(ref);
                     if (workbench != null) {
+                        StartupTrace.step("workbench service found");
                         try {
                             workbench.run();
                         } finally {

@@ -27,6 +27,12 @@ interface LiveServices {
 
     List<WorkbenchPanel> panels();
 
+    /**
+     * Runs {@code action} once the runtime says that every shipped bundle (and every plug-in present at launch) has
+     * started — at once, on the calling thread, if it already has; otherwise later, on the thread that says so.
+     */
+    void whenStarted(Runnable action);
+
     /** Lamella's version, as the workbench bundle carries it. */
     String version();
 }

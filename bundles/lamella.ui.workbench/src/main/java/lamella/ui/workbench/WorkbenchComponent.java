@@ -5,6 +5,7 @@ import java.util.Hashtable;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.BooleanSupplier;
 import java.util.function.Function;
 import lamella.api.CaseFormat;
 import lamella.api.HeatingGeometry;
@@ -55,6 +56,9 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
     private volatile ReportWriter reports;
     /** Every live library (shipped, data bundles, the facility's and the user's folders), as the case reader has them. */
     private final List<MaterialLibrary> libraries = new CopyOnWriteArrayList<>();
+
+    /** Actions waiting for the runtime's word that every bundle has started; null once it has. */
+    private List<Runnable> waitingForStart = new java.util.ArrayList<>();
 
     private BundleContext context;
     private UserFolder user;
@@ -162,7 +166,39 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
         return context.getBundle().getVersion().toString();
     }
 
+    @Override
+    public void whenStarted(Runnable action) {
+        synchronized (this) {
+            if (waitingForStart != null) {
+                waitingForStart.add(action);
+                return;
+            }
+        }
+        action.run();
+    }
+
     // ------------------------------------------------------------------ references
+
+    /**
+     * The runtime registers this once every shipped bundle has started: the launcher opens the window while the
+     * bundles start, and the project and panels wait for it, so that a project never opens before its techniques
+     * and geometries are live.
+     */
+    @Reference(service = BooleanSupplier.class, target = "(lamella.role=runtime.started)",
+            cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            unbind = "runtimeStopping")
+    void runtimeStarted(BooleanSupplier started) {
+        List<Runnable> due;
+        synchronized (this) {
+            due = waitingForStart == null ? List.of() : waitingForStart;
+            waitingForStart = null;
+        }
+        due.forEach(Runnable::run);
+    }
+
+    void runtimeStopping(BooleanSupplier started) {
+        // Once started, the window stays as it is while the runtime stops.
+    }
 
     /** Every geometry behind a guard, so that a faulty plug-in fails one computation with its bundle's name. */
     @Reference(service = HeatingGeometry.class, cardinality = ReferenceCardinality.MULTIPLE,

@@ -48,6 +48,9 @@ final class WorkbenchWindow implements Workbench {
     private final WindowMenus menus;
     private final Project.Listener projectListener = change -> projectChanged();
     private final Map<String, String> panelProblems = new LinkedHashMap<>();
+    /** How long the window waits for the runtime's word that every bundle has started. */
+    static final int STARTED_PATIENCE_MS = 30_000;
+    private boolean ready;
     private long firstPaintNanos;
 
     WorkbenchWindow(Display display, LiveServices services, MessageLog messages, UserFolder user, Path home) {
@@ -104,25 +107,43 @@ final class WorkbenchWindow implements Workbench {
      * are added as they arrive. Anything queued on the display after this, such as the window control's requests,
      * runs after the panels are in.
      */
+    /**
+     * Maps the window at once, with "Opening the panels…" where the arrangement goes; the project, the menus and the
+     * panels come on a later turn of the event loop, once the runtime says that every bundle has started (the
+     * launcher starts them while the window opens). A runtime that never says so gets the project after
+     * {@value #STARTED_PATIENCE_MS} ms, with a warning.
+     */
     void open() {
-        session.openInitial();
-        menus.install();
-        drop.acceptOn(shell);
         status.showWork("");
         shell.addListener(SWT.Close, e -> e.doit = closing());
         placeWindow();
         layout.showOpening();
+        shell.setText("Lamella");
         shell.open();
-        display.asyncExec(() -> {
-            if (shell.isDisposed()) {
-                return;
+        services.whenStarted(() -> onUi(() -> display.asyncExec(this::ready)));
+        display.timerExec(STARTED_PATIENCE_MS, () -> {
+            if (!ready && !shell.isDisposed()) {
+                messages.warning("The runtime did not say within " + STARTED_PATIENCE_MS / 1000 + " s that all its"
+                        + " bundles had started; the project opens without waiting longer.");
+                ready();
             }
-            for (WorkbenchPanel p : services.panels()) {
-                addPanel(p);
-            }
-            layout.rebuild();
         });
-        display.asyncExec(session::offerRecovery);
+    }
+
+    /** The project, the menus and the panels, once every bundle is live. */
+    private void ready() {
+        if (ready || shell.isDisposed()) {
+            return;
+        }
+        ready = true;
+        session.openInitial();
+        menus.install();
+        drop.acceptOn(shell);
+        for (WorkbenchPanel p : services.panels()) {
+            addPanel(p);
+        }
+        layout.rebuild();
+        session.offerRecovery();
         display.timerExec(ProjectSession.RECOVERY_EVERY_MS, new Runnable() {
             @Override
             public void run() {
@@ -144,6 +165,9 @@ final class WorkbenchWindow implements Workbench {
 
     void panelArrived(WorkbenchPanel panel) {
         onUi(() -> {
+            if (!ready) {
+                return; // ready() adds every panel live by then
+            }
             addPanel(panel);
             layout.rebuild();
         });
@@ -151,6 +175,9 @@ final class WorkbenchWindow implements Workbench {
 
     void panelLeft(WorkbenchPanel panel) {
         onUi(() -> {
+            if (!ready) {
+                return;
+            }
             if (shelf.panel(panel.id()).filter(p -> p == panel).isPresent()) {
                 layout.edit(() -> shelf.left(panel.id()));
             }
@@ -330,6 +357,11 @@ final class WorkbenchWindow implements Workbench {
     }
 
     private boolean closing() {
+        if (!ready) {
+            // Closed before the project opened: there is nothing to keep but the window's place.
+            tasks.shutdown();
+            return true;
+        }
         session.writeRecovery();
         if (!session.confirmDiscard()) {
             return false;
