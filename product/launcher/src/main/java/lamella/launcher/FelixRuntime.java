@@ -9,6 +9,7 @@ import java.util.HashSet;
 import java.util.Hashtable;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
@@ -37,22 +38,28 @@ public final class FelixRuntime implements AutoCloseable {
     private final StorageArea storage;
     private final Path pluginsDir;
     private final List<Path> pluginsAtLaunch;
-    private final List<Bundle> toStart;
+    private final List<Path> shipped;
+    private final List<Path> installedOnly;
+    private final Set<String> heldBack;
     private final Set<String> early;
-    private volatile List<String> startProblems;
+    private volatile List<Bundle> toStart = List.of();
+    private volatile List<String> startProblems = List.of();
+    private volatile Bundle toolkit;
     private final StandardErrorLog log;
     private boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
-            List<Bundle> toStart, Set<String> early, List<String> startProblems, StandardErrorLog log) {
+            List<Path> shipped, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
+            StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
         this.storage = storage;
         this.pluginsDir = pluginsDir;
         this.pluginsAtLaunch = pluginsAtLaunch;
-        this.toStart = toStart;
+        this.shipped = shipped;
+        this.installedOnly = installedOnly;
+        this.heldBack = heldBack;
         this.early = early;
-        this.startProblems = List.copyOf(startProblems);
     }
 
     /**
@@ -73,24 +80,28 @@ public final class FelixRuntime implements AutoCloseable {
     public static FelixRuntime start(Path home, Map<String, String> overrides, RuntimeScope scope)
             throws IOException, BundleException {
         FelixRuntime runtime = prepare(home, overrides, scope);
+        runtime.installAll();
         runtime.startBundles();
         runtime.announceStarted();
         return runtime;
     }
 
     /**
-     * Starts the runtime in {@code home} and returns once its bundles are installed and resolved; they start on a
-     * thread of their own, the workbench's first (so that its window opens while the rest start), then {@code
-     * whenStarted} runs on that thread and the runtime's {@value #STARTED_FILTER} service is registered: the sign that
-     * every shipped bundle, and whatever {@code whenStarted} waited for, is live.
+     * Starts the runtime in {@code home} and returns once the display toolkit (SWT) is installed and resolved, so
+     * that the caller can set up the display while the other bundles install, resolve and start on a thread of their
+     * own — the workbench's first, so that its window opens while the rest start. Then {@code whenStarted} runs on
+     * that thread and the runtime's {@value #STARTED_FILTER} service is registered: the sign that every shipped
+     * bundle, and whatever {@code whenStarted} waited for, is live.
      *
      * @param overrides framework properties that win over {@code conf/lamella.properties} and {@code -D} options
      */
     public static FelixRuntime startInBackground(Path home, Map<String, String> overrides, RuntimeScope scope,
             Consumer<FelixRuntime> whenStarted) throws IOException, BundleException {
         FelixRuntime runtime = prepare(home, overrides, scope);
+        runtime.toolkit = ShippedBundles.installToolkit(runtime.framework.getBundleContext(), runtime.shipped);
         Thread starter = new Thread(() -> {
             try {
+                runtime.installAll();
                 runtime.startBundles();
                 whenStarted.accept(runtime);
                 runtime.announceStarted();
@@ -122,7 +133,7 @@ public final class FelixRuntime implements AutoCloseable {
             Set<String> heldBack = Set.of();
             Set<String> early = new HashSet<>();
             if (scope == RuntimeScope.WORKBENCH) {
-                shipped.addAll(desktop);
+                shipped.addAll(0, desktop);
                 desktop.forEach(jar -> early.add(ShippedBundles.location(jar)));
             } else if (plugins) {
                 installedOnly = desktop;
@@ -139,12 +150,8 @@ public final class FelixRuntime implements AutoCloseable {
             StartupTrace.step("framework constructed");
             framework.start();
             StartupTrace.step("framework started (system bundle resolved)");
-            // Installed once the framework runs, so that a bundle that cannot be installed says why here.
-            List<String> problems = new ArrayList<>();
-            List<Bundle> toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped,
-                    installedOnly, heldBack, problems);
-            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, toStart, Set.copyOf(early),
-                    problems, log);
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, installedOnly,
+                    heldBack, Set.copyOf(early), log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -152,6 +159,14 @@ public final class FelixRuntime implements AutoCloseable {
             storage.delete();
             throw e;
         }
+    }
+
+    /** Installed once the framework runs, so that a bundle that cannot be installed says why. */
+    private void installAll() {
+        List<String> problems = new ArrayList<>();
+        toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped, installedOnly, heldBack,
+                problems);
+        startProblems = List.copyOf(problems);
     }
 
     private void startBundles() {
@@ -166,6 +181,14 @@ public final class FelixRuntime implements AutoCloseable {
         properties.put("lamella.role", STARTED_ROLE);
         framework.getBundleContext().registerService(BooleanSupplier.class, () -> true, properties);
         StartupTrace.step("runtime started");
+    }
+
+    /**
+     * The display toolkit's bundle (SWT), resolved, when {@link #startInBackground} installed it ahead of the rest;
+     * empty otherwise.
+     */
+    public Optional<Bundle> toolkit() {
+        return Optional.ofNullable(toolkit);
     }
 
     public Framework framework() {

@@ -56,6 +56,7 @@ public final class Main {
         try {
             BundleContext context = runtime.framework().getBundleContext();
             if (workbench) {
+                WorkbenchStart.prepareDisplay(runtime.toolkit());
                 return WorkbenchStart.run(context, WORKBENCH_PATIENCE_MS) ? 0 : FAILED;
             }
             settle(runtime);

@@ -45,6 +45,9 @@ final class ShippedBundles {
      */
     static final Set<String> FOR_PLUGINS = Set.of("org.apache.felix.configadmin");
 
+    /** The display toolkit's symbolic name, and the start of its jars' names in {@code bundle/desktop/}. */
+    static final String TOOLKIT = "org.eclipse.swt";
+
     /**
      * Installs every jar before starting any, so that start order never decides what resolves, and resolves them in
      * one pass. A jar installed by reference is read where it lies rather than copied into the cache.
@@ -102,6 +105,25 @@ final class ShippedBundles {
             return 1;
         }
         return "org.apache.felix.fileinstall".equals(name) ? 3 : 2;
+    }
+
+    /**
+     * Installs and resolves the display toolkit's jars (SWT and its platform fragment, which import nothing) ahead of
+     * the rest; the later full install finds them installed.
+     *
+     * @return SWT's bundle, resolved; null when there is none or it does not resolve
+     */
+    static Bundle installToolkit(BundleContext context, List<Path> jars) {
+        List<Path> toolkitJars = jars.stream()
+                .filter(j -> j.getFileName().toString().startsWith(TOOLKIT))
+                .toList();
+        List<Bundle> installed = install(context, toolkitJars, new ArrayList<>());
+        context.getBundle(0).adapt(FrameworkWiring.class).resolveBundles(installed);
+        StartupTrace.step("display toolkit installed and resolved");
+        return installed.stream()
+                .filter(b -> TOOLKIT.equals(b.getSymbolicName()) && b.getState() == Bundle.RESOLVED)
+                .findFirst()
+                .orElse(null);
     }
 
     static String location(Path jar) {

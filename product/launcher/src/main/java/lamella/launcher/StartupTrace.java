@@ -39,7 +39,11 @@ final class StartupTrace {
         if (!ON || STEPS.isEmpty()) {
             return;
         }
-        System.err.println("lamella start-up (since main, this step, what ended):");
+        System.err.println("lamella start-up (since main, this step, what ended); printed at "
+                + System.currentTimeMillis() + " ms since the epoch, for the process's end:");
+        long mainEpochMs = System.currentTimeMillis() - (System.nanoTime() - ORIGIN) / 1_000_000;
+        ProcessHandle.current().info().startInstant().ifPresent(start -> System.err.println(
+                "  process start to main: " + (mainEpochMs - start.toEpochMilli()) + " ms (the clock counts in 10 ms)"));
         STEPS.forEach(s -> System.err.println("  " + s));
         STEPS.clear();
     }

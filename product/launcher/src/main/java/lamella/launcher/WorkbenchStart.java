@@ -1,8 +1,10 @@
 package lamella.launcher;
 
 import java.util.Collection;
+import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 
+import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.InvalidSyntaxException;
 import org.osgi.framework.ServiceEvent;
@@ -16,10 +18,31 @@ import org.osgi.framework.ServiceReference;
 final class WorkbenchStart {
 
     static final String FILTER = "(lamella.role=workbench)";
+    private static final String APP_NAME = "Lamella";
     private static final String CONTROL_FILTER = "(lamella.role=workbench.control)";
     private static final long POLL_MS = 20;
 
     private WorkbenchStart() {
+    }
+
+    /**
+     * Creates SWT's display on the calling thread — the one the workbench's event loop then runs on — from the
+     * toolkit's bundle, while the other bundles install and start on another thread: setting up the toolkit takes a
+     * few hundred milliseconds that would otherwise come after them. The workbench takes it as the current display.
+     * Any failure is left to the workbench, which creates its own display and says why it cannot.
+     */
+    static void prepareDisplay(Optional<Bundle> toolkit) {
+        System.setProperty("java.awt.headless", "true");
+        toolkit.ifPresent(swt -> {
+            try {
+                Class<?> display = swt.loadClass("org.eclipse.swt.widgets.Display");
+                display.getMethod("setAppName", String.class).invoke(null, APP_NAME);
+                display.getConstructor().newInstance();
+                StartupTrace.step("display created");
+            } catch (ReflectiveOperationException | RuntimeException | LinkageError e) {
+                StartupTrace.step("display not created here: " + e);
+            }
+        });
     }
 
     /** The workbench offers its window control once the window is open: the end of its start-up. */

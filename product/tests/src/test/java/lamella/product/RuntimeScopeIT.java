@@ -7,9 +7,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
 import java.util.jar.JarFile;
 import java.util.stream.Stream;
 
@@ -17,13 +21,14 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.Constants;
+import org.osgi.framework.InvalidSyntaxException;
 
 import lamella.launcher.FelixRuntime;
 import lamella.launcher.RuntimeScope;
 
 /**
- * A headless command starts every shipped bundle but the desktop feature's, which lie in bundle/desktop/ installed
- * and unstarted; the workbench starts them all.
+ * A headless command starts every shipped bundle but the desktop feature's (in bundle/desktop/), which it installs
+ * only when there are plug-ins, and Configuration Admin, which it starts only then; the workbench starts them all.
  */
 class RuntimeScopeIT {
 
@@ -31,7 +36,7 @@ class RuntimeScopeIT {
     Path home;
 
     @Test
-    void aCommandInstallsTheDesktopBundlesWithoutStartingOrResolvingThem() throws Exception {
+    void aCommandWithoutPluginsLeavesOutTheDesktopAndHoldsBackConfigurationAdmin() throws Exception {
         RuntimeCopy.into(home);
         List<String> desktop = symbolicNames(home.resolve("bundle/desktop"));
         assertTrue(desktop.contains("lamella.ui.workbench") && desktop.contains("org.eclipse.swt"), desktop.toString());
@@ -39,17 +44,70 @@ class RuntimeScopeIT {
             assertEquals(List.of(), runtime.startProblems());
             List<String> wrong = new ArrayList<>();
             for (Bundle bundle : runtime.framework().getBundleContext().getBundles()) {
+                String name = bundle.getSymbolicName();
                 if (bundle.getBundleId() == 0) {
                     continue;
                 }
-                boolean fragment = bundle.getHeaders("").get(Constants.FRAGMENT_HOST) != null;
-                int expected = desktop.contains(bundle.getSymbolicName()) ? Bundle.INSTALLED
-                        : fragment ? Bundle.RESOLVED : Bundle.ACTIVE;
-                if (bundle.getState() != expected) {
-                    wrong.add(bundle.getSymbolicName() + " in state " + bundle.getState() + ", expected " + expected);
+                int expected = name.equals(CONFIG_ADMIN) ? Bundle.INSTALLED
+                        : isFragment(bundle) ? Bundle.RESOLVED : Bundle.ACTIVE;
+                if (desktop.contains(name) || bundle.getState() != expected) {
+                    wrong.add(name + " in state " + bundle.getState() + ", expected "
+                            + (desktop.contains(name) ? "not installed" : expected));
                 }
             }
             assertEquals(List.of(), wrong);
+            assertTrue(started(runtime), "the runtime's started service is registered when start returns");
+        }
+    }
+
+    /** A plug-in may import the desktop's packages or need Configuration Admin: with one, both are there. */
+    @Test
+    void aCommandWithAPluginInstallsTheDesktopBundlesAndStartsConfigurationAdmin() throws Exception {
+        RuntimeCopy.into(home);
+        TestBundles.write(home.resolve("plugins/lab.nothing.jar"), "lab.nothing", Map.of());
+        List<String> desktop = symbolicNames(home.resolve("bundle/desktop"));
+        try (FelixRuntime runtime = FelixRuntime.start(home, Map.of(), RuntimeScope.COMMANDS)) {
+            assertEquals(List.of(), runtime.startProblems());
+            List<String> wrong = new ArrayList<>();
+            List<String> seen = new ArrayList<>();
+            for (Bundle bundle : runtime.framework().getBundleContext().getBundles()) {
+                String name = bundle.getSymbolicName();
+                seen.add(name);
+                if (desktop.contains(name) && bundle.getState() != Bundle.INSTALLED) {
+                    wrong.add(name + " in state " + bundle.getState() + ", expected installed only");
+                }
+                if (name.equals(CONFIG_ADMIN) && bundle.getState() != Bundle.ACTIVE) {
+                    wrong.add(name + " in state " + bundle.getState() + ", expected active");
+                }
+            }
+            assertEquals(List.of(), wrong);
+            assertTrue(seen.containsAll(desktop), seen.toString());
+        }
+    }
+
+    /** The workbench's window opens while the bundles start: start returns with SWT resolved and the rest to come. */
+    @Test
+    void theWorkbenchsBackgroundStartHasTheToolkitFirstAndSaysWhenAllAreLive() throws Exception {
+        RuntimeCopy.into(home);
+        AtomicBoolean ranBeforeTheSign = new AtomicBoolean();
+        AtomicReference<List<String>> problems = new AtomicReference<>();
+        try (FelixRuntime runtime = FelixRuntime.startInBackground(home, Map.of(), RuntimeScope.WORKBENCH, r -> {
+            problems.set(r.startProblems());
+            ranBeforeTheSign.set(!started(r));
+        })) {
+            Bundle toolkit = runtime.toolkit().orElseThrow();
+            assertEquals("org.eclipse.swt", toolkit.getSymbolicName());
+            assertTrue(toolkit.getState() >= Bundle.RESOLVED, "state " + toolkit.getState());
+            assertTrue(Eventually.within(Duration.ofSeconds(30), () -> started(runtime)), "no started service");
+            assertEquals(List.of(), problems.get());
+            assertTrue(ranBeforeTheSign.get(), "whenStarted runs before the started service is registered");
+            List<String> notActive = new ArrayList<>();
+            for (Bundle bundle : runtime.framework().getBundleContext().getBundles()) {
+                if (!isFragment(bundle) && bundle.getState() != Bundle.ACTIVE) {
+                    notActive.add(bundle.getSymbolicName() + " in state " + bundle.getState());
+                }
+            }
+            assertEquals(List.of(), notActive);
         }
     }
 
@@ -85,6 +143,21 @@ class RuntimeScopeIT {
         assertEquals(List.of(), needSwt, "these belong in bundle/desktop/ (product/runtime/pom.xml,"
                 + " lamella.desktop.artifacts)");
         assertFalse(jars(RuntimeCopy.assembled().resolve("bundle/desktop")).isEmpty());
+    }
+
+    private static final String CONFIG_ADMIN = "org.apache.felix.configadmin";
+
+    private static boolean isFragment(Bundle bundle) {
+        return bundle.getHeaders("").get(Constants.FRAGMENT_HOST) != null;
+    }
+
+    private static boolean started(FelixRuntime runtime) {
+        try {
+            return !runtime.framework().getBundleContext()
+                    .getServiceReferences(BooleanSupplier.class, FelixRuntime.STARTED_FILTER).isEmpty();
+        } catch (InvalidSyntaxException e) {
+            throw new AssertionError(e);
+        }
     }
 
     private static List<String> symbolicNames(Path folder) throws IOException {

@@ -34,8 +34,9 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 
 /**
  * The workbench as a service of a JDK type, so that the launcher (which sees only java.*) can start it: a
- * {@link Runnable} with {@code lamella.role=workbench} whose {@code run()} creates the SWT display on the calling
- * thread, opens the window and runs its event loop until the window closes. While the window is open, a
+ * {@link Runnable} with {@code lamella.role=workbench} whose {@code run()} takes the SWT display of the calling thread
+ * (the launcher creates it there while the bundles start) or creates it, opens the window and runs its event loop
+ * until the window closes. While the window is open, a
  * {@code Function<String, String>} with {@code lamella.role=workbench.control} lets a script or test in the same
  * process drive it (see {@link WindowControl}). Activation touches no SWT: the display belongs to the caller.
  */
@@ -83,8 +84,12 @@ public final class WorkbenchComponent implements Runnable, LiveServices {
 
     @Override
     public void run() {
-        Display.setAppName("Lamella");
-        Display display = new Display();
+        // The launcher may have created the display on this thread already, while the other bundles started.
+        Display display = Display.getCurrent();
+        if (display == null) {
+            Display.setAppName("Lamella");
+            display = new Display();
+        }
         ServiceRegistration<?> control = null;
         try {
             MessageLog messages = new MessageLog();
