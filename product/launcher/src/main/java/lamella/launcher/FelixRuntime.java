@@ -46,7 +46,7 @@ public final class FelixRuntime implements AutoCloseable {
     private volatile List<String> startProblems = List.of();
     private volatile Bundle toolkit;
     private final StandardErrorLog log;
-    private boolean closed;
+    private volatile boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
             List<Path> shipped, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
@@ -103,10 +103,18 @@ public final class FelixRuntime implements AutoCloseable {
             try {
                 runtime.installAll();
                 runtime.startBundles();
+            } catch (RuntimeException e) {
+                // Whatever started is live; the window must not wait for the rest.
+                runtime.startProblems = List.of("the bundles could not all be started: " + e);
+            }
+            if (runtime.closed) {
+                return; // the window was closed while the bundles started
+            }
+            try {
                 whenStarted.accept(runtime);
                 runtime.announceStarted();
             } catch (IllegalStateException closedMeanwhile) {
-                // The window was closed while the bundles started: the framework is stopping.
+                // The framework began to stop meanwhile.
             }
         }, "lamella-bundle-start");
         starter.setDaemon(true);

@@ -39,7 +39,8 @@ final class ShippedBundles {
     }
 
     /**
-     * Shipped bundles that a headless command without plug-ins installs but neither resolves nor starts: nothing
+     * Shipped bundles that a headless command without plug-ins installs but does not start (they resolve only if
+     * another bundle's import wires to them): nothing
      * shipped uses them, and starting Configuration Admin has Declarative Services look up a configuration for every
      * component (some 25 ms). A plug-in that needs them finds them started.
      */
@@ -54,7 +55,7 @@ final class ShippedBundles {
      *
      * @param started       jars to install, resolve and (by {@link #start}) start
      * @param installedOnly jars to install only: they resolve when something needs them, and never start
-     * @param heldBack      symbolic names of bundles among {@code started} to install only
+     * @param heldBack      symbolic names of bundles among {@code started} to install and not start
      * @param problems      where a jar that cannot be installed is named
      * @return the bundles to start, in the order {@link #start} wants them
      */
