@@ -21,8 +21,12 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
 /** {@code lamella batch MANIFEST|FOLDER --out DIR [--threads N]}: fits many cases, resumably. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + BatchCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + BatchCommand.SUMMARY})
 public final class BatchCommand implements Command {
+
+    static final String NAME = "batch";
+    static final String SUMMARY = "Fits every case of a folder or manifest into one results table; resumes after an interruption.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -41,12 +45,12 @@ public final class BatchCommand implements Command {
 
     @Override
     public String name() {
-        return "batch";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Fits every case of a folder or manifest into one results table; resumes after an interruption.";
+        return SUMMARY;
     }
 
     @Override

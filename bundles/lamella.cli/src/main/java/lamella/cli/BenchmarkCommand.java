@@ -35,8 +35,12 @@ import org.osgi.service.component.annotations.ReferencePolicy;
  * frequencies and a TDTR curve of 50 delays on a three-layer stack — and prints the figures. Speed is measured here,
  * never asserted in a unit test.
  */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + BenchmarkCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + BenchmarkCommand.SUMMARY})
 public final class BenchmarkCommand implements Command {
+
+    static final String NAME = "benchmark";
+    static final String SUMMARY = "Times the model (FDTR and TDTR curves) on one thread and the fits and Monte Carlo on all cores.";
 
     private static final int WARM_UP = 30;
     private static final int RUNS = 60;
@@ -78,12 +82,12 @@ public final class BenchmarkCommand implements Command {
 
     @Override
     public String name() {
-        return "benchmark";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Times the model (FDTR and TDTR curves) on one thread and the fits and Monte Carlo on all cores.";
+        return SUMMARY;
     }
 
     @Override

@@ -7,6 +7,7 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.IntConsumer;
 
 import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -32,6 +33,7 @@ public final class CommandDispatcher {
     private final CommandShelf shelf = new CommandShelf();
     private final List<StartupNotice> notices = new CopyOnWriteArrayList<>();
     private final List<RuntimeInputs> inputs = new CopyOnWriteArrayList<>();
+    private volatile BundleContext context;
     private IntConsumer launcher;
     private LaunchRequest request;
 
@@ -41,14 +43,32 @@ public final class CommandDispatcher {
         this.request = LaunchRequest.from(properties);
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
-            unbind = "removeCommand")
-    void addCommand(Command command) {
-        shelf.add(command);
+    /**
+     * Commands are bound by reference: the dispatcher gets only the one it runs, so that {@code help} or a command's
+     * start never activates every command and all they reference.
+     */
+    @Reference(service = Command.class, cardinality = ReferenceCardinality.MULTIPLE,
+            policy = ReferencePolicy.DYNAMIC, unbind = "removeCommand")
+    void addCommand(ServiceReference<Command> reference) {
+        shelf.add(new ListedCommand(reference, this::service));
     }
 
-    void removeCommand(Command command) {
-        shelf.remove(command);
+    void removeCommand(ServiceReference<Command> reference) {
+        ListedCommand gone = new ListedCommand(reference, this::service);
+        shelf.remove(gone);
+        BundleContext c = context;
+        if (c != null) {
+            try {
+                c.ungetService(reference);
+            } catch (IllegalStateException | IllegalArgumentException stopped) {
+                // the dispatcher's own bundle is stopping
+            }
+        }
+    }
+
+    private Command service(ServiceReference<Command> reference) {
+        BundleContext c = context;
+        return c == null ? null : c.getService(reference);
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
@@ -73,6 +93,7 @@ public final class CommandDispatcher {
 
     @Activate
     void activate(BundleContext context) {
+        this.context = context;
         boolean debug = Boolean.parseBoolean(context.getProperty("lamella.debug"));
         Dispatch dispatch = new Dispatch(shelf, PATIENCE, QUIET, debug, () -> List.copyOf(notices),
                 () -> List.copyOf(inputs));

@@ -18,8 +18,12 @@ import org.osgi.service.component.annotations.Reference;
  * {@code lamella demo}: the main job on the invented demo data shipped with the runtime — a joint fit of TDTR at
  * two modulation frequencies and FDTR on one sample, with its uncertainty budget and report.
  */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + DemoCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + DemoCommand.SUMMARY})
 public final class DemoCommand implements Command {
+
+    static final String NAME = "demo";
+    static final String SUMMARY = "Fits the invented demo sample (TDTR at two frequencies + FDTR) and writes its report.";
 
     static final String DEMO_CASE = "demo/oxide-film-joint/case.json";
     static final String DEFAULT_FOLDER = "lamella-demo-report";
@@ -42,12 +46,12 @@ public final class DemoCommand implements Command {
 
     @Override
     public String name() {
-        return "demo";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Fits the invented demo sample (TDTR at two frequencies + FDTR) and writes its report.";
+        return SUMMARY;
     }
 
     @Override

@@ -21,8 +21,12 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
 /** {@code lamella fit CASE.json [--out RESULT.json] [--monte-carlo N] [--seed S] [--threads N]}. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + FitCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + FitCommand.SUMMARY})
 public final class FitCommand implements Command {
+
+    static final String NAME = "fit";
+    static final String SUMMARY = "Fits the free inputs of a case to its datasets, with uncertainties and their budget.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -32,12 +36,12 @@ public final class FitCommand implements Command {
 
     @Override
     public String name() {
-        return "fit";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Fits the free inputs of a case to its datasets, with uncertainties and their budget.";
+        return SUMMARY;
     }
 
     @Override

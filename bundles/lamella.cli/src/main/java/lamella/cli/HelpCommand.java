@@ -11,8 +11,12 @@ import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 
 /** {@code lamella help [COMMAND]}: the list of live commands, or how to use one of them. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + HelpCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + HelpCommand.SUMMARY})
 public final class HelpCommand implements Command {
+
+    static final String NAME = "help";
+    static final String SUMMARY = "Lists the commands, or shows how to use one.";
 
     private BundleContext context;
 
@@ -23,12 +27,12 @@ public final class HelpCommand implements Command {
 
     @Override
     public String name() {
-        return "help";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Lists the commands, or shows how to use one.";
+        return SUMMARY;
     }
 
     @Override

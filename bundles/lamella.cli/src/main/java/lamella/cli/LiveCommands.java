@@ -14,6 +14,7 @@ import lamella.api.command.Command;
 /**
  * The live commands, looked up in the service registry for the moment of one use. A command that lists commands
  * asks the registry rather than referencing {@link Command} itself, which would make it depend on its own service.
+ * Listing them activates none ({@link ListedCommand}); only a command whose usage is shown is got, and given back.
  */
 final class LiveCommands {
 
@@ -27,19 +28,18 @@ final class LiveCommands {
         } catch (InvalidSyntaxException e) {
             throw new IllegalStateException("a null filter cannot be invalid", e);
         }
-        List<ServiceReference<Command>> held = new ArrayList<>();
-        List<Command> commands = new ArrayList<>();
+        List<ListedCommand> commands = new ArrayList<>();
+        for (ServiceReference<Command> reference : references) {
+            commands.add(new ListedCommand(reference, context::getService));
+        }
         try {
-            for (ServiceReference<Command> reference : references) {
-                Command command = context.getService(reference);
-                if (command != null) {
-                    held.add(reference);
-                    commands.add(command);
+            return work.apply(List.copyOf(commands));
+        } finally {
+            for (ListedCommand c : commands) {
+                if (c.wasGot()) {
+                    context.ungetService(c.reference());
                 }
             }
-            return work.apply(commands);
-        } finally {
-            held.forEach(context::ungetService);
         }
     }
 }

@@ -24,8 +24,12 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
 /** {@code lamella plan CASE.json [--out PLAN.json] [--map KEY,KEY] [--show N] [--threads N]}. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + PlanCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + PlanCommand.SUMMARY})
 public final class PlanCommand implements Command {
+
+    static final String NAME = "plan";
+    static final String SUMMARY = "Ranks experiment plans (frequencies, spots, layers, windows) by the σ their fit would give.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -35,12 +39,12 @@ public final class PlanCommand implements Command {
 
     @Override
     public String name() {
-        return "plan";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Ranks experiment plans (frequencies, spots, layers, windows) by the σ their fit would give.";
+        return SUMMARY;
     }
 
     @Override

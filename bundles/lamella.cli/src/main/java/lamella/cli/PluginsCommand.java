@@ -15,8 +15,12 @@ import lamella.api.command.Command;
 import lamella.api.command.CommandIO;
 
 /** {@code lamella plugins}: every live geometry, technique and command, with the bundle that provides it. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + PluginsCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + PluginsCommand.SUMMARY})
 public final class PluginsCommand implements Command {
+
+    static final String NAME = "plugins";
+    static final String SUMMARY = "Lists the live geometries, techniques and commands and the bundle of each.";
 
     /** The kinds listed, in this order. A new kind of contribution is one more row. */
     static final List<ServiceKind> KINDS = List.of(
@@ -37,12 +41,12 @@ public final class PluginsCommand implements Command {
 
     @Override
     public String name() {
-        return "plugins";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Lists the live geometries, techniques and commands and the bundle of each.";
+        return SUMMARY;
     }
 
     @Override

@@ -10,8 +10,12 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
 /** {@code lamella report CASE.json --out DIR [--monte-carlo N] [--seed S] [--threads N]}. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + ReportCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + ReportCommand.SUMMARY})
 public final class ReportCommand implements Command {
+
+    static final String NAME = "report";
+    static final String SUMMARY = "Fits a case and writes an HTML report with plots, the uncertainty budget and the numbers.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -24,12 +28,12 @@ public final class ReportCommand implements Command {
 
     @Override
     public String name() {
-        return "report";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Fits a case and writes an HTML report with plots, the uncertainty budget and the numbers.";
+        return SUMMARY;
     }
 
     @Override

@@ -22,8 +22,12 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 
 /** {@code lamella sensitivity CASE.json [--dataset N] [--signal NAME] [--out FILE.csv]}. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + SensitivityCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + SensitivityCommand.SUMMARY})
 public final class SensitivityCommand implements Command {
+
+    static final String NAME = "sensitivity";
+    static final String SUMMARY = "Shows how strongly the signal responds to every input, over the measurement's x values.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -33,12 +37,12 @@ public final class SensitivityCommand implements Command {
 
     @Override
     public String name() {
-        return "sensitivity";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Shows how strongly the signal responds to every input, over the measurement's x values.";
+        return SUMMARY;
     }
 
     @Override

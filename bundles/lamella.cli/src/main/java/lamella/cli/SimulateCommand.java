@@ -26,8 +26,12 @@ import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
 
 /** {@code lamella simulate CASE.json [--out FILE.csv]}: the model signal a case describes, as CSV. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + SimulateCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + SimulateCommand.SUMMARY})
 public final class SimulateCommand implements Command {
+
+    static final String NAME = "simulate";
+    static final String SUMMARY = "Computes the model signal of a case file and writes it as CSV.";
 
     private final LiveModels models = new LiveModels();
 
@@ -60,12 +64,12 @@ public final class SimulateCommand implements Command {
 
     @Override
     public String name() {
-        return "simulate";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Computes the model signal of a case file and writes it as CSV.";
+        return SUMMARY;
     }
 
     @Override

@@ -27,8 +27,12 @@ import org.osgi.service.component.annotations.Reference;
  * cores. The Spark engine ({@code --engine spark}) runs outside this runtime: the {@code lamella} script starts the
  * job module for it.
  */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + MapCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + MapCommand.SUMMARY})
 public final class MapCommand implements Command {
+
+    static final String NAME = "map";
+    static final String SUMMARY = "Fits every position of a map's data and draws each fitted value, its σ and χ² as an image.";
 
     @Reference
     private CaseFormat caseFormat;
@@ -47,12 +51,12 @@ public final class MapCommand implements Command {
 
     @Override
     public String name() {
-        return "map";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Fits every position of a map's data and draws each fitted value, its σ and χ² as an image.";
+        return SUMMARY;
     }
 
     @Override

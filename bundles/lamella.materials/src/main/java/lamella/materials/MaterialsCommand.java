@@ -21,8 +21,12 @@ import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
 
 /** {@code lamella materials list | show ID | check FOLDER | export ID}: the live material libraries. */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + MaterialsCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + MaterialsCommand.SUMMARY})
 public final class MaterialsCommand implements Command {
+
+    static final String NAME = "materials";
+    static final String SUMMARY = "Lists, shows, checks and exports entries of the material libraries.";
 
     private final List<MaterialLibrary> libraries = new CopyOnWriteArrayList<>();
 
@@ -38,12 +42,12 @@ public final class MaterialsCommand implements Command {
 
     @Override
     public String name() {
-        return "materials";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Lists, shows, checks and exports entries of the material libraries.";
+        return SUMMARY;
     }
 
     @Override

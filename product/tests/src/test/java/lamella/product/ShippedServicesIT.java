@@ -86,6 +86,31 @@ class ShippedServicesIT {
         assertNamesEventually("lamella.api.command.Command", "name", Set.of("help", "plugins", "simulate", "fit", "batch", "map"));
     }
 
+    /** The command list is read from these properties without activating the commands, so they must agree. */
+    @Test
+    void everyShippedCommandCarriesItsNameAndSummaryAsServiceProperties() throws Exception {
+        assertNamesEventually("lamella.api.command.Command", "name", Set.of("help", "simulate", "materials", "map"));
+        List<String> wrong = new ArrayList<>();
+        for (ServiceReference<?> reference : references("lamella.api.command.Command")) {
+            Object service = context.getService(reference);
+            try {
+                Class<?> api = reference.getBundle().loadClass("lamella.api.command.Command");
+                for (String[] pair : new String[][] {{"lamella.command.name", "name"},
+                        {"lamella.command.summary", "summary"}}) {
+                    Object property = reference.getProperty(pair[0]);
+                    Object answer = api.getMethod(pair[1]).invoke(service);
+                    if (!answer.equals(property)) {
+                        wrong.add(reference.getBundle().getSymbolicName() + ": " + pair[0] + " is " + property
+                                + " but " + pair[1] + "() says " + answer);
+                    }
+                }
+            } finally {
+                context.ungetService(reference);
+            }
+        }
+        assertEquals(List.of(), wrong);
+    }
+
     @Test
     void theEngineOffersStackKernels() throws Exception {
         assertTrue(Eventually.within(REGISTRATION, () -> !references("lamella.api.StackKernels").isEmpty()),

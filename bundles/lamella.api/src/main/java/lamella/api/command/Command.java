@@ -10,6 +10,19 @@ import org.osgi.annotation.versioning.ConsumerType;
 @ConsumerType
 public interface Command {
 
+    /**
+     * The service property with the command's {@link #name()}. With it (and {@link #SUMMARY_PROPERTY}) the command
+     * list and the lookup of a command by name read the registry and activate no command; without it the command is
+     * activated to be asked. Both must say what the methods return, for example
+     * {@code @Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + NAME,
+     * Command.SUMMARY_PROPERTY + "=" + SUMMARY})} with {@code NAME} and {@code SUMMARY} the constants the methods
+     * return.
+     */
+    String NAME_PROPERTY = "lamella.command.name";
+
+    /** The service property with the command's {@link #summary()}; see {@link #NAME_PROPERTY}. */
+    String SUMMARY_PROPERTY = "lamella.command.summary";
+
     int OK = 0;
     int FAILED = 1;
     int BAD_INPUT = 2;

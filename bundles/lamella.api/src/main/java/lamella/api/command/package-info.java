@@ -1,4 +1,4 @@
 /** Headless commands contributed as services and dispatched by name. */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("0.2.0")
+@org.osgi.annotation.versioning.Version("0.3.0")
 package lamella.api.command;

@@ -25,8 +25,12 @@ import org.osgi.service.component.annotations.ReferencePolicyOption;
  * {@code lamella formats}: the live importers, each with its id, its tier and what it reads; and
  * {@code lamella formats check PATH [--try FILE]}, which checks importer profiles before a facility publishes them.
  */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + FormatsCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + FormatsCommand.SUMMARY})
 public final class FormatsCommand implements Command {
+
+    static final String NAME = "formats";
+    static final String SUMMARY = "Lists the live data importers and checks importer profiles (lamella formats check FOLDER).";
 
     private final LiveImporters importers = new LiveImporters();
     private final Map<DataImporter, String> tiers = new ConcurrentHashMap<>();
@@ -68,12 +72,12 @@ public final class FormatsCommand implements Command {
 
     @Override
     public String name() {
-        return "formats";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Lists the live data importers and checks importer profiles (lamella formats check FOLDER).";
+        return SUMMARY;
     }
 
     @Override

@@ -32,8 +32,12 @@ import org.osgi.service.component.annotations.ReferencePolicyOption;
  * {@code lamella import FILE …}: reads an instrument file with the best live importer (or the one named),
  * conditions it and writes the normalised dataset as CSV, with a short report of what was done.
  */
-@Component(service = Command.class)
+@Component(service = Command.class, property = {Command.NAME_PROPERTY + "=" + ImportCommand.NAME,
+        Command.SUMMARY_PROPERTY + "=" + ImportCommand.SUMMARY})
 public final class ImportCommand implements Command {
+
+    static final String NAME = "import";
+    static final String SUMMARY = "Reads an instrument data file, conditions it and writes the normalised dataset as CSV.";
 
     private final LiveImporters importers = new LiveImporters();
     private final List<Technique> techniques = new CopyOnWriteArrayList<>();
@@ -84,12 +88,12 @@ public final class ImportCommand implements Command {
 
     @Override
     public String name() {
-        return "import";
+        return NAME;
     }
 
     @Override
     public String summary() {
-        return "Reads an instrument data file, conditions it and writes the normalised dataset as CSV.";
+        return SUMMARY;
     }
 
     @Override
