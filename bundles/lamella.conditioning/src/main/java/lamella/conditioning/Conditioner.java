@@ -73,7 +73,8 @@ public final class Conditioner {
                 default -> how = "not corrected, kept as recorded";
             }
         } else {
-            how = "not applicable to frequency data";
+            how = data.xColumn().equals(SignalNames.FREQUENCY_HZ) ? "not applicable to frequency data"
+                    : "not applicable: no lock-in channels over delay (x is " + data.xColumn() + ")";
             if (options.reference().isPresent()) {
                 if (!lockIn) {
                     throw new InputException(file, null, -1, "a reference phase needs lock-in channels (in-phase and"

@@ -157,7 +157,7 @@ final class DelimitedTable {
             }
         }
         if (xs.size() != 1) {
-            throw in.error(headerLine, xs.isEmpty() ? "no x column: expected one frequency or delay column"
+            throw in.error(headerLine, xs.isEmpty() ? "no x column: expected one frequency, delay or pump power column"
                     : "two x columns (" + (xs.get(0) + 1) + " and " + (xs.get(1) + 1) + "); expected one");
         }
         xIndex = xs.get(0);

@@ -33,6 +33,10 @@ final class DraftProfile {
         known("amplitude", "r", "amplitude", "magnitude");
         known("phase", "phase", "theta", "θ", "phi", "φ");
         known("ratio", "ratio", "-x/y", "-vin/vout");
+        // Only names that say so: a bare "power" column can be an FDTR file's laser monitor, "Δt" a TDTR delay.
+        known("pump_power", "pump power", "absorbed power", "p pump", "absorbed pump power");
+        known("temperature_rise", "temperature rise", "delta t", "t rise", "rise");
+        known("rise_per_power", "rise per power", "temperature rise per power", "dt/p", "δt/p");
     }
 
     private static void known(String meaning, String... spellings) {

@@ -39,7 +39,15 @@ final class ProfileReader {
         MEANINGS.put("amplitude", Quantity.VOLTAGE);
         MEANINGS.put("phase", Quantity.PHASE);
         MEANINGS.put("ratio", Quantity.RATIO);
+        // SSTR: the absorbed pump power of a step of the sweep, and the temperature rise it gives (or the rise per
+        // watt) as the thermoreflectance signal reads it.
+        MEANINGS.put("pump_power", Quantity.POWER);
+        MEANINGS.put("temperature_rise", Quantity.TEMPERATURE);
+        MEANINGS.put("rise_per_power", Quantity.RISE_PER_POWER);
     }
+
+    /** The meanings that are a dataset's x, which have no standard deviation. */
+    private static final Set<String> X_MEANINGS = Set.of("frequency", "delay", "pump_power");
 
     private final Path file;
     private final List<Finding> findings = new ArrayList<>();
@@ -63,7 +71,7 @@ final class ProfileReader {
     static List<String> meanings() {
         List<String> all = new ArrayList<>(MEANINGS.keySet());
         for (String m : MEANINGS.keySet()) {
-            if (!m.equals("frequency") && !m.equals("delay")) {
+            if (!X_MEANINGS.contains(m)) {
                 all.add("sigma_" + m);
             }
         }
@@ -331,7 +339,7 @@ final class ProfileReader {
         boolean sigma = meaning.startsWith("sigma_");
         String base = sigma ? meaning.substring("sigma_".length()) : meaning;
         Quantity q = MEANINGS.get(base);
-        if (q == null || (sigma && (base.equals("frequency") || base.equals("delay")))) {
+        if (q == null || (sigma && X_MEANINGS.contains(base))) {
             finding(b.pathOf("meaning"), "'" + meaning + "' is not a column meaning; expected one of "
                     + String.join(", ", meanings()));
             return null;
@@ -341,7 +349,14 @@ final class ProfileReader {
         if (unit == null) {
             if (q != Quantity.VOLTAGE && q != Quantity.RATIO) {
                 finding(b.pathOf("unit"), "missing; " + q.wording() + " needs its unit, such as "
-                        + (q == Quantity.FREQUENCY ? "kHz" : q == Quantity.TIME ? "ps" : "deg or rad"));
+                        + switch (q) {
+                            case FREQUENCY -> "kHz";
+                            case TIME -> "ps";
+                            case POWER -> "mW";
+                            case TEMPERATURE -> "mK";
+                            case RISE_PER_POWER -> "K/W";
+                            default -> "deg or rad";
+                        });
                 return null;
             }
         } else {
@@ -370,6 +385,9 @@ final class ProfileReader {
             case "frequency" -> SignalNames.FREQUENCY_HZ;
             case "delay" -> SignalNames.DELAY_S;
             case "phase" -> SignalNames.PHASE_DEG;
+            case "pump_power" -> SignalNames.PUMP_POWER_W;
+            case "temperature_rise" -> SignalNames.TEMPERATURE_RISE_K;
+            case "rise_per_power" -> SignalNames.K_PER_W;
             default -> base;
         };
         return new Profile.ColumnRule(sigma ? SignalNames.sigma(name) : name, factor, scan);
@@ -379,8 +397,8 @@ final class ProfileReader {
         long xs = columns.values().stream().filter(r -> r.meaning() != null
                 && SignalNames.X_COLUMNS.contains(r.meaning())).count();
         if (xs != 1) {
-            finding("columns", xs == 0 ? "no column has meaning frequency or delay: a dataset needs its x"
-                    : "more than one column is x (frequency or delay); a file has one");
+            finding("columns", xs == 0 ? "no column has meaning frequency, delay or pump_power: a dataset needs its x"
+                    : "more than one column is x (frequency, delay or pump_power); a file has one");
         }
         Map<Integer, List<String>> scans = new LinkedHashMap<>();
         for (Profile.ColumnRule r : columns.values()) {
@@ -389,7 +407,8 @@ final class ProfileReader {
             }
         }
         if (scans.isEmpty()) {
-            finding("columns", "no signal column (in_phase, out_of_phase, amplitude, phase or ratio)");
+            finding("columns", "no signal column (in_phase, out_of_phase, amplitude, phase, ratio,"
+                    + " temperature_rise or rise_per_power)");
             return;
         }
         List<String> first = null;

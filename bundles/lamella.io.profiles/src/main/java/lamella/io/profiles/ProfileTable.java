@@ -212,7 +212,7 @@ final class ProfileTable {
                     + " out) or set other_columns to ignore");
         }
         if (xIndex < 0) {
-            throw error(namesIndex, "none of these columns is the x column (frequency or delay) of the profile '"
+            throw error(namesIndex, "none of these columns is the x column (frequency, delay or pump power) of the profile '"
                     + profile.id() + "'");
         }
         if (signalColumns.isEmpty()) {

@@ -72,7 +72,7 @@ class ProfileReaderTest {
                  "columns": {"a": {"meaning": "ignore"}}}
                 """);
         all.forEach(ProfileReaderTest::inOurWords);
-        assertTrue(all.stream().anyMatch(f -> f.problem().contains("no column has meaning frequency or delay")),
+        assertTrue(all.stream().anyMatch(f -> f.problem().contains("no column has meaning frequency, delay or pump_power")),
                 all.toString());
         assertTrue(all.stream().anyMatch(f -> f.problem().contains("no signal column")), all.toString());
         assertTrue(all.stream().anyMatch(f -> f.problem().contains("give exactly one of column_names_line")),

@@ -84,6 +84,52 @@ class ProfileTableTest {
         assertTrue(d.metadata().get("import_profile").startsWith("halden-hx2 1"), d.metadata().toString());
     }
 
+    /**
+     * An SSTR power sweep: the absorbed pump power in mW becomes x in W, the rise in mK becomes K, and its standard
+     * deviation comes along. Common practice, no source: the values are invented.
+     */
+    @Test
+    void anSstrPowerSweepReadsPumpPowerAndTemperatureRise(@TempDir Path dir) throws Exception {
+        Path json = dir.resolve("sstr.json");
+        Files.writeString(json, """
+                {"profile": "lab-sstr", "version": "1", "summary": "an invented SSTR log",
+                 "recognise": {"extensions": ["csv"]}, "delimiter": ",", "column_names_start": "P_abs",
+                 "technique": "sstr",
+                 "columns": {"P_abs": {"meaning": "pump_power", "unit": "mW"},
+                             "dT": {"meaning": "temperature_rise", "unit": "mK"},
+                             "sd dT": {"meaning": "sigma_temperature_rise", "unit": "mK"}}}
+                """);
+        ProfileReader.Result r = ProfileReader.read(json, Files.readAllBytes(json), "test", "user");
+        assertTrue(r.findings().isEmpty(), r.findings().toString());
+        Path data = dir.resolve("sweep.csv");
+        Files.writeString(data, "P_abs,dT,sd dT\n2.0,410.0,3.0\n4.0,822.5,3.5\n6.0,1231.0,4.0\n");
+        Dataset d = ProfileTable.read(r.profile(), data);
+        assertEquals(SignalNames.PUMP_POWER_W, d.xColumn());
+        assertEquals(List.of(SignalNames.TEMPERATURE_RISE_K), d.signalColumns());
+        Scan scan = d.scans().get(0);
+        assertEquals(0.004, scan.x()[1], 1e-15);
+        assertEquals(0.8225, scan.signals().get(SignalNames.TEMPERATURE_RISE_K)[1], 1e-12);
+        assertEquals(0.0035, scan.sigmas().get(SignalNames.TEMPERATURE_RISE_K)[1], 1e-12);
+        assertEquals("sstr", StatedSettings.of(d).technique().orElseThrow());
+    }
+
+    /** The x of a sweep has no standard deviation, and a power needs its unit. */
+    @Test
+    void aSigmaOfThePumpPowerOrAPowerWithoutItsUnitIsAFindingAtItsPath(@TempDir Path dir) throws Exception {
+        Path json = dir.resolve("sstr.json");
+        Files.writeString(json, """
+                {"profile": "lab-sstr", "version": "1", "summary": "an invented SSTR log",
+                 "recognise": {"extensions": ["csv"]}, "delimiter": ",", "column_names_start": "P_abs",
+                 "columns": {"P_abs": {"meaning": "pump_power"},
+                             "sd P": {"meaning": "sigma_pump_power", "unit": "mW"},
+                             "dT": {"meaning": "temperature_rise", "unit": "mK"}}}
+                """);
+        ProfileReader.Result r = ProfileReader.read(json, Files.readAllBytes(json), "test", "user");
+        String all = r.findings().toString();
+        assertTrue(all.contains("columns.P_abs.unit") && all.contains("such as mW"), all);
+        assertTrue(all.contains("'sigma_pump_power' is not a column meaning"), all);
+    }
+
     @Test
     void rawRecordsAtEachDelayBecomeScansToAverage() throws Exception {
         Dataset d = ProfileTable.read(profile("quillon-records.json"), DEMO.resolve("raw/quillon-tdtr-records.csv"));
