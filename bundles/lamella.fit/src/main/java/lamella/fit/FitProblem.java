@@ -205,12 +205,27 @@ final class FitProblem {
             try {
                 m = d.evaluate(catalog, refs, values);
             } catch (InputException e) {
-                throw new ModelEvaluationException("the fit reached inputs the model rejects: " + e.getMessage(), e);
+                throw new ModelEvaluationException("the fit reached inputs the model rejects (" + freeValues(values)
+                        + "): " + e.getMessage(), e);
+            } catch (ModelEvaluationException e) {
+                throw new ModelEvaluationException("the model cannot be evaluated where the fit went ("
+                        + freeValues(values) + "): " + e.getMessage() + "; give the free inputs bounds (min and max"
+                        + " in fit.free) or start values nearer the answer", e);
             }
             System.arraycopy(m, 0, out, at, m.length);
             at += m.length;
         }
         return out;
+    }
+
+    /** The free inputs at these values, as the case names them: "layers.film.thermal_conductivity = 1.2e-33". */
+    String freeValues(double[] values) {
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < free.size(); i++) {
+            b.append(i == 0 ? "" : ", ").append(free.get(i).ref()).append(" = ")
+                    .append(String.format(Locale.ROOT, "%.4g", values[i]));
+        }
+        return b.toString();
     }
 
     /**
