@@ -24,19 +24,27 @@ class SearchStopTest {
     @TempDir
     Path dir;
 
-    @Test
-    void theStepLeftWhereTheSearchStopsIsFarInsideSigma() throws Exception {
-        double[] f = Synthetic.logSpaced(1e4, 2e7, 30);
+    /**
+     * The FDTR fit of the film's conductivity and the cap's conductance, with no bounds, to phase data at these
+     * frequencies made from the truth of {@link FitTest} with 0.1° of noise of this seed.
+     */
+    static FitProblem filmAndCapFree(Path dir, double[] f, long seed) throws Exception {
         String beams = FitTest.BEAMS + "," + FitTest.FDTR;
         double[] clean = Synthetic.model(dir, "{" + Synthetic.STACK.formatted(FitTest.G_CAP, FitTest.K_FILM) + ","
                 + beams + "}", f, "phase_deg");
+        Synthetic.data(dir.resolve("fdtr.csv"), "frequency_hz", f, "phase_deg", clean, 0.1, seed, false);
+        CaseDocument doc = Synthetic.read(dir, "{" + Synthetic.STACK.formatted(5e7, 3.0) + "," + beams + ","
+                + "\"fit\": {\"datasets\": [{\"data\": \"fdtr.csv\"}],"
+                + "\"free\": [{\"layer\": \"film\", \"property\": \"k_through_w_mk\"},"
+                + "           {\"layer\": \"cap\", \"property\": \"conductance_below_w_m2k\"}]}}");
+        return FitProblem.of(doc, FitBlockReader.read(doc), Synthetic.CATALOG);
+    }
+
+    @Test
+    void theStepLeftWhereTheSearchStopsIsFarInsideSigma() throws Exception {
+        double[] f = Synthetic.logSpaced(1e4, 2e7, 30);
         for (long seed : new long[] {3, 11, 29}) {
-            Synthetic.data(dir.resolve("fdtr.csv"), "frequency_hz", f, "phase_deg", clean, 0.1, seed, false);
-            CaseDocument doc = Synthetic.read(dir, "{" + Synthetic.STACK.formatted(5e7, 3.0) + "," + beams + ","
-                    + "\"fit\": {\"datasets\": [{\"data\": \"fdtr.csv\"}],"
-                    + "\"free\": [{\"layer\": \"film\", \"property\": \"k_through_w_mk\"},"
-                    + "           {\"layer\": \"cap\", \"property\": \"conductance_below_w_m2k\"}]}}");
-            FitProblem problem = FitProblem.of(doc, FitBlockReader.read(doc), Synthetic.CATALOG);
+            FitProblem problem = filmAndCapFree(dir, f, seed);
             ExecutorService pool = Executors.newFixedThreadPool(1);
             try {
                 Solver solver = new Solver(problem, pool, 1, Progress.NONE);

@@ -8,7 +8,6 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import lamella.api.CaseDocument;
 import lamella.api.ModelEvaluationException;
 
 /**
@@ -23,16 +22,7 @@ class WanderingFitTest {
 
     @Test
     void aFailureWhereTheFitWentNamesTheFreeInputsAndTheirValues() throws Exception {
-        double[] f = Synthetic.logSpaced(1e4, 2e7, 12);
-        String beams = FitTest.BEAMS + "," + FitTest.FDTR;
-        double[] clean = Synthetic.model(dir, "{" + Synthetic.STACK.formatted(FitTest.G_CAP, FitTest.K_FILM) + ","
-                + beams + "}", f, "phase_deg");
-        Synthetic.data(dir.resolve("fdtr.csv"), "frequency_hz", f, "phase_deg", clean, 0.1, 5, false);
-        CaseDocument doc = Synthetic.read(dir, "{" + Synthetic.STACK.formatted(5e7, 3.0) + "," + beams + ","
-                + "\"fit\": {\"datasets\": [{\"data\": \"fdtr.csv\"}],"
-                + "\"free\": [{\"layer\": \"film\", \"property\": \"k_through_w_mk\"},"
-                + "           {\"layer\": \"cap\", \"property\": \"conductance_below_w_m2k\"}]}}");
-        FitProblem problem = FitProblem.of(doc, FitBlockReader.read(doc), Synthetic.CATALOG);
+        FitProblem problem = SearchStopTest.filmAndCapFree(dir, Synthetic.logSpaced(1e4, 2e7, 12), 5);
         for (double k : new double[] {-1.0, 1e-300, Double.NaN}) {
             ModelEvaluationException e = assertThrows(ModelEvaluationException.class,
                     () -> problem.model(new double[] {k, 5e7}), "k = " + k);

@@ -90,16 +90,11 @@ class ProfileTableTest {
      */
     @Test
     void anSstrPowerSweepReadsPumpPowerAndTemperatureRise(@TempDir Path dir) throws Exception {
-        Path json = dir.resolve("sstr.json");
-        Files.writeString(json, """
-                {"profile": "lab-sstr", "version": "1", "summary": "an invented SSTR log",
-                 "recognise": {"extensions": ["csv"]}, "delimiter": ",", "column_names_start": "P_abs",
-                 "technique": "sstr",
-                 "columns": {"P_abs": {"meaning": "pump_power", "unit": "mW"},
-                             "dT": {"meaning": "temperature_rise", "unit": "mK"},
-                             "sd dT": {"meaning": "sigma_temperature_rise", "unit": "mK"}}}
-                """);
-        ProfileReader.Result r = ProfileReader.read(json, Files.readAllBytes(json), "test", "user");
+        ProfileReader.Result r = sstrProfile(dir, """
+                "technique": "sstr",
+                "columns": {"P_abs": {"meaning": "pump_power", "unit": "mW"},
+                            "dT": {"meaning": "temperature_rise", "unit": "mK"},
+                            "sd dT": {"meaning": "sigma_temperature_rise", "unit": "mK"}}""");
         assertTrue(r.findings().isEmpty(), r.findings().toString());
         Path data = dir.resolve("sweep.csv");
         Files.writeString(data, "P_abs,dT,sd dT\n2.0,410.0,3.0\n4.0,822.5,3.5\n6.0,1231.0,4.0\n");
@@ -113,18 +108,22 @@ class ProfileTableTest {
         assertEquals("sstr", StatedSettings.of(d).technique().orElseThrow());
     }
 
+    /** An invented SSTR log's profile: its recognition and delimiter, then the given keys. */
+    private static ProfileReader.Result sstrProfile(Path dir, String keys) throws Exception {
+        Path json = dir.resolve("sstr.json");
+        Files.writeString(json, "{\"profile\": \"lab-sstr\", \"version\": \"1\", \"summary\": \"an invented SSTR log\","
+                + " \"recognise\": {\"extensions\": [\"csv\"]}, \"delimiter\": \",\", \"column_names_start\": \"P_abs\",\n"
+                + keys + "}\n");
+        return ProfileReader.read(json, Files.readAllBytes(json), "test", "user");
+    }
+
     /** The x of a sweep has no standard deviation, and a power needs its unit. */
     @Test
     void aSigmaOfThePumpPowerOrAPowerWithoutItsUnitIsAFindingAtItsPath(@TempDir Path dir) throws Exception {
-        Path json = dir.resolve("sstr.json");
-        Files.writeString(json, """
-                {"profile": "lab-sstr", "version": "1", "summary": "an invented SSTR log",
-                 "recognise": {"extensions": ["csv"]}, "delimiter": ",", "column_names_start": "P_abs",
-                 "columns": {"P_abs": {"meaning": "pump_power"},
-                             "sd P": {"meaning": "sigma_pump_power", "unit": "mW"},
-                             "dT": {"meaning": "temperature_rise", "unit": "mK"}}}
-                """);
-        ProfileReader.Result r = ProfileReader.read(json, Files.readAllBytes(json), "test", "user");
+        ProfileReader.Result r = sstrProfile(dir, """
+                "columns": {"P_abs": {"meaning": "pump_power"},
+                            "sd P": {"meaning": "sigma_pump_power", "unit": "mW"},
+                            "dT": {"meaning": "temperature_rise", "unit": "mK"}}""");
         String all = r.findings().toString();
         assertTrue(all.contains("columns.P_abs.unit") && all.contains("such as mW"), all);
         assertTrue(all.contains("'sigma_pump_power' is not a column meaning"), all);
