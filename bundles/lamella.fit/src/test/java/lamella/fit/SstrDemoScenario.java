@@ -1,7 +1,6 @@
 package lamella.fit;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.SplittableRandom;
@@ -27,13 +26,11 @@ final class SstrDemoScenario {
     private SstrDemoScenario() {
     }
 
+    /** The first sample's noise seed; each further sample takes the next. */
+    static final long FIRST_SEED = 611;
+
     public static void main(String[] args) throws IOException, InputException {
-        Path folder = Path.of(args[0]);
-        CaseDocument doc = Synthetic.readExisting(folder.resolve("case.json"));
-        long seed = 611;
-        for (Sample s : doc.samples()) {
-            Files.writeString(folder.resolve(file(s)), data(doc, s, seed++));
-        }
+        DemoChecks.writeScenario(Path.of(args[0]), FIRST_SEED, SstrDemoScenario::data, SstrDemoScenario::file);
     }
 
     static String file(Sample s) {
