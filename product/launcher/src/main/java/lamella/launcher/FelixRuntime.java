@@ -13,6 +13,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
+import java.util.function.UnaryOperator;
 
 import org.apache.felix.framework.Felix;
 import org.apache.felix.framework.util.FelixConstants;
@@ -42,6 +43,7 @@ public final class FelixRuntime implements AutoCloseable {
     private final List<Path> installedOnly;
     private final Set<String> heldBack;
     private final Set<String> early;
+    private final UnaryOperator<List<Bundle>> needed;
     private volatile List<Bundle> toStart = List.of();
     private volatile List<String> startProblems = List.of();
     private volatile Bundle toolkit;
@@ -50,7 +52,7 @@ public final class FelixRuntime implements AutoCloseable {
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
             List<Path> shipped, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
-            StandardErrorLog log) {
+            UnaryOperator<List<Bundle>> needed, StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
         this.storage = storage;
@@ -60,6 +62,7 @@ public final class FelixRuntime implements AutoCloseable {
         this.installedOnly = installedOnly;
         this.heldBack = heldBack;
         this.early = early;
+        this.needed = needed;
     }
 
     /**
@@ -140,6 +143,10 @@ public final class FelixRuntime implements AutoCloseable {
             List<Path> installedOnly = List.of();
             Set<String> heldBack = Set.of();
             Set<String> early = new HashSet<>();
+            // Help without plug-ins starts only the bundles of commands and what they need; with plug-ins,
+            // whatever a plug-in's command needs may be anything.
+            UnaryOperator<List<Bundle>> needed = scope == RuntimeScope.HELP && !plugins
+                    ? CommandLayer::commandsAndNeeds : UnaryOperator.identity();
             if (scope == RuntimeScope.WORKBENCH) {
                 shipped.addAll(0, desktop);
                 desktop.forEach(jar -> early.add(ShippedBundles.location(jar)));
@@ -159,7 +166,7 @@ public final class FelixRuntime implements AutoCloseable {
             framework.start();
             StartupTrace.step("framework started (system bundle resolved)");
             return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, installedOnly,
-                    heldBack, Set.copyOf(early), log);
+                    heldBack, Set.copyOf(early), needed, log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -173,7 +180,7 @@ public final class FelixRuntime implements AutoCloseable {
     private void installAll() {
         List<String> problems = new ArrayList<>();
         toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped, installedOnly, heldBack,
-                problems);
+                needed, problems);
         startProblems = List.copyOf(problems);
     }
 

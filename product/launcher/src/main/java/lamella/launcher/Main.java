@@ -4,6 +4,7 @@ import java.net.URISyntaxException;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.Hashtable;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import java.util.function.IntConsumer;
@@ -47,7 +48,7 @@ public final class Main {
             // The workbench's window opens while the other bundles start; a command waits for them all.
             runtime = workbench
                     ? FelixRuntime.startInBackground(home(), Map.of(), RuntimeScope.WORKBENCH, Main::settle)
-                    : FelixRuntime.start(home(), Map.of(), RuntimeScope.COMMANDS);
+                    : FelixRuntime.start(home(), Map.of(), RuntimeScope.of(List.of(commandLine)));
         } catch (Exception e) {
             System.err.println("lamella: could not start the runtime: " + e.getMessage());
             return FAILED;

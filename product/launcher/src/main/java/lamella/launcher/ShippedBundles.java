@@ -5,8 +5,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 
 import org.osgi.framework.Bundle;
@@ -56,11 +58,13 @@ final class ShippedBundles {
      * @param started       jars to install, resolve and (by {@link #start}) start
      * @param installedOnly jars to install only: they resolve when something needs them, and never start
      * @param heldBack      symbolic names of bundles among {@code started} to install and not start
+     * @param needed        of the installed and resolved bundles of {@code started}, those the run needs started
+     *                      (all of them, or a {@link CommandLayer})
      * @param problems      where a jar that cannot be installed is named
-     * @return the bundles to start, in the order {@link #start} wants them
+     * @return the bundles to start
      */
     static List<Bundle> installAndResolve(BundleContext context, List<Path> started, List<Path> installedOnly,
-            Set<String> heldBack, List<String> problems) {
+            Set<String> heldBack, UnaryOperator<List<Bundle>> needed, List<String> problems) {
         List<Bundle> installed = install(context, started, problems);
         install(context, installedOnly, problems);
         installed.removeIf(b -> heldBack.contains(b.getSymbolicName()));
@@ -68,13 +72,14 @@ final class ShippedBundles {
         // One resolver pass for all of them is cheaper than one per start.
         context.getBundle(0).adapt(FrameworkWiring.class).resolveBundles(installed);
         StartupTrace.step("bundles resolved");
-        return installed;
+        return needed.apply(installed);
     }
 
     /**
      * Starts the bundles that are not fragments. Declarative Services and the OSGi libraries it needs start first,
      * so that each bundle's components are set up as the bundle starts; then the bundles of {@code early} (the
-     * workbench's, so that its window can open while the rest start); FileInstall starts last, once the shipped
+     * workbench's, so that its window can open while the rest start) and what they need ({@link CommandLayer#needs}),
+     * so that their components are satisfied before the rest start; FileInstall starts last, once the shipped
      * bundles that plug-ins build on are live.
      *
      * @param early    locations of bundles to start right after Declarative Services
@@ -82,7 +87,15 @@ final class ShippedBundles {
      */
     static void start(List<Bundle> bundles, Set<String> early, List<String> problems) {
         List<Bundle> order = new ArrayList<>(bundles);
-        order.sort(Comparator.comparingInt(b -> startRank(b, early)));
+        Set<Bundle> earlyBundles = new HashSet<>();
+        for (Bundle b : bundles) {
+            if (early.contains(b.getLocation())) {
+                earlyBundles.add(b);
+            }
+        }
+        Set<Bundle> neededEarly = earlyBundles.isEmpty() ? Set.of()
+                : new HashSet<>(CommandLayer.needs(bundles, earlyBundles));
+        order.sort(Comparator.comparingInt(b -> startRank(b, early, neededEarly)));
         for (Bundle bundle : order) {
             if (isFragment(bundle)) {
                 continue;
@@ -96,8 +109,11 @@ final class ShippedBundles {
         }
     }
 
-    /** Declarative Services and its libraries, then the early bundles, then the rest, then FileInstall. */
-    static int startRank(Bundle bundle, Set<String> early) {
+    /**
+     * Declarative Services and its libraries, then the early bundles, then what they need, then the rest, then
+     * FileInstall.
+     */
+    static int startRank(Bundle bundle, Set<String> early, Set<Bundle> neededEarly) {
         String name = bundle.getSymbolicName();
         if (name != null && (name.startsWith("org.osgi.") || name.equals("org.apache.felix.scr"))) {
             return 0;
@@ -105,7 +121,10 @@ final class ShippedBundles {
         if (early.contains(bundle.getLocation())) {
             return 1;
         }
-        return "org.apache.felix.fileinstall".equals(name) ? 3 : 2;
+        if (neededEarly.contains(bundle)) {
+            return 2;
+        }
+        return "org.apache.felix.fileinstall".equals(name) ? 4 : 3;
     }
 
     /**

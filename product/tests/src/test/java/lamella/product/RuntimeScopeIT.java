@@ -9,8 +9,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
@@ -20,8 +23,10 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.osgi.framework.Bundle;
+import org.osgi.framework.BundleContext;
 import org.osgi.framework.Constants;
 import org.osgi.framework.InvalidSyntaxException;
+import org.osgi.framework.ServiceReference;
 
 import lamella.launcher.FelixRuntime;
 import lamella.launcher.RuntimeScope;
@@ -130,6 +135,59 @@ class RuntimeScopeIT {
             }
             throw new AssertionError("no workbench bundle in the runtime");
         }
+    }
+
+    /**
+     * Help without plug-ins starts only the bundles of commands and what their mandatory references need — no
+     * geometry, which commands only list — and every command is still there, with the same names as in a full start
+     * (a command whose needs were left out would never register).
+     */
+    @Test
+    void helpStartsTheCommandsAndWhatTheyNeedAndEveryCommandIsThere() throws Exception {
+        RuntimeCopy.into(home);
+        Set<String> all;
+        try (FelixRuntime full = FelixRuntime.start(home, Map.of(), RuntimeScope.COMMANDS)) {
+            all = commandNames(full);
+        }
+        assertTrue(all.containsAll(Set.of("help", "simulate", "fit", "import", "materials", "map")), all.toString());
+        try (FelixRuntime help = FelixRuntime.start(home, Map.of(), RuntimeScope.HELP)) {
+            assertEquals(List.of(), help.startProblems());
+            assertEquals(all, commandNames(help));
+            Map<String, Integer> states = new HashMap<>();
+            for (Bundle bundle : help.framework().getBundleContext().getBundles()) {
+                states.put(bundle.getSymbolicName(), bundle.getState());
+            }
+            for (String left : List.of("lamella.geometry.point", "lamella.geometry.ring", "lamella.io.delimited",
+                    "org.apache.felix.fileinstall")) {
+                assertEquals(Bundle.RESOLVED, states.get(left), left + " is not started for help");
+            }
+            for (String started : List.of("lamella.cli", "lamella.cli.data", "lamella.engine", "org.apache.felix.scr")) {
+                assertEquals(Bundle.ACTIVE, states.get(started), started + " is started for help");
+            }
+        }
+    }
+
+    /** With a plug-in, help starts everything a command run does: the plug-in's command may need any of it. */
+    @Test
+    void helpWithAPluginStartsWhatACommandStarts() throws Exception {
+        RuntimeCopy.into(home);
+        TestBundles.write(home.resolve("plugins/lab.nothing.jar"), "lab.nothing", Map.of());
+        try (FelixRuntime help = FelixRuntime.start(home, Map.of(), RuntimeScope.HELP)) {
+            for (Bundle bundle : help.framework().getBundleContext().getBundles()) {
+                if (bundle.getSymbolicName().startsWith("lamella.geometry.")) {
+                    assertEquals(Bundle.ACTIVE, bundle.getState(), bundle.getSymbolicName());
+                }
+            }
+        }
+    }
+
+    private static Set<String> commandNames(FelixRuntime runtime) throws InvalidSyntaxException {
+        Set<String> names = new TreeSet<>();
+        BundleContext context = runtime.framework().getBundleContext();
+        for (ServiceReference<?> ref : context.getServiceReferences("lamella.api.command.Command", null)) {
+            names.add(String.valueOf(ref.getProperty("lamella.command.name")));
+        }
+        return names;
     }
 
     /** A panel bundle added to the desktop feature but not to the runtime's desktop list would land in bundle/. */
