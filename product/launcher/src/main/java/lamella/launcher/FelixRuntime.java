@@ -13,6 +13,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
+import java.util.function.Function;
 import java.util.function.UnaryOperator;
 
 import org.apache.felix.framework.Felix;
@@ -44,6 +45,8 @@ public final class FelixRuntime implements AutoCloseable {
     private final Set<String> heldBack;
     private final Set<String> early;
     private final UnaryOperator<List<Bundle>> needed;
+    private final Function<Path, String> locations;
+    private final Optional<ShippedClasses> connected;
     private volatile List<Bundle> toStart = List.of();
     private volatile List<String> startProblems = List.of();
     private volatile Bundle toolkit;
@@ -52,7 +55,7 @@ public final class FelixRuntime implements AutoCloseable {
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
             List<Path> shipped, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
-            UnaryOperator<List<Bundle>> needed, StandardErrorLog log) {
+            UnaryOperator<List<Bundle>> needed, Optional<ShippedClasses> connected, StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
         this.storage = storage;
@@ -63,6 +66,10 @@ public final class FelixRuntime implements AutoCloseable {
         this.heldBack = heldBack;
         this.early = early;
         this.needed = needed;
+        this.connected = connected;
+        Set<Path> connectedJars = connected.map(c -> Set.copyOf(c.jars())).orElse(Set.of());
+        this.locations = jar -> connectedJars.contains(jar) ? ShippedClasses.location(jar)
+                : ShippedBundles.location(jar);
     }
 
     /**
@@ -101,7 +108,8 @@ public final class FelixRuntime implements AutoCloseable {
     public static FelixRuntime startInBackground(Path home, Map<String, String> overrides, RuntimeScope scope,
             Consumer<FelixRuntime> whenStarted) throws IOException, BundleException {
         FelixRuntime runtime = prepare(home, overrides, scope);
-        runtime.toolkit = ShippedBundles.installToolkit(runtime.framework.getBundleContext(), runtime.shipped);
+        runtime.toolkit = ShippedBundles.installToolkit(runtime.framework.getBundleContext(), runtime.shipped,
+                runtime.locations);
         Thread starter = new Thread(() -> {
             try {
                 runtime.installAll();
@@ -135,6 +143,9 @@ public final class FelixRuntime implements AutoCloseable {
             Path pluginsDir = Path.of(properties.get(RuntimeProperties.PLUGINS_DIR));
             List<Path> pluginsAtLaunch = ShippedBundles.jarsIn(pluginsDir);
             List<Path> shipped = new ArrayList<>(ShippedBundles.jarsIn(home.resolve("bundle")));
+            // The shipped bundles of bundle/ share one class loader (the desktop's keep their own).
+            Optional<ShippedClasses> connected = ShippedClasses.of(List.copyOf(shipped),
+                    properties.get(ShippedClasses.PROPERTY), System.getProperty("java.class.path"));
             List<Path> desktop = ShippedBundles.jarsIn(home.resolve("bundle/" + ShippedBundles.DESKTOP_FOLDER));
             // A headless command installs what only a plug-in could need — the desktop feature, whose packages a
             // plug-in may import, and Configuration Admin, which no shipped bundle uses — only when there are
@@ -161,12 +172,12 @@ public final class FelixRuntime implements AutoCloseable {
             config.put(FelixConstants.LOG_LOGGER_PROP, log);
             PluginFolderLog.install();
             StartupTrace.step("launcher: settings read, bundles listed");
-            framework = new Felix(config);
+            framework = connected.isPresent() ? new Felix(config, connected.get()) : new Felix(config);
             StartupTrace.step("framework constructed");
             framework.start();
             StartupTrace.step("framework started (system bundle resolved)");
             return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, installedOnly,
-                    heldBack, Set.copyOf(early), needed, log);
+                    heldBack, Set.copyOf(early), needed, connected, log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -180,7 +191,7 @@ public final class FelixRuntime implements AutoCloseable {
     private void installAll() {
         List<String> problems = new ArrayList<>();
         toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped, installedOnly, heldBack,
-                needed, problems);
+                needed, locations, problems);
         startProblems = List.copyOf(problems);
     }
 
@@ -196,6 +207,11 @@ public final class FelixRuntime implements AutoCloseable {
         properties.put("lamella.role", STARTED_ROLE);
         framework.getBundleContext().registerService(BooleanSupplier.class, () -> true, properties);
         StartupTrace.step("runtime started");
+    }
+
+    /** The class loader the shipped bundles of {@code bundle/} share; empty when each has its own. */
+    public Optional<ClassLoader> sharedLoader() {
+        return connected.map(ShippedClasses::loader);
     }
 
     /**

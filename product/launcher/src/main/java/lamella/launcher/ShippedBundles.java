@@ -8,6 +8,7 @@ import java.util.Comparator;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.function.Function;
 import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 
@@ -58,15 +59,17 @@ final class ShippedBundles {
      * @param started       jars to install, resolve and (by {@link #start}) start
      * @param installedOnly jars to install only: they resolve when something needs them, and never start
      * @param heldBack      symbolic names of bundles among {@code started} to install and not start
+     * @param locations     the location each jar is installed from ({@link #location}, or a connected jar's)
      * @param needed        of the installed and resolved bundles of {@code started}, those the run needs started
      *                      (all of them, or a {@link CommandLayer})
      * @param problems      where a jar that cannot be installed is named
      * @return the bundles to start
      */
     static List<Bundle> installAndResolve(BundleContext context, List<Path> started, List<Path> installedOnly,
-            Set<String> heldBack, UnaryOperator<List<Bundle>> needed, List<String> problems) {
-        List<Bundle> installed = install(context, started, problems);
-        install(context, installedOnly, problems);
+            Set<String> heldBack, UnaryOperator<List<Bundle>> needed, Function<Path, String> locations,
+            List<String> problems) {
+        List<Bundle> installed = install(context, started, locations, problems);
+        install(context, installedOnly, locations, problems);
         installed.removeIf(b -> heldBack.contains(b.getSymbolicName()));
         StartupTrace.step("bundles installed");
         // One resolver pass for all of them is cheaper than one per start.
@@ -133,11 +136,11 @@ final class ShippedBundles {
      *
      * @return SWT's bundle, resolved; null when there is none or it does not resolve
      */
-    static Bundle installToolkit(BundleContext context, List<Path> jars) {
+    static Bundle installToolkit(BundleContext context, List<Path> jars, Function<Path, String> locations) {
         List<Path> toolkitJars = jars.stream()
                 .filter(j -> j.getFileName().toString().startsWith(TOOLKIT))
                 .toList();
-        List<Bundle> installed = install(context, toolkitJars, new ArrayList<>());
+        List<Bundle> installed = install(context, toolkitJars, locations, new ArrayList<>());
         context.getBundle(0).adapt(FrameworkWiring.class).resolveBundles(installed);
         StartupTrace.step("display toolkit installed and resolved");
         return installed.stream()
@@ -146,15 +149,17 @@ final class ShippedBundles {
                 .orElse(null);
     }
 
+    /** The location of a jar installed by reference: read where it lies rather than copied into the cache. */
     static String location(Path jar) {
         return "reference:" + jar.toUri();
     }
 
-    private static List<Bundle> install(BundleContext context, List<Path> jars, List<String> problems) {
+    private static List<Bundle> install(BundleContext context, List<Path> jars, Function<Path, String> locations,
+            List<String> problems) {
         List<Bundle> installed = new ArrayList<>();
         for (Path jar : jars) {
             try {
-                installed.add(context.installBundle(location(jar)));
+                installed.add(context.installBundle(locations.apply(jar)));
             } catch (BundleException e) {
                 problems.add("bundle " + jar.getFileName() + " could not be installed: " + e.getMessage());
             }

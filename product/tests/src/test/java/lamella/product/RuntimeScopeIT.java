@@ -27,6 +27,7 @@ import org.osgi.framework.BundleContext;
 import org.osgi.framework.Constants;
 import org.osgi.framework.InvalidSyntaxException;
 import org.osgi.framework.ServiceReference;
+import org.osgi.framework.wiring.BundleWiring;
 
 import lamella.launcher.FelixRuntime;
 import lamella.launcher.RuntimeScope;
@@ -179,6 +180,77 @@ class RuntimeScopeIT {
                 }
             }
         }
+    }
+
+    /**
+     * The shipped bundles of bundle/ share one class loader (OSGi Connect); the desktop's have their own; with
+     * lamella.shipped.classes=false every bundle has its own again. A class of the API is one class either way.
+     */
+    @Test
+    void theShippedBundlesShareOneLoaderTheDesktopsKeepTheirOwnAndTheSettingTurnsItOff() throws Exception {
+        RuntimeCopy.into(home);
+        try (FelixRuntime runtime = FelixRuntime.start(home, Map.of(), RuntimeScope.WORKBENCH)) {
+            ClassLoader shared = runtime.sharedLoader().orElseThrow();
+            Map<String, ClassLoader> loaders = loaders(runtime);
+            for (String name : List.of("lamella.api", "lamella.engine", "lamella.cli",
+                    "com.fasterxml.jackson.core.jackson-databind",
+                    "org.apache.felix.scr")) {
+                assertEquals(shared, loaders.get(name), name);
+            }
+            ClassLoader workbench = loaders.get("lamella.ui.workbench");
+            assertTrue(workbench != null && workbench != shared, String.valueOf(workbench));
+            Bundle api = bundle(runtime, "lamella.api");
+            Bundle desktop = bundle(runtime, "lamella.ui.workbench");
+            assertEquals(api.loadClass("lamella.api.Technique"), desktop.loadClass("lamella.api.Technique"));
+        }
+        try (FelixRuntime runtime = FelixRuntime.start(home, Map.of("lamella.shipped.classes", "false"),
+                RuntimeScope.COMMANDS)) {
+            assertTrue(runtime.sharedLoader().isEmpty());
+            Map<String, ClassLoader> loaders = loaders(runtime);
+            assertTrue(loaders.get("lamella.api") != loaders.get("lamella.engine"), loaders.toString());
+        }
+    }
+
+    /** One loader for all of bundle/ holds only if no two of its jars have a class in the same package. */
+    @Test
+    void noTwoShippedJarsSplitAPackage() throws IOException {
+        Map<String, String> owner = new HashMap<>();
+        List<String> split = new ArrayList<>();
+        for (Path jar : jars(RuntimeCopy.assembled().resolve("bundle"))) {
+            try (JarFile file = new JarFile(jar.toFile())) {
+                Set<String> packages = new TreeSet<>();
+                file.stream().map(e -> e.getName())
+                        .filter(n -> n.endsWith(".class") && !n.startsWith("META-INF/") && n.contains("/"))
+                        .forEach(n -> packages.add(n.substring(0, n.lastIndexOf('/'))));
+                for (String p : packages) {
+                    String before = owner.putIfAbsent(p, jar.getFileName().toString());
+                    if (before != null) {
+                        split.add(p + " in " + before + " and " + jar.getFileName());
+                    }
+                }
+            }
+        }
+        assertEquals(List.of(), split);
+    }
+
+    private static Map<String, ClassLoader> loaders(FelixRuntime runtime) {
+        Map<String, ClassLoader> loaders = new HashMap<>();
+        for (Bundle bundle : runtime.framework().getBundleContext().getBundles()) {
+            BundleWiring wiring = bundle.adapt(BundleWiring.class);
+            if (bundle.getBundleId() != 0 && wiring != null && !isFragment(bundle)) {
+                loaders.put(bundle.getSymbolicName(), wiring.getClassLoader());
+            }
+        }
+        return loaders;
+    }
+
+    private static Bundle bundle(FelixRuntime runtime, String name) {
+        for (Bundle bundle : runtime.framework().getBundleContext().getBundles()) {
+            if (name.equals(bundle.getSymbolicName())) {
+                return bundle;
+            }
+        }
+        throw new AssertionError("no bundle " + name);
     }
 
     private static Set<String> commandNames(FelixRuntime runtime) throws InvalidSyntaxException {
