@@ -6,14 +6,15 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.util.Set;
-import java.util.UUID;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicLong;
 
 /**
  * Text files written so that nobody ever sees half of one: into a temporary file beside the target, then moved into
@@ -59,10 +60,8 @@ public final class AtomicText {
         }
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
-        Path tmp = dir.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".part");
-        UNFINISHED.add(tmp);
+        Path tmp = createPart(dir, target.getFileName().toString(), content);
         try {
-            Files.write(tmp, content, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
             keepPermissions(target, tmp);
             try {
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -74,6 +73,37 @@ public final class AtomicText {
             UNFINISHED.remove(tmp);
         }
     }
+
+    /**
+     * Writes {@code content} to a new hidden part file beside the target and returns it (listed as unfinished). Its
+     * name carries the process id, the clock and a counter rather than a random UUID, whose secure random generator
+     * costs a short command some 10 ms to seed; the name need only be new, and one already taken (by another process
+     * on a shared folder) is skipped, since the file is created only if it does not exist.
+     */
+    private static Path createPart(Path dir, String name, byte[] content) throws IOException {
+        for (int attempt = 0; ; attempt++) {
+            Path tmp = dir.resolve("." + name + "." + PID + "-" + Long.toString(System.nanoTime() & Long.MAX_VALUE, 36)
+                    + "-" + PARTS.incrementAndGet() + ".part");
+            UNFINISHED.add(tmp);
+            try {
+                Files.write(tmp, content, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
+                return tmp;
+            } catch (FileAlreadyExistsException taken) {
+                UNFINISHED.remove(tmp);
+                if (attempt >= MAX_PART_ATTEMPTS) {
+                    throw taken;
+                }
+            } catch (IOException | RuntimeException e) {
+                Files.deleteIfExists(tmp);
+                UNFINISHED.remove(tmp);
+                throw e;
+            }
+        }
+    }
+
+    private static final long PID = ProcessHandle.current().pid();
+    private static final AtomicLong PARTS = new AtomicLong();
+    private static final int MAX_PART_ATTEMPTS = 100;
 
     private static void keepPermissions(Path target, Path tmp) throws IOException {
         if (!Files.isRegularFile(target)) {
