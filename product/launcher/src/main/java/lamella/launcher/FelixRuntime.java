@@ -20,6 +20,7 @@ import org.apache.felix.framework.Felix;
 import org.apache.felix.framework.util.FelixConstants;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleException;
+import org.osgi.framework.Constants;
 import org.osgi.framework.launch.Framework;
 
 /**
@@ -41,6 +42,8 @@ public final class FelixRuntime implements AutoCloseable {
     private final Path pluginsDir;
     private final List<Path> pluginsAtLaunch;
     private final List<Path> shipped;
+    /** Shipped jars left out of a help run's install; installed after all if the rest does not resolve alone. */
+    private final List<Path> later;
     private final List<Path> installedOnly;
     private final Set<String> heldBack;
     private final Set<String> early;
@@ -54,7 +57,7 @@ public final class FelixRuntime implements AutoCloseable {
     private volatile boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
-            List<Path> shipped, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
+            List<Path> shipped, List<Path> later, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
             UnaryOperator<List<Bundle>> needed, Optional<ShippedClasses> connected, StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
@@ -62,6 +65,7 @@ public final class FelixRuntime implements AutoCloseable {
         this.pluginsDir = pluginsDir;
         this.pluginsAtLaunch = pluginsAtLaunch;
         this.shipped = shipped;
+        this.later = later;
         this.installedOnly = installedOnly;
         this.heldBack = heldBack;
         this.early = early;
@@ -142,32 +146,53 @@ public final class FelixRuntime implements AutoCloseable {
                     storage.folder());
             Path pluginsDir = Path.of(properties.get(RuntimeProperties.PLUGINS_DIR));
             List<Path> pluginsAtLaunch = ShippedBundles.jarsIn(pluginsDir);
-            List<Path> shipped = new ArrayList<>(ShippedBundles.jarsIn(home.resolve("bundle")));
-            // The shipped bundles of bundle/ share one class loader (the desktop's keep their own).
-            Optional<ShippedClasses> connected = ShippedClasses.of(List.copyOf(shipped),
-                    properties.get(ShippedClasses.PROPERTY), System.getProperty("java.class.path"));
+            List<Path> bundleJars = ShippedBundles.jarsIn(home.resolve("bundle"));
             List<Path> desktop = ShippedBundles.jarsIn(home.resolve("bundle/" + ShippedBundles.DESKTOP_FOLDER));
             // A headless command installs what only a plug-in could need — the desktop feature, whose packages a
             // plug-in may import, and Configuration Admin, which no shipped bundle uses — only when there are
             // plug-ins, and never starts the desktop's.
             boolean plugins = !pluginsAtLaunch.isEmpty();
+            boolean workbench = scope == RuntimeScope.WORKBENCH;
+            ShippedManifests manifests = ShippedManifests.read(bundleJars);
+            // The shipped bundles of bundle/ share one class loader (the desktop's keep their own).
+            Optional<ShippedClasses> connected = ShippedClasses.of(bundleJars, manifests,
+                    properties.get(ShippedClasses.PROPERTY), System.getProperty("java.class.path"));
+            List<Path> shipped = new ArrayList<>(bundleJars);
+            List<Path> later = List.of();
             List<Path> installedOnly = List.of();
             Set<String> heldBack = Set.of();
             Set<String> early = new HashSet<>();
-            // Help without plug-ins starts only the bundles of commands and what they need; with plug-ins,
-            // whatever a plug-in's command needs may be anything.
+            // Help without plug-ins installs and starts only the bundles of commands and what they need; with
+            // plug-ins, whatever a plug-in's command needs may be anything.
             UnaryOperator<List<Bundle>> needed = scope == RuntimeScope.HELP && !plugins
                     ? CommandLayer::commandsAndNeeds : UnaryOperator.identity();
-            if (scope == RuntimeScope.WORKBENCH) {
+            Map<String, Object> config = new HashMap<>(properties);
+            if (workbench) {
                 shipped.addAll(0, desktop);
                 desktop.forEach(jar -> early.add(ShippedBundles.location(jar)));
             } else if (plugins) {
                 installedOnly = desktop;
             } else {
                 heldBack = ShippedBundles.FOR_PLUGINS;
+                if (scope == RuntimeScope.HELP) {
+                    shipped = new ArrayList<>(manifests.helpLayer(bundleJars, CommandLayer.COMMAND));
+                    List<Path> rest = new ArrayList<>(bundleJars);
+                    rest.removeAll(shipped);
+                    later = List.copyOf(rest);
+                }
+                // With no plug-in, the system bundle exports only the platform packages the shipped bundles use (a
+                // jar dropped into plugins/ while the command runs finds only those).
+                if (!config.containsKey(Constants.FRAMEWORK_SYSTEMPACKAGES)) {
+                    String own = ShippedManifests.frameworkExports();
+                    Set<String> platform = ShippedManifests.platformPackages();
+                    String packages = own == null ? ""
+                            : manifests.systemPackages(bundleJars, own, platform);
+                    if (!packages.isEmpty()) {
+                        config.put(Constants.FRAMEWORK_SYSTEMPACKAGES, packages);
+                    }
+                }
             }
 
-            Map<String, Object> config = new HashMap<>(properties);
             StandardErrorLog log = new StandardErrorLog();
             config.put(FelixConstants.LOG_LOGGER_PROP, log);
             PluginFolderLog.install();
@@ -176,7 +201,7 @@ public final class FelixRuntime implements AutoCloseable {
             StartupTrace.step("framework constructed");
             framework.start();
             StartupTrace.step("framework started (system bundle resolved)");
-            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, installedOnly,
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, later, installedOnly,
                     heldBack, Set.copyOf(early), needed, connected, log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
@@ -192,7 +217,25 @@ public final class FelixRuntime implements AutoCloseable {
         List<String> problems = new ArrayList<>();
         toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped, installedOnly, heldBack,
                 needed, locations, problems);
+        if (!later.isEmpty() && anyUnresolved()) {
+            // The layer read from the manifests missed something it needs: install the rest as well.
+            StartupTrace.step("the help layer did not resolve alone; installing every shipped bundle");
+            List<Path> all = new ArrayList<>(shipped);
+            all.addAll(later);
+            problems.clear();
+            toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), all, installedOnly, heldBack,
+                    needed, locations, problems);
+        }
         startProblems = List.copyOf(problems);
+    }
+
+    private boolean anyUnresolved() {
+        for (Bundle bundle : framework.getBundleContext().getBundles()) {
+            if (bundle.getState() == Bundle.INSTALLED) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private void startBundles() {

@@ -9,17 +9,14 @@ import java.net.URL;
 import java.net.URLClassLoader;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.jar.Attributes;
 import java.util.jar.JarEntry;
 import java.util.jar.JarFile;
-import java.util.jar.Manifest;
 
 import org.osgi.framework.BundleActivator;
 import org.osgi.framework.BundleException;
@@ -49,19 +46,23 @@ final class ShippedClasses implements ModuleConnector {
 
     private final Map<String, Path> jars;
     private final ClassLoader loader;
+    private final ShippedManifests manifests;
 
-    private ShippedClasses(Map<String, Path> jars, ClassLoader loader) {
+    private ShippedClasses(Map<String, Path> jars, ClassLoader loader, ShippedManifests manifests) {
         this.jars = jars;
         this.loader = loader;
+        this.manifests = manifests;
     }
 
     /**
      * The connector for {@code shipped}, or none when {@code setting} (the value of {@value #PROPERTY}) is {@code
      * false} or there is nothing to connect.
      *
+     * @param manifests the jars' manifests, read already
      * @param classPath the JVM's class path ({@code java.class.path})
      */
-    static Optional<ShippedClasses> of(List<Path> shipped, String setting, String classPath) {
+    static Optional<ShippedClasses> of(List<Path> shipped, ShippedManifests manifests, String setting,
+            String classPath) {
         if ("false".equalsIgnoreCase(setting == null ? "" : setting.trim()) || shipped.isEmpty()) {
             return Optional.empty();
         }
@@ -72,7 +73,7 @@ final class ShippedClasses implements ModuleConnector {
         ClassLoader loader = onClassPath(shipped, classPath)
                 ? ClassLoader.getSystemClassLoader()
                 : new OwnFirst(shipped, ShippedClasses.class.getClassLoader());
-        return Optional.of(new ShippedClasses(Map.copyOf(byLocation), loader));
+        return Optional.of(new ShippedClasses(Map.copyOf(byLocation), loader, manifests));
     }
 
     /** The location a shipped jar is installed from when it is connected: its plain file URL. */
@@ -123,25 +124,15 @@ final class ShippedClasses implements ModuleConnector {
         if (jar == null) {
             return Optional.empty();
         }
-        Map<String, String> headers;
-        try (JarFile file = new JarFile(jar.toFile())) {
-            Manifest manifest = file.getManifest();
-            if (manifest == null) {
-                throw new BundleException(jar + " has no manifest", BundleException.MANIFEST_ERROR);
-            }
-            headers = new HashMap<>();
-            for (Map.Entry<Object, Object> e : manifest.getMainAttributes().entrySet()) {
-                headers.put(((Attributes.Name) e.getKey()).toString(), (String) e.getValue());
-            }
-        } catch (IOException e) {
-            throw new BundleException("could not read " + jar + ": " + e.getMessage(), BundleException.READ_ERROR, e);
+        Map<String, String> headers = manifests.of(jar);
+        if (headers == null) {
+            throw new BundleException("could not read the manifest of " + jar, BundleException.MANIFEST_ERROR);
         }
         String classPath = headers.get(Constants.BUNDLE_CLASSPATH);
         if (headers.containsKey(Constants.FRAGMENT_HOST) || (classPath != null && !classPath.trim().equals("."))) {
             return Optional.empty();
         }
-        Map<String, String> fixed = Collections.unmodifiableMap(headers);
-        return Optional.of(() -> new JarContent(jar, fixed, loader));
+        return Optional.of(() -> new JarContent(jar, headers, loader));
     }
 
     @Override

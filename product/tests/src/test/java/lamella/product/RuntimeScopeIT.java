@@ -139,9 +139,9 @@ class RuntimeScopeIT {
     }
 
     /**
-     * Help without plug-ins starts only the bundles of commands and what their mandatory references need — no
-     * geometry, which commands only list — and every command is still there, with the same names as in a full start
-     * (a command whose needs were left out would never register).
+     * Help without plug-ins installs and starts only the bundles of commands and what they need — no geometry,
+     * which commands only list — and every command is still there, with the same names as in a full start (a
+     * command whose needs were left out would never register).
      */
     @Test
     void helpStartsTheCommandsAndWhatTheyNeedAndEveryCommandIsThere() throws Exception {
@@ -158,14 +158,42 @@ class RuntimeScopeIT {
             for (Bundle bundle : help.framework().getBundleContext().getBundles()) {
                 states.put(bundle.getSymbolicName(), bundle.getState());
             }
+            // Read from the manifests before the framework starts: these are not even installed (had the layer
+            // missed a bundle it needs, the launcher would have installed them all after all).
             for (String left : List.of("lamella.geometry.point", "lamella.geometry.ring", "lamella.io.delimited",
-                    "org.apache.felix.fileinstall")) {
-                assertEquals(Bundle.RESOLVED, states.get(left), left + " is not started for help");
+                    "lamella.technique.fdtr", "org.apache.felix.fileinstall")) {
+                assertEquals(null, states.get(left), left + " is not installed for help");
             }
             for (String started : List.of("lamella.cli", "lamella.cli.data", "lamella.engine", "org.apache.felix.scr")) {
                 assertEquals(Bundle.ACTIVE, states.get(started), started + " is started for help");
             }
         }
+    }
+
+    /**
+     * Without plug-ins the system bundle exports only the platform packages the shipped bundles import (none imports
+     * java.net.http); with one it exports every platform package, for whatever the plug-in imports.
+     */
+    @Test
+    void theSystemBundleExportsThePlatformPackagesOfTheShippedBundlesUnlessThereArePlugins() throws Exception {
+        RuntimeCopy.into(home);
+        try (FelixRuntime runtime = FelixRuntime.start(home, Map.of(), RuntimeScope.COMMANDS)) {
+            String exports = systemExports(runtime);
+            assertTrue(exports.contains("javax.xml.parsers") && exports.contains("org.osgi.framework;"), exports);
+            assertFalse(exports.contains("java.net.http"), exports);
+        }
+        TestBundles.write(home.resolve("plugins/lab.nothing.jar"), "lab.nothing", Map.of());
+        try (FelixRuntime runtime = FelixRuntime.start(home, Map.of(), RuntimeScope.COMMANDS)) {
+            assertTrue(systemExports(runtime).contains("java.net.http"));
+        }
+    }
+
+    private static String systemExports(FelixRuntime runtime) {
+        StringBuilder exports = new StringBuilder();
+        for (var capability : runtime.framework().adapt(BundleWiring.class).getCapabilities("osgi.wiring.package")) {
+            exports.append(capability.getAttributes().get("osgi.wiring.package")).append(";\n");
+        }
+        return exports.toString();
     }
 
     /** With a plug-in, help starts everything a command run does: the plug-in's command may need any of it. */

@@ -1,0 +1,388 @@
+package lamella.launcher;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.jar.Attributes;
+import java.util.jar.JarFile;
+import java.util.jar.Manifest;
+
+import org.osgi.framework.Constants;
+import org.osgi.framework.Filter;
+import org.osgi.framework.FrameworkUtil;
+import org.osgi.framework.InvalidSyntaxException;
+import org.osgi.framework.Version;
+
+/**
+ * The manifests of the shipped jars, read once before the framework starts, and what the launcher reads from them:
+ * the packages the framework's system bundle must export for them ({@link #systemPackages}), and the jars a run that
+ * only shows help must install ({@link #helpLayer}). A jar whose manifest cannot be read is left for the framework
+ * to report when it is installed.
+ */
+final class ShippedManifests {
+
+    private static final String SERVICE_NAMESPACE = "osgi.service";
+    private static final String EXTENDER_NAMESPACE = "osgi.extender";
+
+    private final Map<Path, Map<String, String>> headers;
+
+    private ShippedManifests(Map<Path, Map<String, String>> headers) {
+        this.headers = headers;
+    }
+
+    static ShippedManifests read(List<Path> jars) {
+        Map<Path, Map<String, String>> headers = new LinkedHashMap<>();
+        for (Path jar : jars) {
+            try (JarFile file = new JarFile(jar.toFile())) {
+                Manifest manifest = file.getManifest();
+                if (manifest != null) {
+                    Map<String, String> main = new HashMap<>();
+                    for (Map.Entry<Object, Object> e : manifest.getMainAttributes().entrySet()) {
+                        main.put(((Attributes.Name) e.getKey()).toString(), (String) e.getValue());
+                    }
+                    headers.put(jar, Collections.unmodifiableMap(main));
+                }
+            } catch (IOException unreadable) {
+                // the framework says so when it installs the jar
+            }
+        }
+        return new ShippedManifests(headers);
+    }
+
+    /** The packages the modules of the JVM's boot layer export to all. */
+    static Set<String> platformPackages() {
+        Set<String> packages = new java.util.HashSet<>();
+        for (Module m : ModuleLayer.boot().modules()) {
+            for (java.lang.module.ModuleDescriptor.Exports e : m.getDescriptor().exports()) {
+                if (!e.isQualified()) {
+                    packages.add(e.source());
+                }
+            }
+        }
+        return packages;
+    }
+
+    /**
+     * Felix's own framework packages, as its default settings export them ({@code osgi-exports}: the clauses with
+     * their versions and uses); null when they cannot be read.
+     */
+    static String frameworkExports() {
+        java.util.Properties defaults = new java.util.Properties();
+        try (java.io.InputStream in = org.apache.felix.framework.Felix.class.getClassLoader()
+                .getResourceAsStream("default.properties")) {
+            if (in == null) {
+                return null;
+            }
+            defaults.load(in);
+        } catch (IOException e) {
+            return null;
+        }
+        String exports = defaults.getProperty("osgi-exports");
+        return exports == null || exports.isBlank() || exports.contains("${") ? null : exports.trim();
+    }
+
+    /** A jar's main manifest headers, or null when it has none or could not be read. */
+    Map<String, String> of(Path jar) {
+        return headers.get(jar);
+    }
+
+    /**
+     * The framework's own packages ({@link #frameworkExports}) and every package that one of
+     * {@code jars} imports and none of them exports: the Java platform's packages these bundles use. Felix's
+     * default exports every package of every platform module, some hundreds, which it parses at every start.
+     * Empty when a jar's manifest is unknown: the framework's default is then the safe one.
+     *
+     * @param frameworkExports  the framework's own exports ({@link #frameworkExports})
+     * @param platformPackages  the packages the Java platform exports
+     */
+    String systemPackages(List<Path> jars, String frameworkExports, Set<String> platformPackages) {
+        Set<String> frameworkPackages = new java.util.HashSet<>();
+        for (Clause c : Clause.parse(frameworkExports)) {
+            frameworkPackages.addAll(c.names());
+        }
+        Set<String> imported = new LinkedHashSet<>();
+        Set<String> exported = new java.util.HashSet<>();
+        for (Path jar : jars) {
+            Map<String, String> h = headers.get(jar);
+            if (h == null) {
+                return "";
+            }
+            for (Clause c : Clause.parse(h.get(Constants.IMPORT_PACKAGE))) {
+                imported.addAll(c.names());
+            }
+            for (Clause c : Clause.parse(h.get(Constants.EXPORT_PACKAGE))) {
+                exported.addAll(c.names());
+            }
+        }
+        StringBuilder packages = new StringBuilder(frameworkExports);
+        for (String p : imported) {
+            if (!exported.contains(p) && !frameworkPackages.contains(p) && platformPackages.contains(p)) {
+                packages.append(',').append(p);
+            }
+        }
+        return packages.toString();
+    }
+
+    /**
+     * The jars of {@code jars} a run that only shows help needs installed: those that register a service of type
+     * {@code seedType} and, transitively, the providers of their mandatory service and extender requirements, the
+     * exporters of the packages they import (unless optional), the bundles they require, and the fragments of any of
+     * these. In the order given.
+     */
+    List<Path> helpLayer(List<Path> jars, String seedType) {
+        Map<Path, Wiring> wirings = new HashMap<>();
+        for (Path jar : jars) {
+            wirings.put(jar, Wiring.of(headers.get(jar)));
+        }
+        return CommandLayer.closure(jars, jar -> wirings.get(jar).provides(seedType),
+                (from, to) -> wirings.get(from).needs(wirings.get(to)));
+    }
+
+    /** Whether {@code from} cannot resolve or work without {@code to}. A jar with unknown headers needs everything. */
+    boolean needs(Path from, Path to) {
+        return !from.equals(to) && Wiring.of(headers.get(from)).needs(Wiring.of(headers.get(to)));
+    }
+
+    /** What one jar's manifest says it offers and needs, parsed once. */
+    private record Wiring(boolean known, String name, String host, Set<String> exports, Set<String> imports,
+            Set<String> requiredBundles, List<Clause> capabilities, List<Map<String, Object>> typed,
+            List<Requirement> requirements) {
+
+        static Wiring of(Map<String, String> h) {
+            if (h == null) {
+                return new Wiring(false, null, null, Set.of(), Set.of(), Set.of(), List.of(), List.of(), List.of());
+            }
+            Set<String> exports = new java.util.HashSet<>();
+            for (Clause c : Clause.parse(h.get(Constants.EXPORT_PACKAGE))) {
+                exports.addAll(c.names());
+            }
+            Set<String> imports = new java.util.HashSet<>();
+            for (Clause c : Clause.parse(h.get(Constants.IMPORT_PACKAGE))) {
+                if (!c.optional()) {
+                    imports.addAll(c.names());
+                }
+            }
+            Set<String> required = new java.util.HashSet<>();
+            for (Clause c : Clause.parse(h.get(Constants.REQUIRE_BUNDLE))) {
+                if (!c.optional()) {
+                    required.addAll(c.names());
+                }
+            }
+            List<Requirement> requirements = new ArrayList<>();
+            for (Clause r : Clause.parse(h.get(Constants.REQUIRE_CAPABILITY))) {
+                if (r.optional()) {
+                    continue;
+                }
+                for (String namespace : r.names()) {
+                    if (namespace.equals(SERVICE_NAMESPACE) || namespace.equals(EXTENDER_NAMESPACE)) {
+                        requirements.add(Requirement.of(namespace, r.directives().get(Constants.FILTER_DIRECTIVE)));
+                    }
+                }
+            }
+            List<Clause> capabilities = Clause.parse(h.get(Constants.PROVIDE_CAPABILITY));
+            List<Map<String, Object>> typed = new ArrayList<>();
+            for (Clause c : capabilities) {
+                Map<String, Object> attrs = new HashMap<>();
+                try {
+                    for (String key : c.attributes().keySet()) {
+                        attrs.put(key, c.typed(key));
+                    }
+                } catch (IllegalArgumentException unreadable) {
+                    attrs = null; // a value only the framework can read: any requirement of its namespace is met
+                }
+                typed.add(attrs);
+            }
+            return new Wiring(true, symbolicName(h.get(Constants.BUNDLE_SYMBOLICNAME)),
+                    symbolicName(h.get(Constants.FRAGMENT_HOST)), exports, imports, required, capabilities, typed,
+                    requirements);
+        }
+
+        boolean provides(String serviceType) {
+            for (Clause c : capabilities) {
+                if (c.names().contains(SERVICE_NAMESPACE) && c.values("objectClass").contains(serviceType)) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        boolean needs(Wiring to) {
+            if (!known || !to.known) {
+                return true;
+            }
+            if (to.host != null && to.host.equals(name)) {
+                return true; // a host brings its fragments
+            }
+            for (String p : imports) {
+                if (to.exports.contains(p)) {
+                    return true;
+                }
+            }
+            if (to.name != null && requiredBundles.contains(to.name)) {
+                return true;
+            }
+            for (Requirement r : requirements) {
+                for (int i = 0; i < to.capabilities.size(); i++) {
+                    if (to.capabilities.get(i).names().contains(r.namespace()) && r.matches(to.typed.get(i))) {
+                        return true;
+                    }
+                }
+            }
+            return false;
+        }
+    }
+
+    /** A mandatory capability requirement: its namespace and its filter, compiled once (null: matches any). */
+    private record Requirement(String namespace, Filter filter) {
+
+        static Requirement of(String namespace, String filter) {
+            if (filter == null) {
+                return new Requirement(namespace, null);
+            }
+            try {
+                return new Requirement(namespace, FrameworkUtil.createFilter(filter));
+            } catch (InvalidSyntaxException e) {
+                return new Requirement(namespace, null); // only the framework can read it: counted as met
+            }
+        }
+
+        /** @param attributes a capability's typed attributes; null when they could not be read */
+        boolean matches(Map<String, Object> attributes) {
+            return filter == null || attributes == null || filter.matches(attributes);
+        }
+    }
+
+    private static String symbolicName(String header) {
+        if (header == null) {
+            return null;
+        }
+        int semicolon = header.indexOf(';');
+        return (semicolon < 0 ? header : header.substring(0, semicolon)).trim();
+    }
+
+    /**
+     * One clause of a manifest header: its names (paths), attributes and directives, as the OSGi core specification
+     * (3.2.4, "Common Header Syntax") writes them: {@code name;name;attr:Type="value";dir:=value, …}.
+     */
+    record Clause(List<String> names, Map<String, String> attributes, Map<String, String> types,
+            Map<String, String> directives) {
+
+        static List<Clause> parse(String header) {
+            List<Clause> clauses = new ArrayList<>();
+            if (header == null || header.isBlank()) {
+                return clauses;
+            }
+            for (String text : split(header, ',')) {
+                List<String> names = new ArrayList<>();
+                Map<String, String> attributes = new HashMap<>();
+                Map<String, String> types = new HashMap<>();
+                Map<String, String> directives = new HashMap<>();
+                for (String part : split(text, ';')) {
+                    String p = part.trim();
+                    if (p.isEmpty()) {
+                        continue;
+                    }
+                    int directive = p.indexOf(":=");
+                    int equals = p.indexOf('=');
+                    if (directive >= 0 && directive < equals) {
+                        directives.put(p.substring(0, directive).trim(), unquote(p.substring(directive + 2)));
+                    } else if (equals >= 0) {
+                        String key = p.substring(0, equals).trim();
+                        int type = key.indexOf(':');
+                        String name = type < 0 ? key : key.substring(0, type).trim();
+                        attributes.put(name, unquote(p.substring(equals + 1)));
+                        if (type >= 0) {
+                            types.put(name, key.substring(type + 1).trim());
+                        }
+                    } else {
+                        names.add(p);
+                    }
+                }
+                clauses.add(new Clause(names, attributes, types, directives));
+            }
+            return clauses;
+        }
+
+        boolean optional() {
+            return Constants.RESOLUTION_OPTIONAL.equals(directives.get(Constants.RESOLUTION_DIRECTIVE));
+        }
+
+        /** An attribute's comma-separated values (a {@code List<String>} attribute), or one value. */
+        List<String> values(String attribute) {
+            String v = attributes.get(attribute);
+            if (v == null) {
+                return List.of();
+            }
+            List<String> values = new ArrayList<>();
+            for (String s : v.split(",")) {
+                values.add(s.trim());
+            }
+            return values;
+        }
+
+        /** An attribute's value as its declared type makes it (String, Version, Long, Double, or a List of one). */
+        Object typed(String attribute) {
+            String type = types.getOrDefault(attribute, "String");
+            boolean list = type.startsWith("List");
+            String element = type;
+            if (list) {
+                int open = type.indexOf('<');
+                int close = type.lastIndexOf('>');
+                element = open >= 0 && close > open ? type.substring(open + 1, close).trim() : "String";
+            }
+            List<Object> values = new ArrayList<>();
+            for (String v : list ? values(attribute) : List.of(attributes.get(attribute))) {
+                values.add(switch (element) {
+                    case "Version" -> Version.parseVersion(v);
+                    case "Long" -> Long.valueOf(v.trim());
+                    case "Double" -> Double.valueOf(v.trim());
+                    default -> v;
+                });
+            }
+            return list ? values : values.get(0);
+        }
+
+        private static String unquote(String s) {
+            String t = s.trim();
+            return t.length() >= 2 && t.startsWith("\"") && t.endsWith("\"") ? t.substring(1, t.length() - 1) : t;
+        }
+
+        /**
+         * Splits at {@code separator} outside double quotes. It jumps from one separator or quote to the next with
+         * {@link String#indexOf}: a bundle's headers run to tens of kilobytes (every export's {@code uses} list), and
+         * the launcher reads them while its own code is still interpreted.
+         */
+        private static List<String> split(String s, char separator) {
+            List<String> parts = new ArrayList<>();
+            int from = 0;
+            int scan = 0;
+            while (true) {
+                int next = s.indexOf(separator, scan);
+                int quote = s.indexOf('"', scan);
+                if (quote >= 0 && (next < 0 || quote < next)) {
+                    int close = s.indexOf('"', quote + 1);
+                    if (close < 0) {
+                        break; // an unclosed quote runs to the end
+                    }
+                    scan = close + 1;
+                    continue;
+                }
+                if (next < 0) {
+                    break;
+                }
+                parts.add(s.substring(from, next));
+                from = next + 1;
+                scan = from;
+            }
+            parts.add(s.substring(from));
+            return parts;
+        }
+    }
+}
