@@ -14,8 +14,12 @@ final class StartupTrace {
 
     private static final boolean ON = Boolean.getBoolean(PROPERTY);
     private static final long ORIGIN = System.nanoTime();
-    private static final List<String> STEPS = new ArrayList<>();
-    private static long last = ORIGIN;
+    /** The steps' names and ends, kept raw: formatting them as they happen would itself take time (a cold
+     * {@code String.format} costs some 25 ms), so they are formatted only when printed. */
+    private static final List<String> NAMES = new ArrayList<>();
+    private static final List<Long> ENDS = new ArrayList<>();
+    /** Where the last printed step ended, so that a second print goes on from there. */
+    private static long printedUpTo = ORIGIN;
 
     private StartupTrace() {
     }
@@ -29,14 +33,13 @@ final class StartupTrace {
         if (!ON) {
             return;
         }
-        long now = System.nanoTime();
-        STEPS.add(String.format("%7.1f ms  %6.1f  %s", (now - ORIGIN) / 1e6, (now - last) / 1e6, name));
-        last = now;
+        ENDS.add(System.nanoTime());
+        NAMES.add(name);
     }
 
     /** Prints the steps so far, once. */
     static synchronized void print() {
-        if (!ON || STEPS.isEmpty()) {
+        if (!ON || NAMES.isEmpty()) {
             return;
         }
         System.err.println("lamella start-up (since main, this step, what ended); printed at "
@@ -44,7 +47,15 @@ final class StartupTrace {
         long mainEpochMs = System.currentTimeMillis() - (System.nanoTime() - ORIGIN) / 1_000_000;
         ProcessHandle.current().info().startInstant().ifPresent(start -> System.err.println(
                 "  process start to main: " + (mainEpochMs - start.toEpochMilli()) + " ms (the clock counts in 10 ms)"));
-        STEPS.forEach(s -> System.err.println("  " + s));
-        STEPS.clear();
+        long last = printedUpTo;
+        for (int i = 0; i < NAMES.size(); i++) {
+            long end = ENDS.get(i);
+            System.err.println(String.format("  %7.1f ms  %6.1f  %s", (end - ORIGIN) / 1e6, (end - last) / 1e6,
+                    NAMES.get(i)));
+            last = end;
+        }
+        printedUpTo = last;
+        NAMES.clear();
+        ENDS.clear();
     }
 }
