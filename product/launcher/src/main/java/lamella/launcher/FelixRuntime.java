@@ -47,6 +47,8 @@ public final class FelixRuntime implements AutoCloseable {
     private final List<Path> installedOnly;
     private final Set<String> heldBack;
     private final Set<String> early;
+    /** Runs between the start of the early bundles (and what they need) and the others'. */
+    private Runnable beforeTheRest = () -> { };
     private final UnaryOperator<List<Bundle>> needed;
     private final Function<Path, String> locations;
     private final Optional<ShippedClasses> connected;
@@ -114,6 +116,11 @@ public final class FelixRuntime implements AutoCloseable {
         FelixRuntime runtime = prepare(home, overrides, scope);
         runtime.toolkit = ShippedBundles.installToolkit(runtime.framework.getBundleContext(), runtime.shipped,
                 runtime.locations);
+        if (scope == RuntimeScope.WORKBENCH) {
+            // The window opens first; the geometries, techniques, importers and the rest start once it is up.
+            runtime.beforeTheRest = () -> WorkbenchStart.awaitWindow(runtime.framework.getBundleContext(),
+                    WorkbenchStart.WINDOW_PATIENCE_MS);
+        }
         Thread starter = new Thread(() -> {
             try {
                 runtime.installAll();
@@ -240,7 +247,7 @@ public final class FelixRuntime implements AutoCloseable {
 
     private void startBundles() {
         List<String> problems = new ArrayList<>(startProblems);
-        ShippedBundles.start(toStart, early, problems);
+        ShippedBundles.start(toStart, early, problems, beforeTheRest);
         startProblems = List.copyOf(problems);
     }
 

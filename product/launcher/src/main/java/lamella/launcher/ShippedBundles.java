@@ -89,6 +89,14 @@ final class ShippedBundles {
      * @param problems where a bundle that cannot start is named
      */
     static void start(List<Bundle> bundles, Set<String> early, List<String> problems) {
+        start(bundles, early, problems, () -> { });
+    }
+
+    /**
+     * Starts the bundles in {@link #startRank} order; {@code beforeTheRest} runs once the early bundles and what they
+     * need have started, before any other (when there are early bundles).
+     */
+    static void start(List<Bundle> bundles, Set<String> early, List<String> problems, Runnable beforeTheRest) {
         List<Bundle> order = new ArrayList<>(bundles);
         Set<Bundle> earlyBundles = new HashSet<>();
         for (Bundle b : bundles) {
@@ -99,9 +107,14 @@ final class ShippedBundles {
         Set<Bundle> neededEarly = earlyBundles.isEmpty() ? Set.of()
                 : new HashSet<>(CommandLayer.needs(bundles, earlyBundles));
         order.sort(Comparator.comparingInt(b -> startRank(b, early, neededEarly)));
+        boolean paused = earlyBundles.isEmpty();
         for (Bundle bundle : order) {
             if (isFragment(bundle)) {
                 continue;
+            }
+            if (!paused && startRank(bundle, early, neededEarly) > 2) {
+                paused = true;
+                beforeTheRest.run();
             }
             try {
                 bundle.start();

@@ -2,12 +2,14 @@ package lamella.launcher;
 
 import java.util.Collection;
 import java.util.Optional;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.InvalidSyntaxException;
 import org.osgi.framework.ServiceEvent;
+import org.osgi.framework.ServiceListener;
 import org.osgi.framework.ServiceReference;
 
 /**
@@ -21,6 +23,8 @@ final class WorkbenchStart {
     private static final String APP_NAME = "Lamella";
     private static final String CONTROL_FILTER = "(lamella.role=workbench.control)";
     private static final long POLL_MS = 20;
+    /** How long the bundles the window does not need wait for it to open. */
+    static final long WINDOW_PATIENCE_MS = 5_000;
 
     private WorkbenchStart() {
     }
@@ -43,6 +47,40 @@ final class WorkbenchStart {
                 StartupTrace.step("display not created here: " + e);
             }
         });
+    }
+
+    /**
+     * Waits until the workbench's window is open (its window control is offered), or {@code patienceMs} have passed:
+     * the bundles the window does not need start after it, instead of competing with it for the processors.
+     */
+    static void awaitWindow(BundleContext context, long patienceMs) {
+        CountDownLatch open = new CountDownLatch(1);
+        ServiceListener listener = event -> {
+            if (event.getType() == ServiceEvent.REGISTERED) {
+                open.countDown();
+            }
+        };
+        try {
+            context.addServiceListener(listener, CONTROL_FILTER);
+            if (context.getServiceReferences((String) null, CONTROL_FILTER) != null) {
+                return;
+            }
+            open.await(patienceMs, TimeUnit.MILLISECONDS);
+            StartupTrace.step(open.getCount() == 0 ? "window open: the other bundles start"
+                    : "no window after " + patienceMs + " ms: the other bundles start");
+        } catch (InvalidSyntaxException e) {
+            throw new IllegalStateException("the control filter is constant and valid", e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (IllegalStateException stopping) {
+            // The framework is stopping: nothing to wait for.
+        } finally {
+            try {
+                context.removeServiceListener(listener);
+            } catch (IllegalStateException stopping) {
+                // as above
+            }
+        }
     }
 
     /** The workbench offers its window control once the window is open: the end of its start-up. */

@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.Hashtable;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -121,6 +122,49 @@ class RuntimeScopeIT {
             }
             assertEquals(List.of(), notActive);
         }
+    }
+
+    /**
+     * The bundles the window does not need — geometries, techniques, importers, the command line — wait for the
+     * window (its control service) instead of competing with it for the processors, and start as soon as it is there.
+     */
+    @Test
+    void theBundlesTheWindowDoesNotNeedStartOnceItIsOpen() throws Exception {
+        RuntimeCopy.into(home);
+        try (FelixRuntime runtime = FelixRuntime.startInBackground(home, Map.of(), RuntimeScope.WORKBENCH, r -> { })) {
+            BundleContext context = runtime.framework().getBundleContext();
+            assertTrue(Eventually.within(Duration.ofSeconds(30), () -> hasService(context, Runnable.class,
+                    "(lamella.role=workbench)")), "the workbench's component came up");
+            long windowOpened = System.nanoTime();
+            for (String waiting : List.of("lamella.geometry.point", "lamella.technique.tdtr", "lamella.io.delimited")) {
+                assertTrue(state(context, waiting) != Bundle.ACTIVE, waiting + " started before the window opened");
+            }
+            assertFalse(started(runtime));
+            // What the workbench registers once its window is open.
+            Hashtable<String, Object> props = new Hashtable<>();
+            props.put("lamella.role", "workbench.control");
+            context.registerService(java.util.function.Function.class, x -> x, props);
+            assertTrue(Eventually.within(Duration.ofSeconds(30),
+                    () -> state(context, "lamella.geometry.point") == Bundle.ACTIVE), "the rest did not start");
+            double waitedMs = (System.nanoTime() - windowOpened) / 1e6;
+            // Well before the patience of 5 s: the rest started because the window opened, not because time ran out.
+            assertTrue(waitedMs < 4_000, "the rest started " + waitedMs + " ms after the window opened");
+            assertTrue(Eventually.within(Duration.ofSeconds(30), () -> started(runtime)), "no started service");
+            assertEquals(List.of(), runtime.startProblems());
+        }
+    }
+
+    private static boolean hasService(BundleContext context, Class<?> type, String filter) {
+        try {
+            return !context.getServiceReferences(type, filter).isEmpty();
+        } catch (InvalidSyntaxException e) {
+            throw new AssertionError(e);
+        }
+    }
+
+    private static int state(BundleContext context, String symbolicName) {
+        return Stream.of(context.getBundles()).filter(b -> symbolicName.equals(b.getSymbolicName()))
+                .mapToInt(Bundle::getState).findFirst().orElseThrow(() -> new AssertionError("no " + symbolicName));
     }
 
     @Test
