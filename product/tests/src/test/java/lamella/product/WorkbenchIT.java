@@ -183,6 +183,8 @@ class WorkbenchIT {
         ask("screenshot " + SHOTS.resolve("arrangement-before-restart.png"));
 
         closeWindow();
+        // The window's place is kept beside the arrangement, read before it when the window opens again.
+        assertTrue(Files.readString(user.resolve("window.properties")).contains("maximised="));
         Bundle wb = bundle("lamella.ui.workbench");
         wb.stop();
         wb.start();

@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
@@ -36,11 +37,42 @@ final class ArrangementStore {
         }
     }
 
+    /**
+     * Where the window was when it was last closed, if it was saved with the arrangement (without an arrangement —
+     * the user deleted it to start afresh — the window opens on the whole screen, as the first time). An unreadable
+     * place is reported and ignored.
+     */
+    Optional<WindowPlace> lastPlace() {
+        Path file = user.windowPlace();
+        if (!Files.isRegularFile(user.arrangement()) || !Files.isRegularFile(file)) {
+            return Optional.empty();
+        }
+        try {
+            return Optional.of(WindowPlace.read(file));
+        } catch (IOException | RuntimeException e) {
+            messages.warning("The window's last place could not be read (" + e.getMessage() + "); it opens on the"
+                    + " whole screen instead.");
+            return Optional.empty();
+        }
+    }
+
+    /** Saves the arrangement and, beside it, the window's place that it records. */
     void saveLast(Arrangement a) {
         try {
             ArrangementFile.save(a, user.arrangement());
         } catch (IOException e) {
             messages.error("Could not save the arrangement to " + user.arrangement(), e);
+            return;
+        }
+        Optional<WindowPlace> place = WindowPlace.of(a);
+        try {
+            if (place.isPresent()) {
+                place.get().save(user.windowPlace());
+            } else {
+                Files.deleteIfExists(user.windowPlace());
+            }
+        } catch (IOException e) {
+            messages.error("Could not save the window's place to " + user.windowPlace(), e);
         }
     }
 

@@ -61,6 +61,11 @@ final class ArrangementView {
         rebuild();
     }
 
+    /** Takes the arrangement to show at the next {@link #rebuild}, leaving the widgets as they are until then. */
+    void take(Arrangement with) {
+        arrangement = with;
+    }
+
     boolean shows(String panelId) {
         return shelf.isLive(panelId) && !arrangement.closed.contains(panelId)
                 && arrangement.areaOf(panelId).isPresent();

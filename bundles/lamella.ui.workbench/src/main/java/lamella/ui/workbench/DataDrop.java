@@ -38,7 +38,10 @@ import org.eclipse.swt.widgets.Control;
  */
 final class DataDrop {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
+    /** Made on first use, not as the window opens. */
+    private static final class Json {
+        static final ObjectMapper MAPPER = new ObjectMapper();
+    }
 
     private final Workbench workbench;
     private final Path staging;
@@ -135,11 +138,11 @@ final class DataDrop {
 
     @SuppressWarnings("unchecked")
     private static Map<String, Object> map(JsonNode block) {
-        return block instanceof ObjectNode o ? JSON.convertValue(o, Map.class) : null;
+        return block instanceof ObjectNode o ? Json.MAPPER.convertValue(o, Map.class) : null;
     }
 
     private static ObjectNode node(Optional<Map<String, Object>> block) {
-        return block.map(b -> (ObjectNode) JSON.valueToTree(b)).orElse(null);
+        return block.map(b -> (ObjectNode) Json.MAPPER.valueToTree(b)).orElse(null);
     }
 
     private static String stem(Path file) {

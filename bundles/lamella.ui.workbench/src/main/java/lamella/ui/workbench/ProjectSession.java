@@ -29,7 +29,10 @@ final class ProjectSession {
     static final int RECOVERY_EVERY_MS = 30_000;
     static final String DEMO_CASE = "demo/oxide-film-joint/case.json";
 
-    private static final ObjectMapper JSON = new ObjectMapper();
+    /** Made on first use: the first mapper of a run costs some 150 ms, which the window's opening need not wait for. */
+    private static final class Json {
+        static final ObjectMapper MAPPER = new ObjectMapper();
+    }
 
     private final Shell shell;
     private final CaseReader reader;
@@ -47,9 +50,8 @@ final class ProjectSession {
         this.user = user;
         this.home = home;
         this.messages = messages;
-        this.recent = new RecentProjects(user.recent());
+        this.recent = new RecentProjects(user.recent(), messages);
         this.onReplaced = onReplaced;
-        recent.load(messages);
     }
 
     Project project() {
@@ -198,7 +200,7 @@ final class ProjectSession {
         }
         try {
             project.save(target);
-            recent.opened(target, messages);
+            recent.opened(target);
             deleteRecovery();
             messages.info("Saved " + target + ".");
             return true;
@@ -235,10 +237,10 @@ final class ProjectSession {
         }
         try {
             project.writeRecovery(recoveryCase());
-            ObjectNode info = JSON.createObjectNode();
+            ObjectNode info = Json.MAPPER.createObjectNode();
             info.put("project", project.file().map(Path::toString).orElse(null));
             info.put("written", Instant.now().toString());
-            AtomicFile.write(recoveryInfo(), JSON.writeValueAsString(info) + "\n");
+            AtomicFile.write(recoveryInfo(), Json.MAPPER.writeValueAsString(info) + "\n");
         } catch (IOException e) {
             messages.error("Could not write the recovery copy in " + user.recovery(), e);
         }
@@ -256,7 +258,7 @@ final class ProjectSession {
     private boolean tryOpen(Path file) {
         try {
             replace(Project.open(file, reader));
-            recent.opened(file, messages);
+            recent.opened(file);
             messages.info("Opened " + file + ".");
             return true;
         } catch (InputException e) {

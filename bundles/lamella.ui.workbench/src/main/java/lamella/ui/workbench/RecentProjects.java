@@ -15,18 +15,28 @@ final class RecentProjects {
 
     static final int KEPT = 10;
 
-    private static final ObjectMapper JSON = new ObjectMapper();
+    /** Made on first use, not as the window opens. */
+    private static final class Json {
+        static final ObjectMapper MAPPER = new ObjectMapper();
+    }
 
     private final Path file;
+    private final MessageLog messages;
     private final List<Path> paths = new ArrayList<>();
+    private boolean loaded;
 
-    RecentProjects(Path file) {
+    /** The list in {@code file}, read when it is first asked for (reading JSON is slow the first time in a run). */
+    RecentProjects(Path file, MessageLog messages) {
         this.file = file;
+        this.messages = messages;
     }
 
     /** Reads the list; an unreadable list is reported and started afresh, since it only saves the user a click. */
-    void load(MessageLog messages) {
-        paths.clear();
+    private void load() {
+        if (loaded) {
+            return;
+        }
+        loaded = true;
         if (!Files.isRegularFile(file)) {
             return;
         }
@@ -40,21 +50,23 @@ final class RecentProjects {
     }
 
     List<Path> paths() {
+        load();
         return List.copyOf(paths);
     }
 
-    void opened(Path project, MessageLog messages) {
+    void opened(Path project) {
+        load();
         Path abs = project.toAbsolutePath().normalize();
         paths.remove(abs);
         paths.add(0, abs);
         while (paths.size() > KEPT) {
             paths.remove(paths.size() - 1);
         }
-        ArrayNode list = JSON.createObjectNode().putArray("recent");
+        ArrayNode list = Json.MAPPER.createObjectNode().putArray("recent");
         paths.forEach(p -> list.add(p.toString()));
         try {
-            AtomicFile.write(file, JSON.writerWithDefaultPrettyPrinter()
-                    .writeValueAsString(JSON.createObjectNode().set("recent", list)) + "\n");
+            AtomicFile.write(file, Json.MAPPER.writerWithDefaultPrettyPrinter()
+                    .writeValueAsString(Json.MAPPER.createObjectNode().set("recent", list)) + "\n");
         } catch (IOException e) {
             messages.error("Could not update the list of recent projects " + file, e);
         }

@@ -21,6 +21,11 @@ record UserFolder(Path root) {
         return root.resolve("arrangement.json");
     }
 
+    /** Where the window was last: read before the arrangement, so that the window is placed at once. */
+    Path windowPlace() {
+        return root.resolve("window.properties");
+    }
+
     Path namedArrangements() {
         return root.resolve("arrangements");
     }

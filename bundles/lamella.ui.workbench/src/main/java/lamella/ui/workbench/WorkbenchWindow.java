@@ -78,7 +78,9 @@ final class WorkbenchWindow implements Workbench {
         parking.setLayoutData(parked);
         parking.setVisible(false);
         shelf = new PanelShelf(parking, this, messages);
-        layout = new ArrangementView(host, shelf, arrangements.last(), new ArrangementView.Actions() {
+        // The standard arrangement until the panels come: the user's is read then (see ready()), since reading JSON
+        // is slow the first time in a run and the window waits for nothing but its place.
+        layout = new ArrangementView(host, shelf, Arrangement.standard(), new ArrangementView.Actions() {
             @Override
             public void close(String panelId) {
                 setShown(panelId, false);
@@ -136,6 +138,7 @@ final class WorkbenchWindow implements Workbench {
             return;
         }
         ready = true;
+        layout.take(arrangements.last());
         session.openInitial();
         menus.install();
         drop.acceptOn(shell);
@@ -369,13 +372,11 @@ final class WorkbenchWindow implements Workbench {
         session.deleteRecovery();
         Arrangement a = layout.arrangement();
         a.windowMaximised = shell.getMaximized();
-        if (!a.windowMaximised) {
-            Rectangle b = shell.getBounds();
-            a.x = b.x;
-            a.y = b.y;
-            a.width = b.width;
-            a.height = b.height;
-        }
+        Rectangle b = shell.getBounds();
+        a.x = b.x;
+        a.y = b.y;
+        a.width = b.width;
+        a.height = b.height;
         arrangements.saveLast(a);
         session.project().removeListener(projectListener);
         shelf.releaseAll();
@@ -403,12 +404,12 @@ final class WorkbenchWindow implements Workbench {
 
     /** The saved bounds if they still fit on a screen, else the whole of the primary screen's work area. */
     private void placeWindow() {
-        Arrangement a = layout.arrangement();
         Rectangle screen = display.getPrimaryMonitor().getClientArea();
-        Rectangle saved = new Rectangle(a.x, a.y, a.width, a.height);
-        if (a.width > 200 && a.height > 150 && screen.intersects(saved)) {
+        Optional<WindowPlace> place = arrangements.lastPlace();
+        Rectangle saved = place.map(p -> new Rectangle(p.x(), p.y(), p.width(), p.height())).orElse(null);
+        if (saved != null && saved.width > 200 && saved.height > 150 && screen.intersects(saved)) {
             shell.setBounds(saved.intersection(screen));
-            shell.setMaximized(a.windowMaximised);
+            shell.setMaximized(place.get().maximised());
         } else {
             shell.setBounds(screen);
             shell.setMaximized(true);
