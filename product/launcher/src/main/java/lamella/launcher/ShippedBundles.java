@@ -88,10 +88,6 @@ final class ShippedBundles {
      * @param early    locations of bundles to start right after Declarative Services
      * @param problems where a bundle that cannot start is named
      */
-    static void start(List<Bundle> bundles, Set<String> early, List<String> problems) {
-        start(bundles, early, problems, () -> { });
-    }
-
     /**
      * Starts the bundles in {@link #startRank} order; {@code beforeTheRest} runs once the early bundles and what they
      * need have started, before any other (when there are early bundles).

@@ -22,7 +22,8 @@ record WindowPlace(int x, int y, int width, int height, boolean maximised) {
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             p.load(in);
         } catch (IllegalArgumentException e) {
-            throw new IOException(file + ": not a window place: " + e.getMessage(), e);
+            // The only way a properties file is unreadable as text: a backslash-u escape without four hex digits.
+            throw new IOException(file + ": not a window place: a line holds a broken \\u escape", e);
         }
         String maximised = p.getProperty("maximised", "").trim();
         if (!maximised.equals("true") && !maximised.equals("false")) {
