@@ -116,6 +116,16 @@ class LauncherScriptIT {
         assertFalse(run.out().isEmpty());
     }
 
+    @Test
+    void aJavaHomeWithoutJavaIsNamed() throws Exception {
+        Path empty = Files.createDirectories(root.resolve("not-a-jdk"));
+        Run run = run(Map.of("JAVA_HOME", empty.toString()), "help");
+        assertEquals(1, run.status(), run.err());
+        assertEquals("", run.out());
+        assertEquals("lamella: JAVA_HOME is " + empty + ", which holds no bin/java; Lamella needs Java 17 or newer\n",
+                run.err());
+    }
+
     private List<Path> archives(String name) throws IOException {
         Path cds = home.resolve("cds");
         if (!Files.isDirectory(cds)) {
