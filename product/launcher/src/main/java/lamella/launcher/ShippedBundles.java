@@ -85,12 +85,10 @@ final class ShippedBundles {
      * so that their components are satisfied before the rest start; FileInstall starts last, once the shipped
      * bundles that plug-ins build on are live.
      *
-     * @param early    locations of bundles to start right after Declarative Services
-     * @param problems where a bundle that cannot start is named
-     */
-    /**
-     * Starts the bundles in {@link #startRank} order; {@code beforeTheRest} runs once the early bundles and what they
-     * need have started, before any other (when there are early bundles).
+     * @param early         locations of bundles to start right after Declarative Services
+     * @param problems      where a bundle that cannot start is named
+     * @param beforeTheRest runs once the early bundles and what they need have started, before any other bundle
+     *                      starts (only when there are early bundles)
      */
     static void start(List<Bundle> bundles, Set<String> early, List<String> problems, Runnable beforeTheRest) {
         List<Bundle> order = new ArrayList<>(bundles);
