@@ -32,9 +32,15 @@ final class ShippedManifests {
     private static final String EXTENDER_NAMESPACE = "osgi.extender";
 
     private final Map<Path, Map<String, String>> headers;
+    /** Each jar's headers parsed, once: the system packages and the help layer both read them. */
+    private final Map<Path, Wiring> wirings = new HashMap<>();
 
     private ShippedManifests(Map<Path, Map<String, String>> headers) {
         this.headers = headers;
+    }
+
+    private Wiring wiring(Path jar) {
+        return wirings.computeIfAbsent(jar, j -> Wiring.of(headers.get(j)));
     }
 
     static ShippedManifests read(List<Path> jars) {
@@ -74,16 +80,11 @@ final class ShippedManifests {
      * their versions and uses); null when they cannot be read.
      */
     static String frameworkExports() {
-        java.util.Properties defaults = new java.util.Properties();
-        try (java.io.InputStream in = org.apache.felix.framework.Felix.class.getClassLoader()
-                .getResourceAsStream("default.properties")) {
-            if (in == null) {
-                return null;
-            }
-            defaults.load(in);
-        } catch (IOException e) {
-            return null;
-        }
+        // The framework's own copy, which it reads once per process anyway (and the warm-up thread has read).
+        // Its logger is told to say nothing: when the defaults are missing the framework itself says so later.
+        org.apache.felix.framework.Logger quiet = new org.apache.felix.framework.Logger();
+        quiet.setLogLevel(0);
+        java.util.Properties defaults = org.apache.felix.framework.util.Util.loadDefaultProperties(quiet);
         String exports = defaults.getProperty("osgi-exports");
         return exports == null || exports.isBlank() || exports.contains("${") ? null : exports.trim();
     }
@@ -110,16 +111,12 @@ final class ShippedManifests {
         Set<String> imported = new LinkedHashSet<>();
         Set<String> exported = new java.util.HashSet<>();
         for (Path jar : jars) {
-            Map<String, String> h = headers.get(jar);
-            if (h == null) {
+            Wiring w = wiring(jar);
+            if (!w.known()) {
                 return "";
             }
-            for (Clause c : Clause.parse(h.get(Constants.IMPORT_PACKAGE))) {
-                imported.addAll(c.names());
-            }
-            for (Clause c : Clause.parse(h.get(Constants.EXPORT_PACKAGE))) {
-                exported.addAll(c.names());
-            }
+            imported.addAll(w.allImports());
+            exported.addAll(w.exports());
         }
         StringBuilder packages = new StringBuilder(frameworkExports);
         for (String p : imported) {
@@ -137,34 +134,33 @@ final class ShippedManifests {
      * these. In the order given.
      */
     List<Path> helpLayer(List<Path> jars, String seedType) {
-        Map<Path, Wiring> wirings = new HashMap<>();
-        for (Path jar : jars) {
-            wirings.put(jar, Wiring.of(headers.get(jar)));
-        }
-        return CommandLayer.closure(jars, jar -> wirings.get(jar).provides(seedType),
-                (from, to) -> wirings.get(from).needs(wirings.get(to)));
+        return CommandLayer.closure(jars, jar -> wiring(jar).provides(seedType),
+                (from, to) -> wiring(from).needs(wiring(to)));
     }
 
     /** Whether {@code from} cannot resolve or work without {@code to}. A jar with unknown headers needs everything. */
     boolean needs(Path from, Path to) {
-        return !from.equals(to) && Wiring.of(headers.get(from)).needs(Wiring.of(headers.get(to)));
+        return !from.equals(to) && wiring(from).needs(wiring(to));
     }
 
     /** What one jar's manifest says it offers and needs, parsed once. */
     private record Wiring(boolean known, String name, String host, Set<String> exports, Set<String> imports,
-            Set<String> requiredBundles, List<Clause> capabilities, List<Map<String, Object>> typed,
+            Set<String> allImports, Set<String> requiredBundles, List<Clause> capabilities, List<Map<String, Object>> typed,
             List<Requirement> requirements) {
 
         static Wiring of(Map<String, String> h) {
             if (h == null) {
-                return new Wiring(false, null, null, Set.of(), Set.of(), Set.of(), List.of(), List.of(), List.of());
+                return new Wiring(false, null, null, Set.of(), Set.of(), Set.of(), Set.of(), List.of(), List.of(),
+                        List.of());
             }
             Set<String> exports = new java.util.HashSet<>();
             for (Clause c : Clause.parse(h.get(Constants.EXPORT_PACKAGE))) {
                 exports.addAll(c.names());
             }
             Set<String> imports = new java.util.HashSet<>();
+            Set<String> allImports = new LinkedHashSet<>();
             for (Clause c : Clause.parse(h.get(Constants.IMPORT_PACKAGE))) {
+                allImports.addAll(c.names());
                 if (!c.optional()) {
                     imports.addAll(c.names());
                 }
@@ -200,7 +196,8 @@ final class ShippedManifests {
                 typed.add(attrs);
             }
             return new Wiring(true, symbolicName(h.get(Constants.BUNDLE_SYMBOLICNAME)),
-                    symbolicName(h.get(Constants.FRAGMENT_HOST)), exports, imports, required, capabilities, typed,
+                    symbolicName(h.get(Constants.FRAGMENT_HOST)), exports, imports, allImports, required,
+                    capabilities, typed,
                     requirements);
         }
 

@@ -24,6 +24,8 @@ final class StorageArea {
     private static final Set<PosixFilePermission> OWNER_ONLY = EnumSet.of(PosixFilePermission.OWNER_READ,
             PosixFilePermission.OWNER_WRITE, PosixFilePermission.OWNER_EXECUTE);
     private static final int MAX_ATTEMPTS = 100;
+    /** The start of every storage folder's name. */
+    static final String PREFIX = "lamella-framework-";
 
     private final Path folder;
 
@@ -79,13 +81,13 @@ final class StorageArea {
     }
 
     /**
-     * A new folder in {@code parent}. Named after the process and the clock rather than by {@link
-     * Files#createTempDirectory}, whose random name seeds a secure random generator: some 25 ms of every start-up.
-     * The name need not be unguessable — the folder is created atomically and private — only new, and a name
-     * already taken is skipped.
+     * A new folder in {@code parent}. Named after the clock rather than by {@link Files#createTempDirectory}, whose
+     * random name seeds a secure random generator (some 25 ms of every start-up), or after the process, whose handle
+     * sets up a reaper thread pool at first use (some 15 ms on Java 17). The name need not be unguessable — the
+     * folder is created atomically and private — only new, and a name already taken is skipped.
      */
     private static StorageArea createIn(Path parent) throws IOException {
-        String prefix = "lamella-framework-" + ProcessHandle.current().pid() + "-";
+        String prefix = PREFIX;
         boolean posix = parent.getFileSystem().supportedFileAttributeViews().contains("posix");
         for (int attempt = 0; ; attempt++) {
             Path folder = parent.resolve(prefix + Long.toString(System.nanoTime() & Long.MAX_VALUE, 36));

@@ -26,7 +26,7 @@ class StorageAreaTest {
         try {
             assertNotEquals(first.folder(), second.folder());
             assertTrue(first.folder().getFileName().toString()
-                    .startsWith("lamella-framework-" + ProcessHandle.current().pid() + "-"), first.folder().toString());
+                    .startsWith(StorageArea.PREFIX), first.folder().toString());
             if (first.folder().getFileSystem().supportedFileAttributeViews().contains("posix")) {
                 assertEquals("rwx------", PosixFilePermissions.toString(Files.getPosixFilePermissions(first.folder())));
             }
