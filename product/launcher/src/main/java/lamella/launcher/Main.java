@@ -32,6 +32,7 @@ public final class Main {
 
     public static void main(String[] args) {
         StartupTrace.step("main entered");
+        WarmUp.begin();
         int status = run(args);
         StartupTrace.step("runtime closed");
         StartupTrace.print();
