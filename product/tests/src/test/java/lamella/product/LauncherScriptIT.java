@@ -126,6 +126,31 @@ class LauncherScriptIT {
                 run.err());
     }
 
+    @Test
+    void theWorkbenchAloneRunsWithGtksOpenGlSetUpOffUnlessTheUserSaysOtherwise() throws Exception {
+        // A stand-in JDK whose java prints the GDK_GL it was started with: no display is opened.
+        Path jdk = Files.createDirectories(root.resolve("stand-in-jdk/bin"));
+        Files.writeString(jdk.resolveSibling("release"), "JAVA_VERSION=\"17.0.1\"\n");
+        Path java = jdk.resolve("java");
+        Files.writeString(java, "#!/bin/bash\necho \"GDK_GL=${GDK_GL-unset}\"\n");
+        java.toFile().setExecutable(true);
+        Map<String, String> env = new HashMap<>();
+        env.put("JAVA_HOME", jdk.getParent().toString());
+        env.put("DISPLAY", ":99");
+
+        Run workbench = run(env);
+        assertEquals(0, workbench.status(), workbench.err());
+        assertEquals("GDK_GL=disable\n", workbench.out());
+
+        env.put("GDK_GL", "always");
+        Run chosen = run(env);
+        assertEquals("GDK_GL=always\n", chosen.out(), chosen.err());
+
+        env.remove("GDK_GL");
+        Run command = run(env, "help");
+        assertEquals("GDK_GL=unset\n", command.out(), command.err());
+    }
+
     private List<Path> archives(String name) throws IOException {
         Path cds = home.resolve("cds");
         if (!Files.isDirectory(cds)) {
@@ -176,6 +201,7 @@ class LauncherScriptIT {
         environment.remove("WAYLAND_DISPLAY");
         environment.remove("LAMELLA_JAVA_OPTS");
         environment.remove("JAVA_TOOL_OPTIONS");
+        environment.remove("GDK_GL");
         // The JDK running the tests unless the case names another.
         environment.put("JAVA_HOME", System.getProperty("java.home"));
         environment.putAll(new HashMap<>(env));
