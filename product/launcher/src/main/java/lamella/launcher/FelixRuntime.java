@@ -44,6 +44,14 @@ public final class FelixRuntime implements AutoCloseable {
     private final List<Path> shipped;
     /** Shipped jars left out of a help run's install; installed after all if the rest does not resolve alone. */
     private final List<Path> later;
+    /**
+     * The workbench's desktop jars, whose bundles and what they resolve against or need are installed first; the
+     * other shipped jars are installed once the window is up. Empty for any other run.
+     */
+    private final List<Path> window;
+    private final ShippedManifests manifests;
+    /** Shipped jars to install once the window is up; set when the window's layer is installed. */
+    private List<Path> afterWindow = List.of();
     private final List<Path> installedOnly;
     private final Set<String> heldBack;
     private final Set<String> early;
@@ -59,8 +67,9 @@ public final class FelixRuntime implements AutoCloseable {
     private volatile boolean closed;
 
     private FelixRuntime(Felix framework, StorageArea storage, Path pluginsDir, List<Path> pluginsAtLaunch,
-            List<Path> shipped, List<Path> later, List<Path> installedOnly, Set<String> heldBack, Set<String> early,
-            UnaryOperator<List<Bundle>> needed, Optional<ShippedClasses> connected, StandardErrorLog log) {
+            List<Path> shipped, List<Path> later, List<Path> window, ShippedManifests manifests,
+            List<Path> installedOnly, Set<String> heldBack, Set<String> early, UnaryOperator<List<Bundle>> needed,
+            Optional<ShippedClasses> connected, StandardErrorLog log) {
         this.framework = framework;
         this.log = log;
         this.storage = storage;
@@ -68,6 +77,8 @@ public final class FelixRuntime implements AutoCloseable {
         this.pluginsAtLaunch = pluginsAtLaunch;
         this.shipped = shipped;
         this.later = later;
+        this.window = window;
+        this.manifests = manifests;
         this.installedOnly = installedOnly;
         this.heldBack = heldBack;
         this.early = early;
@@ -166,6 +177,7 @@ public final class FelixRuntime implements AutoCloseable {
                     properties.get(ShippedClasses.PROPERTY), System.getProperty("java.class.path"));
             List<Path> shipped = new ArrayList<>(bundleJars);
             List<Path> later = List.of();
+            List<Path> window = List.of();
             List<Path> installedOnly = List.of();
             Set<String> heldBack = Set.of();
             Set<String> early = new HashSet<>();
@@ -177,6 +189,9 @@ public final class FelixRuntime implements AutoCloseable {
             if (workbench) {
                 shipped.addAll(0, desktop);
                 desktop.forEach(jar -> early.add(ShippedBundles.location(jar)));
+                // The window's bundles and what they resolve against or need are installed first; the geometries,
+                // techniques, importers and the rest once the window is up, so that they do not compete with it.
+                window = desktop;
             } else if (plugins) {
                 installedOnly = desktop;
             } else {
@@ -208,8 +223,8 @@ public final class FelixRuntime implements AutoCloseable {
             StartupTrace.step("framework constructed");
             framework.start();
             StartupTrace.step("framework started (system bundle resolved)");
-            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, later, installedOnly,
-                    heldBack, Set.copyOf(early), needed, connected, log);
+            return new FelixRuntime(framework, storage, pluginsDir, pluginsAtLaunch, shipped, later, window,
+                    manifests, installedOnly, heldBack, Set.copyOf(early), needed, connected, log);
         } catch (IOException | BundleException | RuntimeException e) {
             if (framework != null) {
                 stop(framework);
@@ -219,9 +234,23 @@ public final class FelixRuntime implements AutoCloseable {
         }
     }
 
-    /** Installed once the framework runs, so that a bundle that cannot be installed says why. */
+    /**
+     * Installed once the framework runs, so that a bundle that cannot be installed says why. The workbench's window
+     * layer is worked out here, on the thread that installs, since the window's display is being set up meanwhile.
+     */
     private void installAll() {
         List<String> problems = new ArrayList<>();
+        List<Path> shipped = this.shipped;
+        if (!window.isEmpty()) {
+            Set<Path> seeds = Set.copyOf(window);
+            List<Path> first = manifests.with(window).layer(shipped, seeds::contains);
+            if (first.size() < shipped.size()) {
+                List<Path> rest = new ArrayList<>(shipped);
+                rest.removeAll(first);
+                afterWindow = List.copyOf(rest);
+                shipped = first;
+            }
+        }
         toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), shipped, installedOnly, heldBack,
                 needed, locations, problems);
         if (!later.isEmpty() && anyUnresolved()) {
@@ -229,6 +258,16 @@ public final class FelixRuntime implements AutoCloseable {
             StartupTrace.step("the help layer did not resolve alone; installing every shipped bundle");
             List<Path> all = new ArrayList<>(shipped);
             all.addAll(later);
+            problems.clear();
+            toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), all, installedOnly, heldBack,
+                    needed, locations, problems);
+        }
+        if (!afterWindow.isEmpty() && anyUnresolved()) {
+            // The window's layer missed something it resolves against: install everything now, as before.
+            StartupTrace.step("the window's bundles did not resolve alone; installing every shipped bundle");
+            List<Path> all = new ArrayList<>(shipped);
+            all.addAll(afterWindow);
+            afterWindow = List.of();
             problems.clear();
             toStart = ShippedBundles.installAndResolve(framework.getBundleContext(), all, installedOnly, heldBack,
                     needed, locations, problems);
@@ -247,7 +286,24 @@ public final class FelixRuntime implements AutoCloseable {
 
     private void startBundles() {
         List<String> problems = new ArrayList<>(startProblems);
-        ShippedBundles.start(toStart, early, problems, beforeTheRest);
+        Runnable once = new Runnable() {
+            private boolean ran;
+
+            @Override
+            public void run() {
+                if (!ran) {
+                    ran = true;
+                    beforeTheRest.run();
+                }
+            }
+        };
+        ShippedBundles.start(toStart, early, problems, once);
+        if (!afterWindow.isEmpty()) {
+            once.run();
+            List<Bundle> rest = ShippedBundles.installAndResolve(framework.getBundleContext(), afterWindow, List.of(),
+                    heldBack, needed, locations, problems);
+            ShippedBundles.start(rest, Set.of(), problems, () -> { });
+        }
         startProblems = List.copyOf(problems);
     }
 

@@ -62,6 +62,13 @@ final class ShippedManifests {
         return new ShippedManifests(headers);
     }
 
+    /** These manifests and those of {@code more}, read now. */
+    ShippedManifests with(List<Path> more) {
+        Map<Path, Map<String, String>> all = new LinkedHashMap<>(headers);
+        all.putAll(read(more).headers);
+        return new ShippedManifests(all);
+    }
+
     /** The packages the modules of the JVM's boot layer export to all. */
     static Set<String> platformPackages() {
         Set<String> packages = new java.util.HashSet<>();
@@ -135,12 +142,21 @@ final class ShippedManifests {
      */
     List<Path> helpLayer(List<Path> jars, String seedType) {
         return CommandLayer.closure(jars, jar -> wiring(jar).provides(seedType),
-                (from, to) -> wiring(from).needs(wiring(to)));
+                (from, to) -> wiring(from).needs(wiring(to), false));
+    }
+
+    /**
+     * The jars of {@code jars} that {@code seed} picks and, transitively, those they resolve against or cannot work
+     * without ({@link #helpLayer}'s relations), the exporters of packages they import optionally too: installed and
+     * resolved without the others, they are wired as they would be with every jar there. In the order given.
+     */
+    List<Path> layer(List<Path> jars, java.util.function.Predicate<Path> seed) {
+        return CommandLayer.closure(jars, seed, (from, to) -> wiring(from).needs(wiring(to), true));
     }
 
     /** Whether {@code from} cannot resolve or work without {@code to}. A jar with unknown headers needs everything. */
     boolean needs(Path from, Path to) {
-        return !from.equals(to) && wiring(from).needs(wiring(to));
+        return !from.equals(to) && wiring(from).needs(wiring(to), false);
     }
 
     /** What one jar's manifest says it offers and needs, parsed once. */
@@ -210,14 +226,18 @@ final class ShippedManifests {
             return false;
         }
 
-        boolean needs(Wiring to) {
+        /** @param optionalImports whether the exporters of packages imported optionally count as well */
+        boolean needs(Wiring to, boolean optionalImports) {
+            if (this == to) {
+                return false;
+            }
             if (!known || !to.known) {
                 return true;
             }
             if (to.host != null && to.host.equals(name)) {
                 return true; // a host brings its fragments
             }
-            for (String p : imports) {
+            for (String p : optionalImports ? allImports : imports) {
                 if (to.exports.contains(p)) {
                     return true;
                 }

@@ -76,6 +76,12 @@ class ShippedManifestsTest {
         List<Path> all = List.of(other, scr, extra, fragment, lib, store, cmd);
         ShippedManifests manifests = ShippedManifests.read(all);
         assertEquals(List.of(scr, fragment, lib, store, cmd), manifests.helpLayer(all, COMMAND));
+        // The workbench's first layer also holds the exporter of what is imported optionally (extra exports opt.q),
+        // so that it is wired as with every jar there; an optional service (api.Extra) alone would not pull it in.
+        assertEquals(List.of(scr, extra, fragment, lib, store, cmd), manifests.layer(all, cmd::equals));
+        // Manifests read later join those read before.
+        ShippedManifests part = ShippedManifests.read(List.of(other, scr, extra, fragment, lib, store));
+        assertEquals(List.of(scr, extra, fragment, lib, store, cmd), part.with(List.of(cmd)).layer(all, cmd::equals));
     }
 
     /** A jar whose manifest cannot be read is taken to need, and be needed by, everything: nothing is left out. */
