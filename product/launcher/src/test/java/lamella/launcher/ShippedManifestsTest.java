@@ -3,6 +3,7 @@ package lamella.launcher;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -82,6 +83,27 @@ class ShippedManifestsTest {
         // Manifests read later join those read before.
         ShippedManifests part = ShippedManifests.read(List.of(other, scr, extra, fragment, lib, store));
         assertEquals(List.of(scr, extra, fragment, lib, store, cmd), part.with(List.of(cmd)).layer(all, cmd::equals));
+    }
+
+    /**
+     * bnd's reference filters, {@code (objectClass=TYPE)}, are matched by the type's name; any other filter as the
+     * framework reads it, and one it cannot read counts as met.
+     */
+    @Test
+    void requirementsMatchTheirFiltersWhetherPlainTypesOrNot() {
+        assertEquals("a.b.C", ShippedManifests.Requirement.onlyType("(objectClass=a.b.C)"));
+        assertNull(ShippedManifests.Requirement.onlyType("(objectClass=a.b.*)"));
+        assertNull(ShippedManifests.Requirement.onlyType("(&(objectClass=a.b.C)(x=1))"));
+        assertNull(ShippedManifests.Requirement.onlyType("(objectClass=)"));
+        Map<String, Object> store = Map.of("objectClass", List.of("api.Other", "api.Store"));
+        assertTrue(ShippedManifests.Requirement.of("osgi.service", "(objectClass=api.Store)").matches(store));
+        assertFalse(ShippedManifests.Requirement.of("osgi.service", "(objectClass=api.Extra)").matches(store));
+        assertTrue(ShippedManifests.Requirement.of("osgi.service", "(objectClass=api.St*)").matches(store));
+        assertFalse(ShippedManifests.Requirement.of("osgi.service", "(&(objectClass=api.Store)(x=1))")
+                .matches(store));
+        assertTrue(ShippedManifests.Requirement.of("osgi.service", "(objectClass=api.Store").matches(store),
+                "an unreadable filter is the framework's to judge");
+        assertTrue(ShippedManifests.Requirement.of("osgi.service", null).matches(store));
     }
 
     /** A jar whose manifest cannot be read is taken to need, and be needed by, everything: nothing is left out. */
