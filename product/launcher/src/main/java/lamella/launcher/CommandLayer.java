@@ -2,11 +2,13 @@ package lamella.launcher;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Deque;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.function.BiPredicate;
+import java.util.function.Function;
 import java.util.function.Predicate;
 
 import org.osgi.framework.Bundle;
@@ -49,6 +51,25 @@ final class CommandLayer {
      * @param needs whether the first needs the second
      */
     static <T> List<T> closure(List<T> all, Predicate<T> seed, BiPredicate<T, T> needs) {
+        return closureOf(all, seed, from -> {
+            List<T> needed = new ArrayList<>();
+            for (T to : all) {
+                if (needs.test(from, to)) {
+                    needed.add(to);
+                }
+            }
+            return needed;
+        });
+    }
+
+    /**
+     * The members of {@code all} that a seed is, or that one of them needs, directly or through others; in the order
+     * of {@code all}.
+     *
+     * @param needed what a member needs directly (itself, and non-members, are passed over)
+     */
+    static <T> List<T> closureOf(List<T> all, Predicate<T> seed, Function<T, Collection<T>> needed) {
+        Set<T> members = new java.util.HashSet<>(all);
         Set<T> reached = new LinkedHashSet<>();
         Deque<T> next = new ArrayDeque<>();
         for (T t : all) {
@@ -58,9 +79,8 @@ final class CommandLayer {
         }
         while (!next.isEmpty()) {
             T from = next.poll();
-            for (T to : all) {
-                if (!reached.contains(to) && needs.test(from, to)) {
-                    reached.add(to);
+            for (T to : needed.apply(from)) {
+                if (!to.equals(from) && members.contains(to) && reached.add(to)) {
                     next.add(to);
                 }
             }

@@ -186,50 +186,31 @@ final class ShippedManifests {
                 }
             }
         }
-        Set<Path> reached = new java.util.HashSet<>();
-        java.util.Deque<Path> next = new java.util.ArrayDeque<>();
-        for (Path jar : jars) {
-            if (seed.test(jar) && reached.add(jar)) {
-                next.add(jar);
-            }
-        }
-        while (!next.isEmpty()) {
-            Path from = next.poll();
+        return CommandLayer.closureOf(jars, seed, from -> {
             Wiring w = wiring(from);
             List<Path> needed = new ArrayList<>(unknown);
             if (!w.known()) {
                 needed.addAll(jars); // unknown headers: it may need anything
-            } else {
-                for (String p : optionalImports ? w.allImports() : w.imports()) {
-                    needed.addAll(exporters.getOrDefault(p, List.of()));
-                }
-                for (String b : w.requiredBundles()) {
-                    needed.addAll(named.getOrDefault(b, List.of()));
-                }
-                if (w.name() != null) {
-                    needed.addAll(fragments.getOrDefault(w.name(), List.of())); // a host brings its fragments
-                }
-                for (Requirement r : w.requirements()) {
-                    for (Map.Entry<Path, Integer> offer : offers.getOrDefault(r.namespace, List.of())) {
-                        if (r.matches(wiring(offer.getKey()).typed().get(offer.getValue()))) {
-                            needed.add(offer.getKey());
-                        }
+                return needed;
+            }
+            for (String p : optionalImports ? w.allImports() : w.imports()) {
+                needed.addAll(exporters.getOrDefault(p, List.of()));
+            }
+            for (String b : w.requiredBundles()) {
+                needed.addAll(named.getOrDefault(b, List.of()));
+            }
+            if (w.name() != null) {
+                needed.addAll(fragments.getOrDefault(w.name(), List.of())); // a host brings its fragments
+            }
+            for (Requirement r : w.requirements()) {
+                for (Map.Entry<Path, Integer> offer : offers.getOrDefault(r.namespace, List.of())) {
+                    if (r.matches(wiring(offer.getKey()).typed().get(offer.getValue()))) {
+                        needed.add(offer.getKey());
                     }
                 }
             }
-            for (Path to : needed) {
-                if (!to.equals(from) && reached.add(to)) {
-                    next.add(to);
-                }
-            }
-        }
-        List<Path> ordered = new ArrayList<>();
-        for (Path jar : jars) {
-            if (reached.contains(jar)) {
-                ordered.add(jar);
-            }
-        }
-        return ordered;
+            return needed;
+        });
     }
 
     /** Whether {@code from} cannot resolve or work without {@code to}. A jar with unknown headers needs everything. */
