@@ -350,8 +350,11 @@ class WorkbenchIT {
         String fit = waitFor(() -> ask("texts fit"), t -> t.contains("Converged") || t.contains("Did not converge")
                 || t.contains("failed"));
         assertTrue(fit.contains("Converged after"), fit);
+        // The demo's joint fit: its reduced χ² is over every dataset, the signal panel's over the one shown.
+        assertTrue(fit.matches("(?s).*reduced χ² \\S+ over all 3 datasets together.*"), fit);
         assertEquals("ok", ask("front signal"));
         String signal = waitFor(() -> ask("texts signal"), t -> t.contains("Dashed: the best fit of the last fit"));
+        assertTrue(signal.contains("reduced χ² of this dataset alone"), signal);
         for (String size : List.of("1280 800", "1920 1080")) {
             ask("size " + size);
             ask("screenshot " + SHOTS.resolve("fit-best-fit-" + size.replace(' ', 'x') + ".png"));

@@ -393,7 +393,8 @@ final class FitView implements PanelView {
 
     private static String summary(FitOutcome o, String when) {
         String s = (o.converged() ? "Converged" : "Did not converge") + " after " + o.evaluations()
-                + " model evaluations" + when + "; reduced χ² " + NumberText.format(o.reducedChiSquare()) + ".";
+                + " model evaluations" + when + "; reduced χ² " + NumberText.format(o.reducedChiSquare())
+                + (o.datasets().size() > 1 ? " over all " + o.datasets().size() + " datasets together" : "") + ".";
         return o.warnings().isEmpty() ? s : s + " " + String.join(" ", o.warnings());
     }
 
@@ -440,7 +441,8 @@ final class FitView implements PanelView {
             return;
         }
         DatasetFit d = shown.datasets().get(i);
-        XYSeries s = new XYSeries("(data − model)/σ, reduced χ² " + NumberText.format(d.reducedChiSquare()),
+        XYSeries s = new XYSeries("(data − model)/σ, this dataset's reduced χ² "
+                + NumberText.format(d.reducedChiSquare()),
                 false, true);
         for (int k = 0; k < d.x().length; k++) {
             s.add(d.x()[k], (d.data()[k] - d.model()[k]) / d.sigma()[k], false);

@@ -149,11 +149,12 @@ final class SignalView implements PanelView {
             for (int i = 0; i < d.x().length; i++) {
                 bestFit.add(d.x()[i], d.model()[i], false);
             }
-            bestFit.setKey(current ? "best fit (reduced χ² " + NumberText.format(d.reducedChiSquare()) + ")"
-                    : "best fit, out of date (case edited since)");
+            bestFit.setKey(current ? "best fit (this dataset's reduced χ² " + NumberText.format(d.reducedChiSquare())
+                    + ")" : "best fit, out of date (case edited since)");
             renderer.setSeriesPaint(2, current ? PlotLook.seriesPaint(1) : PlotLook.REFERENCE);
-            fitText = current ? " Dashed: the best fit of the last fit (reduced χ² "
-                    + NumberText.format(d.reducedChiSquare()) + ")."
+            // A joint fit's reduced χ² (the Fit panel's) is over every dataset; this one is over the shown one only.
+            fitText = current ? " Dashed: the best fit of the last fit (reduced χ² of this dataset alone "
+                    + NumberText.format(d.reducedChiSquare()) + "; the Fit panel gives the whole fit's)."
                     : " Dashed grey: the last fit's best fit, out of date since the case was edited.";
         } else {
             bestFit.setKey("best fit (none yet)");
