@@ -154,7 +154,10 @@ final class ShippedManifests {
     }
 
     /**
-     * The seeds of {@code jars} and, transitively, the jars they need ({@link Wiring#needs}), in the order given. What
+     * The seeds of {@code jars} and, transitively, the jars they need, in the order given: a jar needs the exporters of
+     * the packages it imports (of those imported optionally too when {@code optionalImports}), the bundles it requires,
+     * its fragments, the providers of its mandatory service and extender requirements, and any jar whose headers are
+     * unknown (one with unknown headers needs every jar). What
      * each jar offers is indexed once (exporters by package, bundles by name, fragments by host, capabilities by
      * namespace), so that a jar's needs are looked up rather than tried against every other jar: the pairwise test,
      * some 1,200 pairs of interpreted set lookups, was half of the help layer's cost at start-up.
@@ -211,11 +214,6 @@ final class ShippedManifests {
             }
             return needed;
         });
-    }
-
-    /** Whether {@code from} cannot resolve or work without {@code to}. A jar with unknown headers needs everything. */
-    boolean needs(Path from, Path to) {
-        return !from.equals(to) && wiring(from).needs(wiring(to), false);
     }
 
     /** What one jar's manifest says it offers and needs, parsed once. */
@@ -280,35 +278,6 @@ final class ShippedManifests {
             for (Clause c : capabilities) {
                 if (c.names().contains(SERVICE_NAMESPACE) && c.values("objectClass").contains(serviceType)) {
                     return true;
-                }
-            }
-            return false;
-        }
-
-        /** @param optionalImports whether the exporters of packages imported optionally count as well */
-        boolean needs(Wiring to, boolean optionalImports) {
-            if (this == to) {
-                return false;
-            }
-            if (!known || !to.known) {
-                return true;
-            }
-            if (to.host != null && to.host.equals(name)) {
-                return true; // a host brings its fragments
-            }
-            for (String p : optionalImports ? allImports : imports) {
-                if (to.exports.contains(p)) {
-                    return true;
-                }
-            }
-            if (to.name != null && requiredBundles.contains(to.name)) {
-                return true;
-            }
-            for (Requirement r : requirements) {
-                for (int i = 0; i < to.capabilities.size(); i++) {
-                    if (to.capabilities.get(i).names().contains(r.namespace) && r.matches(to.typed.get(i))) {
-                        return true;
-                    }
                 }
             }
             return false;
